@@ -1,0 +1,192 @@
+package dev.rootform.symbolic.algebra;
+
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.math.MathContext;
+import java.util.Objects;
+
+/**
+ * An exact rational number p/q in lowest terms with q &gt; 0. Immutable and canonical, so
+ * {@link #equals} is numeric equality.
+ *
+ * @since 0.1
+ */
+public final class Rational implements Comparable<Rational> {
+    public static final Rational ZERO = new Rational(BigInteger.ZERO, BigInteger.ONE);
+    public static final Rational ONE = new Rational(BigInteger.ONE, BigInteger.ONE);
+    public static final Rational MINUS_ONE = new Rational(BigInteger.ONE.negate(), BigInteger.ONE);
+
+    private final BigInteger numerator;
+    private final BigInteger denominator;
+
+    private Rational(BigInteger numerator, BigInteger denominator) {
+        this.numerator = numerator;
+        this.denominator = denominator;
+    }
+
+    /** The rational {@code numerator/denominator}, reduced. @throws ArithmeticException if the denominator is 0. */
+    public static Rational of(BigInteger numerator, BigInteger denominator) {
+        Objects.requireNonNull(numerator, "numerator");
+        Objects.requireNonNull(denominator, "denominator");
+        if (denominator.signum() == 0) {
+            throw new ArithmeticException("division by zero");
+        }
+        if (numerator.signum() == 0) {
+            return ZERO;
+        }
+        BigInteger g = numerator.gcd(denominator);
+        if (denominator.signum() < 0) {
+            g = g.negate();
+        }
+        return new Rational(numerator.divide(g), denominator.divide(g));
+    }
+
+    public static Rational of(BigInteger integer) {
+        return of(integer, BigInteger.ONE);
+    }
+
+    public static Rational of(long integer) {
+        return of(BigInteger.valueOf(integer), BigInteger.ONE);
+    }
+
+    public static Rational of(long numerator, long denominator) {
+        return of(BigInteger.valueOf(numerator), BigInteger.valueOf(denominator));
+    }
+
+    /** The exact value of a decimal such as {@code 0.1} (= 1/10) or {@code 2.5e-3}. */
+    public static Rational of(BigDecimal decimal) {
+        BigInteger unscaled = decimal.unscaledValue();
+        int scale = decimal.scale();
+        return scale >= 0
+                ? of(unscaled, BigInteger.TEN.pow(scale))
+                : of(unscaled.multiply(BigInteger.TEN.pow(-scale)));
+    }
+
+    /**
+     * Parses an integer, a decimal ({@code -0.25}, {@code 1e3}) or a fraction ({@code 3/4}) exactly.
+     *
+     * @throws NumberFormatException if {@code text} is none of these
+     */
+    public static Rational parse(String text) {
+        int slash = text.indexOf('/');
+        if (slash >= 0) {
+            return of(new BigDecimal(text.substring(0, slash).trim()))
+                    .divide(of(new BigDecimal(text.substring(slash + 1).trim())));
+        }
+        return of(new BigDecimal(text.trim()));
+    }
+
+    public BigInteger numerator() {
+        return numerator;
+    }
+
+    public BigInteger denominator() {
+        return denominator;
+    }
+
+    public int signum() {
+        return numerator.signum();
+    }
+
+    public boolean isZero() {
+        return numerator.signum() == 0;
+    }
+
+    public boolean isOne() {
+        return equals(ONE);
+    }
+
+    public boolean isInteger() {
+        return denominator.equals(BigInteger.ONE);
+    }
+
+    public Rational add(Rational other) {
+        if (isZero()) {
+            return other;
+        }
+        if (other.isZero()) {
+            return this;
+        }
+        return of(numerator.multiply(other.denominator).add(other.numerator.multiply(denominator)),
+                denominator.multiply(other.denominator));
+    }
+
+    public Rational subtract(Rational other) {
+        return add(other.negate());
+    }
+
+    public Rational multiply(Rational other) {
+        if (isZero() || other.isZero()) {
+            return ZERO;
+        }
+        return of(numerator.multiply(other.numerator), denominator.multiply(other.denominator));
+    }
+
+    public Rational multiply(long factor) {
+        return multiply(of(factor));
+    }
+
+    /** @throws ArithmeticException if {@code other} is zero */
+    public Rational divide(Rational other) {
+        return of(numerator.multiply(other.denominator), denominator.multiply(other.numerator));
+    }
+
+    public Rational negate() {
+        return isZero() ? this : new Rational(numerator.negate(), denominator);
+    }
+
+    public Rational abs() {
+        return signum() < 0 ? negate() : this;
+    }
+
+    /** @throws ArithmeticException if this is zero */
+    public Rational inverse() {
+        return ONE.divide(this);
+    }
+
+    /** this^exponent for any integer exponent. @throws ArithmeticException for 0 to a negative power */
+    public Rational pow(int exponent) {
+        if (exponent < 0) {
+            return inverse().pow(-exponent);
+        }
+        return of(numerator.pow(exponent), denominator.pow(exponent));
+    }
+
+    /** The integer value. @throws ArithmeticException if this is not an integer */
+    public BigInteger toBigInteger() {
+        if (!isInteger()) {
+            throw new ArithmeticException(this + " is not an integer");
+        }
+        return numerator;
+    }
+
+    /** The value rounded to {@code context}; approximate unless the decimal expansion terminates in time. */
+    public BigDecimal toBigDecimal(MathContext context) {
+        return new BigDecimal(numerator).divide(new BigDecimal(denominator), context);
+    }
+
+    public double doubleValue() {
+        return toBigDecimal(MathContext.DECIMAL64).doubleValue();
+    }
+
+    @Override
+    public int compareTo(Rational other) {
+        return numerator.multiply(other.denominator).compareTo(other.numerator.multiply(denominator));
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Rational r && numerator.equals(r.numerator) && denominator.equals(r.denominator);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * numerator.hashCode() + denominator.hashCode();
+    }
+
+    /** {@code p} or {@code p/q}. */
+    @Override
+    public String toString() {
+        return isInteger() ? numerator.toString() : numerator + "/" + denominator;
+    }
+}

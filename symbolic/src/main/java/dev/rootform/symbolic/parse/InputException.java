@@ -1,0 +1,34 @@
+package dev.rootform.symbolic.parse;
+
+/**
+ * Input the tool cannot accept: a syntax error, an unknown name, or an equation outside the scope
+ * (nonlinear, variable coefficients, non-integer shifts). Carries the offending text and the
+ * 0-based position of the problem in it, so the caller can print a caret under it.
+ *
+ * @since 0.1
+ */
+public final class InputException extends RuntimeException {
+    private static final long serialVersionUID = 1L;
+
+    private final String source;
+    private final int position;
+
+    /**
+     * @param message one line naming the problem, without the position
+     * @param source the text that was being read
+     * @param position 0-based index into {@code source}, or -1 if the problem has no single place
+     */
+    public InputException(String message, String source, int position) {
+        super(message);
+        this.source = source;
+        this.position = position;
+    }
+
+    public String source() {
+        return source;
+    }
+
+    public int position() {
+        return position;
+    }
+}
