@@ -1,0 +1,104 @@
+package dev.rootform.symbolic.solve;
+
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.parse.InputException;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Reduces k conditions given at any points to the {@link InitialState} at one origin, exactly.
+ *
+ * <p>On the solution space of an operator with characteristic polynomial χ, L^a acts as
+ * (λ^a mod χ)(L), so a condition x[origin + a] = v (difference) or y^(d)(t0) = v (differential)
+ * is the rational linear equation Σ_j [λ^a mod χ]_j·v_j = v in the initial values. The k×k system is
+ * solved by exact elimination; λ^a mod χ is computed by binary powering, O(k² log a).
+ *
+ * <p>The origin is min(0, lowest condition index) for difference equations. A differential
+ * equation's conditions must all be at one point t0, which becomes the origin.
+ *
+ * @since 0.1
+ */
+public final class ConditionFitter {
+    private ConditionFitter() {
+    }
+
+    /**
+     * @throws InputException if the number of conditions is not the order, the conditions are at
+     *     several points of a differential equation, or they are inconsistent or do not determine
+     *     the solution
+     */
+    public static InitialState fit(LinearEquation equation, List<Condition> conditions) {
+        int k = equation.order();
+        if (conditions.size() != k) {
+            throw new InputException(conditions.size() + " condition" + (conditions.size() == 1 ? "" : "s")
+                    + " given, but an equation of order " + k + " needs exactly " + k, "", -1);
+        }
+        Rational origin = origin(equation.domain(), conditions);
+        RationalPolynomial chi = equation.characteristicPolynomial();
+        List<List<Rational>> rows = new ArrayList<>();
+        List<Rational> rhs = new ArrayList<>();
+        for (Condition c : conditions) {
+            long power = equation.domain() == Domain.DIFFERENCE
+                    ? c.at().subtract(origin).toBigInteger().longValueExact()
+                    : c.derivative();
+            RationalPolynomial reduced = powerModulo(power, chi);
+            List<Rational> row = new ArrayList<>(k);
+            for (int j = 0; j < k; j++) {
+                row.add(reduced.coefficient(j));
+            }
+            rows.add(row);
+            rhs.add(c.value());
+        }
+        LinearSystem.Result result = LinearSystem.solve(rows, rhs);
+        if (!result.consistent()) {
+            throw new InputException("the conditions are inconsistent: no solution satisfies all of them", "", -1);
+        }
+        if (!result.unique()) {
+            throw new InputException("the conditions do not determine the solution: only " + result.rank()
+                    + " of the " + k + " are independent", "", -1);
+        }
+        return new InitialState(origin, result.solution());
+    }
+
+    private static Rational origin(Domain domain, List<Condition> conditions) {
+        if (domain == Domain.DIFFERENCE) {
+            Rational lowest = Rational.ZERO;
+            for (Condition c : conditions) {
+                if (!c.at().isInteger()) {
+                    throw new InputException("condition index " + c.at() + " must be an integer", "", -1);
+                }
+                lowest = c.at().compareTo(lowest) < 0 ? c.at() : lowest;
+            }
+            return lowest;
+        }
+        Rational point = conditions.get(0).at();
+        for (Condition c : conditions) {
+            if (!c.at().equals(point)) {
+                throw new InputException("conditions at several points (" + point + " and " + c.at()
+                        + ") make a boundary-value problem, which is not supported yet; give all at one point", "", -1);
+            }
+        }
+        return point;
+    }
+
+    /** λ^power mod χ by binary powering. */
+    static RationalPolynomial powerModulo(long power, RationalPolynomial chi) {
+        RationalPolynomial result = RationalPolynomial.ONE.mod(chi);
+        RationalPolynomial base = RationalPolynomial.X.mod(chi);
+        long e = power;
+        while (e > 0) {
+            if ((e & 1) == 1) {
+                result = result.multiply(base).mod(chi);
+            }
+            e >>= 1;
+            if (e > 0) {
+                base = base.multiply(base).mod(chi);
+            }
+        }
+        return result;
+    }
+}

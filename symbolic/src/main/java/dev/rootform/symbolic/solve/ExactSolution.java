@@ -1,0 +1,90 @@
+package dev.rootform.symbolic.solve;
+
+import dev.rootform.symbolic.algebra.NumberField;
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.LinearEquation;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * The fitted solution of a homogeneous equation in exact form: a sum of {@link Component}s, one
+ * per irreducible factor of the characteristic polynomial with nonzero roots.
+ *
+ * <p>Difference equations: the formula holds for n &ge; {@code validFrom}; the values
+ * x[origin .. validFrom-1] (present when λ = 0 is a root of multiplicity m, then
+ * validFrom = origin + m) are listed in {@code leadingValues}. Differential equations: the basis is
+ * written in u = t - origin and {@code leadingValues} is empty.
+ *
+ * @since 0.1
+ */
+public record ExactSolution(LinearEquation equation, Rational origin, long validFrom, List<Rational> leadingValues,
+        List<Component> components) {
+
+    public ExactSolution {
+        Objects.requireNonNull(equation, "equation");
+        Objects.requireNonNull(origin, "origin");
+        leadingValues = List.copyOf(leadingValues);
+        components = List.copyOf(components);
+    }
+
+    public Domain domain() {
+        return equation.domain();
+    }
+
+    /**
+     * The exact value x[n] of a difference-equation solution, for n &ge; origin: a listed value, or
+     * Σ_components Tr(α^n·Σ_j c_j n^j). Cost O(d² log n) per component of degree d.
+     *
+     * @throws IllegalArgumentException if n is below the origin or this is a differential equation
+     */
+    public Rational valueAt(long n) {
+        if (domain() != Domain.DIFFERENCE) {
+            throw new IllegalArgumentException("valueAt(long) is for difference equations");
+        }
+        long first = origin.toBigInteger().longValueExact();
+        if (n < first) {
+            throw new IllegalArgumentException("index " + n + " is below the first index " + first);
+        }
+        if (n < validFrom) {
+            return leadingValues.get((int) (n - first));
+        }
+        Rational nn = Rational.of(n);
+        Rational sum = Rational.ZERO;
+        for (Component c : components) {
+            NumberField k = new NumberField(c.factor().polynomial());
+            RationalPolynomial weight = RationalPolynomial.ZERO;
+            for (int j = c.coefficients().size() - 1; j >= 0; j--) {
+                weight = weight.multiply(nn).add(c.coefficients().get(j));
+            }
+            sum = sum.add(k.trace(k.multiply(weight, k.pow(k.generator(), n))));
+        }
+        return sum;
+    }
+
+    /**
+     * The exact derivative y^(d)(origin) of a differential-equation solution:
+     * Σ_components Tr(Σ_{i&le;d} c_i·d!/(d-i)!·α^{d-i}).
+     *
+     * @throws IllegalArgumentException if this is a difference equation or d &lt; 0
+     */
+    public Rational derivativeAtOrigin(int d) {
+        if (domain() != Domain.DIFFERENTIAL || d < 0) {
+            throw new IllegalArgumentException("derivativeAtOrigin needs a differential equation and d >= 0");
+        }
+        Rational sum = Rational.ZERO;
+        for (Component c : components) {
+            NumberField k = new NumberField(c.factor().polynomial());
+            RationalPolynomial total = RationalPolynomial.ZERO;
+            Rational falling = Rational.ONE;
+            for (int i = 0; i < c.coefficients().size() && i <= d; i++) {
+                RationalPolynomial term = k.multiply(c.coefficients().get(i), k.pow(k.generator(), d - i));
+                total = total.add(term.multiply(falling));
+                falling = falling.multiply(d - i);
+            }
+            sum = sum.add(k.trace(total));
+        }
+        return sum;
+    }
+}
