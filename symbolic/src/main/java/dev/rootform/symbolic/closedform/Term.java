@@ -1,0 +1,49 @@
+package dev.rootform.symbolic.closedform;
+
+import dev.rootform.symbolic.algebra.RationalPolynomial;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * One term of a closed form, in the variable v = t - t0 (differential) or v = n (difference).
+ * Every term is real.
+ *
+ * @since 0.1
+ */
+public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.RootSum {
+    /** The power i of the factor v^i. */
+    int power();
+
+    /** coefficient·v^power·e^{rate·v} (differential) or coefficient·v^power·rate^v (difference). */
+    record Exponential(Coefficient coefficient, int power, Surd rate) implements Term {
+        public Exponential {
+            Objects.requireNonNull(coefficient, "coefficient");
+            Objects.requireNonNull(rate, "rate");
+        }
+    }
+
+    /**
+     * v^power·e^{growth·v}·(cosine·cos(ω v) + sine·sin(ω v)) (differential; growth = real part of
+     * the root, ω = imaginary part) or v^power·growth^v·(cosine·cos(θ v) + sine·sin(θ v))
+     * (difference; growth = modulus of the root, θ = its argument in (0, π)).
+     */
+    record Oscillating(Coefficient cosine, Coefficient sine, int power, Surd growth, Angle angle) implements Term {
+        public Oscillating {
+            Objects.requireNonNull(cosine, "cosine");
+            Objects.requireNonNull(sine, "sine");
+            Objects.requireNonNull(growth, "growth");
+            Objects.requireNonNull(angle, "angle");
+        }
+    }
+
+    /**
+     * Σ over the roots α of the irreducible {@code factor} of c(α)·v^power·e^{αv} (or α^v), with
+     * c(α) = Σ_j coefficients[j]·α^j; real because the sum runs over all conjugates.
+     */
+    record RootSum(RationalPolynomial factor, List<Coefficient> coefficients, int power) implements Term {
+        public RootSum {
+            Objects.requireNonNull(factor, "factor");
+            coefficients = List.copyOf(coefficients);
+        }
+    }
+}

@@ -1,0 +1,40 @@
+package dev.rootform.symbolic.solve;
+
+import dev.rootform.symbolic.algebra.Factor;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.ExactRoot;
+import dev.rootform.symbolic.model.Problem;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * Everything the exact layer knows about a solved problem.
+ *
+ * @param problem the input
+ * @param characteristic χ(λ) = Σ a_j λ^j
+ * @param factors monic irreducible factors of χ with multiplicities
+ * @param roots the exact roots, factor by factor
+ * @param closedForm the real closed form that renderers walk
+ * @param exact the fitted solution in number-field form (empty for a general solution)
+ * @param checks the exact verification steps, all run
+ * @since 0.1
+ */
+public record Solution(Problem problem, RationalPolynomial characteristic, List<Factor> factors,
+        List<ExactRoot> roots, ClosedForm closedForm, Optional<ExactSolution> exact, List<Check> checks) {
+    public Solution {
+        Objects.requireNonNull(problem, "problem");
+        Objects.requireNonNull(characteristic, "characteristic");
+        factors = List.copyOf(factors);
+        roots = List.copyOf(roots);
+        Objects.requireNonNull(closedForm, "closedForm");
+        Objects.requireNonNull(exact, "exact");
+        checks = List.copyOf(checks);
+    }
+
+    /** True when every check ran and held. */
+    public boolean verified() {
+        return checks.stream().allMatch(Check::passed);
+    }
+}
