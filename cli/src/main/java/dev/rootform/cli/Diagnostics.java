@@ -1,0 +1,20 @@
+package dev.rootform.cli;
+
+import dev.rootform.symbolic.parse.InputException;
+
+/** Formats problems for stderr: one line naming the problem, then the input with a caret under the place. */
+final class Diagnostics {
+    private Diagnostics() {
+    }
+
+    static String describe(InputException e) {
+        StringBuilder sb = new StringBuilder("rootform: ").append(e.getMessage());
+        if (e.position() >= 0 && e.source() != null && !e.source().isEmpty()) {
+            int column = Math.min(e.position(), e.source().length());
+            sb.append(" (at column ").append(column + 1).append(')').append(System.lineSeparator())
+                    .append("  ").append(e.source()).append(System.lineSeparator())
+                    .append("  ").append(" ".repeat(column)).append('^');
+        }
+        return sb.toString();
+    }
+}

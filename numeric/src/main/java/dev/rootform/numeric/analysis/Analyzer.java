@@ -1,0 +1,170 @@
+package dev.rootform.numeric.analysis;
+
+import dev.rootform.numeric.check.OdeReference;
+import dev.rootform.numeric.roots.Enclosure;
+import dev.rootform.numeric.roots.RootFinder;
+import dev.rootform.symbolic.algebra.Factor;
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.closedform.ExactRoot;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.solve.Check;
+import dev.rootform.symbolic.solve.ExactSolution;
+import dev.rootform.symbolic.solve.Solution;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.apfloat.Apfloat;
+import org.apfloat.ApfloatMath;
+
+/**
+ * Numeric facts about an exact solution, each to a stated number of significant digits: root
+ * values (exact forms rounded, or certified enclosures for roots kept implicit), values at points
+ * (exact for sequences; for functions, evaluated in apfloat at a working precision that is raised
+ * until two precisions agree), and an independent cross-check of differential equations against
+ * Commons Math's Dormand–Prince 8(5,3) integrator.
+ *
+ * @since 0.1
+ */
+public final class Analyzer {
+    public static final int DEFAULT_DIGITS = 30;
+    /** Guard digits above the requested ones for function values. */
+    static final int GUARD_DIGITS = 20;
+    /** Highest working precision tried for one function value. */
+    static final int MAX_WORKING_DIGITS = 5000;
+    /** Points t0 + h where the integrator cross-check compares values. */
+    static final double[] CHECK_OFFSETS = {0.25, 0.5, 1.0, 2.0};
+    /** Relative agreement required of the double-precision integrator. */
+    static final double CHECK_TOLERANCE = 1e-7;
+
+    private final int digits;
+
+    /** @param digits significant digits of every numeric output, 1 or more */
+    public Analyzer(int digits) {
+        if (digits < 1) {
+            throw new IllegalArgumentException("digits (" + digits + ") must be >= 1");
+        }
+        this.digits = digits;
+    }
+
+    /**
+     * @param points where to evaluate the solution
+     * @throws InputException if values are asked of a general solution or a sequence at a
+     *     non-integer index or below its first index
+     */
+    public Analysis analyze(Solution solution, List<Rational> points) {
+        Map<RationalPolynomial, List<Enclosure>> enclosures = new HashMap<>();
+        for (Factor f : solution.factors()) {
+            if (f.degree() >= 3) {
+                enclosures.put(f.polynomial(), new RootFinder(digits + GUARD_DIGITS).roots(f.polynomial()));
+            }
+        }
+        List<RootApproximation> roots = new ArrayList<>();
+        for (ExactRoot r : solution.roots()) {
+            roots.add(approximate(r, enclosures));
+        }
+        List<PointValue> values = new ArrayList<>();
+        List<Check> checks = new ArrayList<>();
+        if (!points.isEmpty() && solution.exact().isEmpty()) {
+            throw new InputException("values need conditions: the general solution has free constants", "", -1);
+        }
+        Optional<ExactSolution> exact = solution.exact();
+        if (exact.isPresent()) {
+            ExactSolution s = exact.get();
+            for (Rational p : points) {
+                values.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p));
+            }
+            if (s.domain() == Domain.DIFFERENTIAL) {
+                checks.add(integratorCheck(s));
+            }
+        }
+        return new Analysis(roots, values, checks, List.of());
+    }
+
+    private RootApproximation approximate(ExactRoot root, Map<RationalPolynomial, List<Enclosure>> enclosures) {
+        MathContext mc = new MathContext(digits);
+        if (root instanceof ExactRoot.Explicit e) {
+            return new RootApproximation(root, e.re().toBigDecimal(mc), e.im().toBigDecimal(mc), BigDecimal.ZERO);
+        }
+        if (root instanceof ExactRoot.Implicit i) {
+            Enclosure z = enclosures.get(i.factor()).get(i.index() - 1);
+            return new RootApproximation(root, z.re().round(mc), z.im().round(mc), z.radius());
+        }
+        throw new AssertionError(root);
+    }
+
+    private PointValue sequenceValue(ExactSolution s, Rational at) {
+        if (!at.isInteger()) {
+            throw new InputException("value at " + at + ": a sequence has values only at integer indices", "", -1);
+        }
+        long n = at.toBigInteger().longValueExact();
+        if (n < s.origin().toBigInteger().longValueExact()) {
+            throw new InputException("value at " + n + ": below the first index " + s.origin(), "", -1);
+        }
+        Rational v = s.valueAt(n);
+        return new PointValue(at, v.toBigDecimal(new MathContext(digits)), Optional.of(v));
+    }
+
+    private PointValue functionValue(ExactSolution s, Rational t) {
+        if (t.equals(s.origin())) {
+            Rational v = s.derivativeAtOrigin(0);
+            return new PointValue(t, v.toBigDecimal(new MathContext(digits)), Optional.of(v));
+        }
+        int working = digits + GUARD_DIGITS;
+        while (working <= MAX_WORKING_DIGITS) {
+            Apfloat[] low = evaluate(s, t, working);
+            Apfloat[] high = evaluate(s, t, working + GUARD_DIGITS);
+            Apfloat difference = ApfloatMath.abs(low[0].subtract(high[0]));
+            Apfloat relative = ApfloatMath.abs(high[0]).multiply(new Apfloat("1e-" + (digits + 2), working));
+            Apfloat floor = high[1].multiply(new Apfloat("1e-" + (working - GUARD_DIGITS / 2), working));
+            if (difference.compareTo(relative) <= 0 || difference.compareTo(floor) <= 0) {
+                return new PointValue(t, FunctionEvaluator.toBigDecimal(high[0], digits), Optional.empty());
+            }
+            working += GUARD_DIGITS + (int) Math.ceil(
+                    ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10));
+        }
+        throw new IllegalStateException("value at t = " + t + " did not settle within " + MAX_WORKING_DIGITS + " digits");
+    }
+
+    private static Apfloat[] evaluate(ExactSolution s, Rational t, int working) {
+        Map<RationalPolynomial, List<Enclosure>> roots = new HashMap<>();
+        for (var c : s.components()) {
+            RationalPolynomial f = c.factor().polynomial();
+            if (f.degree() > 1) {
+                roots.put(f, new RootFinder(working).roots(f));
+            }
+        }
+        return new FunctionEvaluator(s, roots).value(t, working);
+    }
+
+    private Check integratorCheck(ExactSolution s) {
+        int k = s.equation().order();
+        List<Rational> initial = new ArrayList<>(k);
+        for (int d = 0; d < k; d++) {
+            initial.add(s.derivativeAtOrigin(d));
+        }
+        double t0 = s.origin().doubleValue();
+        double[] points = new double[CHECK_OFFSETS.length];
+        for (int i = 0; i < points.length; i++) {
+            points[i] = t0 + CHECK_OFFSETS[i];
+        }
+        double[] reference = OdeReference.values(s.equation().coefficients(), s.origin(), initial, points);
+        Analyzer doubles = new Analyzer(17);
+        double scale = 1;
+        double worst = 0;
+        for (int i = 0; i < points.length; i++) {
+            double closed = doubles.functionValue(s, Rational.of(BigDecimal.valueOf(points[i]))).value().doubleValue();
+            scale = Math.max(scale, Math.abs(closed));
+            worst = Math.max(worst, Math.abs(closed - reference[i]));
+        }
+        boolean passed = worst <= CHECK_TOLERANCE * scale;
+        return new Check("agrees with numerical integration", passed, String.format(
+                "Dormand-Prince 8(5,3) (Commons Math) at t0 + %s: largest difference %.2e (tolerance %.0e relative)",
+                java.util.Arrays.toString(CHECK_OFFSETS), worst, CHECK_TOLERANCE));
+    }
+}
