@@ -34,7 +34,7 @@ class RandomCorpusPropertyTest {
             List<Rational> a = chi.multiply(randomRational(random, true)).coefficients();
             LinearEquation eq = new LinearEquation(domain, domain == Domain.DIFFERENCE ? "x" : "y",
                     domain == Domain.DIFFERENCE ? "n" : "t", a, 0, List.of());
-            List<Condition> conditions = randomConditions(random, domain, eq.order());
+            List<Condition> conditions = randomConditions(random, domain, eq.order(), chi.coefficient(0).isZero());
             String label = "case " + i + " (seed " + SEED + "): " + domain + " χ = " + chi;
             Solution s = Solver.solve(new Problem(eq, conditions));
             for (Check c : s.checks()) {
@@ -100,10 +100,11 @@ class RandomCorpusPropertyTest {
         return r;
     }
 
-    static List<Condition> randomConditions(Random random, Domain domain, int order) {
+    static List<Condition> randomConditions(Random random, Domain domain, int order, boolean zeroRoot) {
         List<Condition> conditions = new ArrayList<>();
         Rational t0 = Rational.of(random.nextInt(5) - 2, 1 + random.nextInt(2));
-        int first = random.nextInt(7) - 3;
+        // with λ = 0 a root the first values are free, so conditions must start at the first index
+        int first = zeroRoot ? -random.nextInt(4) : random.nextInt(7) - 3;
         for (int j = 0; j < order; j++) {
             Rational value = randomRational(random, false);
             conditions.add(domain == Domain.DIFFERENCE
