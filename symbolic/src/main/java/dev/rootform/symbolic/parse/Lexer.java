@@ -16,6 +16,8 @@ final class Lexer {
     private static final Pattern NUMBER = Pattern.compile("(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final Pattern LEIBNIZ = Pattern.compile(
             "d(?:\\^?(\\d+))?\\s*([A-Za-z]+)\\s*/\\s*d\\s*([A-Za-z]+)(?:\\^?(\\d+))?");
+    /** Bound on the decimal exponent of a literal, which keeps exact values small. */
+    private static final int MAX_SCALE = 1000;
     private static final String SINGLE = "+-*/^()[]!";
     private static final Token.Kind[] SINGLE_KINDS = {Token.Kind.PLUS, Token.Kind.MINUS, Token.Kind.STAR,
         Token.Kind.SLASH, Token.Kind.CARET, Token.Kind.LPAREN, Token.Kind.RPAREN, Token.Kind.LBRACKET,
@@ -83,7 +85,11 @@ final class Lexer {
             throw new InputException("malformed number", source, position);
         }
         String text = m.group();
-        Rational value = Rational.of(new BigDecimal(text));
+        BigDecimal decimal = new BigDecimal(text);
+        if (Math.abs(decimal.scale()) > MAX_SCALE) {
+            throw new InputException("number " + text + " is too large", source, position);
+        }
+        Rational value = Rational.of(decimal);
         return new Token(Token.Kind.NUMBER, text, position, m.end(), value, null);
     }
 

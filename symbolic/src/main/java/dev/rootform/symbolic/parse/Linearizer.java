@@ -11,7 +11,8 @@ import java.util.Optional;
  * naming the offending term and pointing at its start.
  */
 final class Linearizer {
-    private static final int MAX_INTEGER = 10_000;
+    /** Bound on shifts and exponents, which keeps expansions small. */
+    private static final int MAX_INTEGER = 1000;
 
     private final String source;
     private final Shape shape;

@@ -82,6 +82,40 @@ class ProblemParserTest {
         assertEquals(coefficients(expected.split(" ")), e.coefficients());
     }
 
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "(E-2)^2 x = 3^n                        | x[n+2] - 4x[n+1] + 4x[n] = 3^n",
+        "(D+1)^2 (D^2+4) y = t e^(-t)           | y'''' + 2y''' + 5y'' + 8y' + 4y = t*exp(-t)",
+        "(D^2 + 2D + 5) y = sin(3t)             | d^2y/dt^2 + 2 dy/dt = -5y + sin(3 t)",
+    })
+    void operatorFormEqualsWrittenForm(String operatorForm, String writtenForm) {
+        assertEquals(equation(writtenForm), equation(operatorForm));
+    }
+
+    @Test
+    void indexNameAndForcingInThatIndex() {
+        LinearEquation e = equation("a[k+1] = 2a[k] + 1 + k");
+        assertEquals("a", e.function());
+        assertEquals("k", e.variable());
+        assertEquals(List.of(polynomial("1", 0, Domain.DIFFERENCE), polynomial("1", 1, Domain.DIFFERENCE)),
+                e.forcing());
+    }
+
+    @Test
+    void exponentLinearInTheIndex() {
+        // (2/3)^(2n-1) = 3/2 (4/9)^n
+        assertEquals(List.of(new ForcingTerm(r("3/2"), 0, r("4/9"), Oscillation.NONE, Rational.ZERO, false)),
+                equation("x[n+1] = x[n] + (2/3)^(2n-1)").forcing());
+    }
+
+    @Test
+    void cubeOfCosineIsReduced() {
+        // cos^3 t = 3/4 cos t + 1/4 cos 3t
+        assertEquals(List.of(new ForcingTerm(r("3/4"), 0, r("0"), Oscillation.COS, r("1"), false),
+                new ForcingTerm(r("1/4"), 0, r("0"), Oscillation.COS, r("3"), false)),
+                equation("y'' = cos(t)^3").forcing());
+    }
+
     @Test
     void explicitArgumentNamesTheVariable() {
         LinearEquation e = equation("y''(x) + y(x) = x");
@@ -248,6 +282,8 @@ class ProblemParserTest {
         "x[n+1] = y'                   | mixes x and y                        | 9",
         "d2y/dt3 = 0                   | orders 2 and 3 differ                | 0",
         "y'(x) = y(t)                  | the variable is x, not t             | 8",
+        "y' = 1e999999999              | number 1e999999999 is too large      | 5",
+        "x[n+2000] = x[n]              | x[n+2000]: number too large          | 0",
     })
     void errors(String text, String message, int position) {
         assertError(text, message, position);
