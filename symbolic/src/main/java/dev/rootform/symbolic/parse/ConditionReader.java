@@ -1,0 +1,62 @@
+package dev.rootform.symbolic.parse;
+
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.model.Domain;
+
+/** Reads one condition such as {@code y'(0) = 1} or {@code x[5] = 8} against an equation already read. */
+final class ConditionReader {
+    private final Shape shape;
+    private final int order;
+
+    /**
+     * @param shape the frame of the equation
+     * @param order the order of the equation
+     */
+    ConditionReader(Shape shape, int order) {
+        this.shape = shape;
+        this.order = order;
+    }
+
+    /** The condition in {@code source.substring(begin, end)}. */
+    Condition read(String source, int begin, int end) {
+        Parser.Equality sides = new Parser(source, begin, end, shape.variable()).equality("condition");
+        Linearizer constants = new Linearizer(source, shape);
+        Node left = sides.left();
+        String text = source.substring(left.start(), left.end());
+        Node point;
+        int derivative = 0;
+        if (left instanceof Node.Indexed indexed && indexed.name().equals(shape.function())) {
+            if (shape.domain() != Domain.DIFFERENCE) {
+                throw new InputException("condition " + text + ": brackets need a recurrence", source, left.start());
+            }
+            point = indexed.index();
+        } else if (left instanceof Node.Call call && call.name().equals(shape.function())) {
+            point = call.argument();
+        } else if (left instanceof Node.Derivative d && d.name().equals(shape.function()) && d.argument() != null) {
+            if (shape.domain() != Domain.DIFFERENTIAL) {
+                throw new InputException("condition " + text + ": derivatives need a differential equation",
+                        source, left.start());
+            }
+            derivative = d.order();
+            point = d.argument();
+        } else {
+            throw new InputException("condition " + text + ": expected " + example() + " with the unknown "
+                    + shape.function(), source, left.start());
+        }
+        if (derivative >= order) {
+            throw new InputException("condition order " + derivative + " >= equation order " + order,
+                    source, left.start());
+        }
+        Rational at = constants.rational(point, "condition point");
+        if (shape.domain() == Domain.DIFFERENCE && !at.isInteger()) {
+            throw new InputException("condition " + text + ": index must be an integer", source, point.start());
+        }
+        return new Condition(derivative, at, constants.rational(sides.right(), "condition value"));
+    }
+
+    private String example() {
+        String f = shape.function();
+        return shape.domain() == Domain.DIFFERENCE ? f + "[0] = value" : f + "(0) = value or " + f + "'(0) = value";
+    }
+}

@@ -1,0 +1,287 @@
+package dev.rootform.symbolic.parse;
+
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.ForcingTerm.Oscillation;
+import java.util.Optional;
+
+/**
+ * Evaluates an expression tree to a {@link Value}: a linear combination of the unknown plus
+ * forcing terms. Rejects everything that would leave the linear constant-coefficient form,
+ * naming the offending term and pointing at its start.
+ */
+final class Linearizer {
+    /** Bound on shifts and exponents, which keeps expansions small. */
+    private static final int MAX_INTEGER = 1000;
+
+    private final String source;
+    private final Shape shape;
+    private final Forcing zero;
+    /** How many sin/cos arguments enclose the node being read; π is allowed only inside one. */
+    private int angleDepth;
+
+    Linearizer(String source, Shape shape) {
+        this.source = source;
+        this.shape = shape;
+        this.zero = Forcing.zero(shape.domain());
+    }
+
+    Value evaluate(Node node) {
+        if (node instanceof Node.Num num) {
+            return constant(num.value());
+        }
+        if (node instanceof Node.Name name) {
+            return name(name);
+        }
+        if (node instanceof Node.Call call) {
+            return call(call);
+        }
+        if (node instanceof Node.Indexed indexed) {
+            return Value.unknown(offset(indexed.index(), indexed), zero);
+        }
+        if (node instanceof Node.Derivative derivative) {
+            return derivative(derivative);
+        }
+        if (node instanceof Node.Negation negation) {
+            return evaluate(negation.operand()).negate();
+        }
+        Node.Binary b = (Node.Binary) node;
+        switch (b.op()) {
+            case ADD:
+                return evaluate(b.left()).add(evaluate(b.right()));
+            case SUB:
+                return evaluate(b.left()).add(evaluate(b.right()).negate());
+            case MUL:
+                return product(b);
+            case DIV:
+                return quotient(b);
+            default:
+                return power(b);
+        }
+    }
+
+    /** The offset j of a sequence term x[v + j] or x(v + j). */
+    int offset(Node index, Node term) {
+        Optional<Forcing.Linear> linear = free(evaluate(index), term).forcing().asLinear();
+        if (linear.isEmpty() || !linear.get().slope().isOne() || linear.get().timesPi()) {
+            throw error("index must be " + shape.variable() + " plus a constant: " + text(term), term);
+        }
+        Rational intercept = linear.get().intercept();
+        if (!intercept.isInteger()) {
+            throw error("non-integer shift " + text(term) + " is out of scope", term);
+        }
+        return small(intercept, term);
+    }
+
+    /** The value of a constant expression such as {@code -3/4} or {@code 2^10}. */
+    Rational rational(Node node, String role) {
+        return evaluate(node).constantValue()
+                .orElseThrow(() -> error(role + " must be a rational constant: " + text(node), node));
+    }
+
+    private Value constant(Rational value) {
+        return Value.of(Forcing.constant(shape.domain(), value));
+    }
+
+    private Value name(Node.Name node) {
+        String name = node.name();
+        if (name.equals(shape.function())) {
+            return Value.unknown(0, zero);
+        }
+        if (name.equals(shape.variable())) {
+            return Value.of(Forcing.variable(shape.domain()));
+        }
+        if (name.equals(Names.PI) && angleDepth > 0) {
+            return Value.of(Forcing.pi(shape.domain()));
+        }
+        if (name.equals(Names.PI) || name.equals(Names.EULER)) {
+            throw error(name + ": coefficient must be rational", node);
+        }
+        if (name.equals(Names.DERIVATIVE_OPERATOR) || name.equals(Names.SHIFT_OPERATOR)) {
+            throw error("operator " + name + " must be applied to the unknown", node);
+        }
+        if (Names.isSupportedFunction(name) || Names.isUnsupportedFunction(name)) {
+            throw error(name + " needs a parenthesised argument", node);
+        }
+        throw error("unknown name '" + name + "'", node);
+    }
+
+    private Value call(Node.Call call) {
+        String name = call.name();
+        if (name.equals("sin") || name.equals("cos")) {
+            return oscillation(call, name.equals("sin") ? Oscillation.SIN : Oscillation.COS);
+        }
+        if (name.equals("exp")) {
+            return exponential(call, call.argument());
+        }
+        if (Names.isUnsupportedFunction(name)) {
+            throw error(text(call) + " is out of scope", call);
+        }
+        if (!name.equals(shape.function())) {
+            Node.Name factor = new Node.Name(name, call.start(), call.start() + name.length());
+            return product(new Node.Binary(Node.Binary.Op.MUL, factor, call.argument(), call.start(), call.end()));
+        }
+        if (shape.domain() == Domain.DIFFERENCE) {
+            return Value.unknown(offset(call.argument(), call), zero);
+        }
+        requireVariable(call.argument(), call);
+        return Value.unknown(0, zero);
+    }
+
+    private Value derivative(Node.Derivative d) {
+        if (shape.domain() == Domain.DIFFERENCE) {
+            throw error("derivative " + text(d) + " does not fit a recurrence", d);
+        }
+        if (d.argument() != null) {
+            requireVariable(d.argument(), d);
+        }
+        return Value.unknown(d.order(), zero);
+    }
+
+    private void requireVariable(Node argument, Node term) {
+        if (!(argument instanceof Node.Name name && name.name().equals(shape.variable()))) {
+            throw error(text(term) + ": inside the equation the unknown takes the argument " + shape.variable(), term);
+        }
+    }
+
+    private Value product(Node.Binary b) {
+        if (OperatorEvaluator.isOperator(b.left())) {
+            Value operand = evaluate(b.right());
+            if (!operand.forcing().isZero() || !operand.hasUnknown()) {
+                throw error("an operator must be applied to the unknown alone: " + text(b), b);
+            }
+            return operand.apply(new OperatorEvaluator(source, shape.domain()).polynomial(b.left()));
+        }
+        Value left = evaluate(b.left());
+        Value right = evaluate(b.right());
+        if (left.hasUnknown() && right.hasUnknown()) {
+            throw nonlinear(b);
+        }
+        if (left.hasUnknown() || right.hasUnknown()) {
+            Value linear = left.hasUnknown() ? left : right;
+            Value factor = left.hasUnknown() ? right : left;
+            Rational c = factor.constantValue().orElseThrow(() -> error("variable coefficient: " + text(b)
+                    + " (rootform solves constant-coefficient equations)", b));
+            return linear.scale(c);
+        }
+        if (left.forcing().mixesFrequencyKinds(right.forcing())) {
+            throw error(text(b) + ": frequencies must be all rational or all rational multiples of pi", b);
+        }
+        return Value.of(left.forcing().multiply(right.forcing()));
+    }
+
+    private Value quotient(Node.Binary b) {
+        Value divisor = evaluate(b.right());
+        if (divisor.hasUnknown()) {
+            throw nonlinear(b);
+        }
+        Rational c = divisor.constantValue().orElseThrow(() -> error(text(b) + " is out of scope", b));
+        if (c.isZero()) {
+            throw error("division by zero", b.right());
+        }
+        return evaluate(b.left()).scale(c.inverse());
+    }
+
+    private Value power(Node.Binary b) {
+        if (b.left() instanceof Node.Name name && name.name().equals(Names.EULER)) {
+            return exponential(b, b.right());
+        }
+        Value base = evaluate(b.left());
+        Value exponent = free(evaluate(b.right()), b);
+        Optional<Rational> k = exponent.constantValue();
+        if (base.hasUnknown()) {
+            if (k.isPresent() && k.get().isOne()) {
+                return base;
+            }
+            throw nonlinear(b);
+        }
+        if (k.isEmpty()) {
+            return exponentialWithBase(b, base, exponent.forcing());
+        }
+        if (!k.get().isInteger()) {
+            throw error(text(b) + " is out of scope", b);
+        }
+        int n = small(k.get(), b);
+        if (n >= 0) {
+            return Value.of(base.forcing().pow(n));
+        }
+        Rational c = base.constantValue().orElseThrow(() -> error(text(b) + " is out of scope", b));
+        if (c.isZero()) {
+            throw error("division by zero", b);
+        }
+        return constant(c.pow(n));
+    }
+
+    /** c^(a·n + b) for a sequence, with a and b integers. */
+    private Value exponentialWithBase(Node.Binary b, Value base, Forcing exponent) {
+        Optional<Rational> c = base.constantValue();
+        if (c.isEmpty()) {
+            throw error(text(b) + " is out of scope", b);
+        }
+        if (shape.domain() == Domain.DIFFERENTIAL) {
+            throw error(text(b) + ": use e^(c " + shape.variable() + ") with rational c", b);
+        }
+        if (c.get().isZero()) {
+            throw error(text(b) + ": base must be nonzero", b);
+        }
+        Forcing.Linear linear = exponent.asLinear()
+                .filter(l -> l.slope().isInteger() && l.intercept().isInteger() && !l.timesPi())
+                .orElseThrow(() -> error(text(b) + " is out of scope", b));
+        Rational factor = c.get().pow(small(linear.intercept(), b));
+        Rational ratio = c.get().pow(small(linear.slope(), b));
+        return Value.of(Forcing.exponential(shape.domain(), ratio).scale(factor));
+    }
+
+    /** e^(argument) or exp(argument): only e^(c·t) with rational c. */
+    private Value exponential(Node term, Node argument) {
+        if (shape.domain() == Domain.DIFFERENCE) {
+            throw error(text(term) + ": base must be rational", term);
+        }
+        Forcing.Linear linear = free(evaluate(argument), term).forcing().asLinear()
+                .orElseThrow(() -> error(text(term) + " is out of scope", term));
+        if (!linear.intercept().isZero() || linear.timesPi()) {
+            throw error(text(term) + ": coefficient must be rational", term);
+        }
+        return Value.of(Forcing.exponential(shape.domain(), linear.slope()));
+    }
+
+    /** sin(ω·v) or cos(ω·v) with ω rational or a rational multiple of π. */
+    private Value oscillation(Node.Call call, Oscillation kind) {
+        angleDepth++;
+        Value argument = evaluate(call.argument());
+        angleDepth--;
+        Forcing.Linear linear = free(argument, call).forcing().asLinear()
+                .filter(l -> l.intercept().isZero())
+                .orElseThrow(() -> error(text(call) + " is out of scope (write sin(w " + shape.variable()
+                        + ") or cos(w " + shape.variable() + "))", call));
+        return Value.of(Forcing.oscillation(shape.domain(), kind, linear.slope(), linear.timesPi()));
+    }
+
+    /** The integer {@code value} as an int, if it is small enough to use as a shift or an exponent. */
+    private int small(Rational value, Node term) {
+        if (value.abs().compareTo(Rational.of(MAX_INTEGER)) > 0) {
+            throw error(text(term) + ": number too large", term);
+        }
+        return value.toBigInteger().intValueExact();
+    }
+
+    /** {@code value}, which must not involve the unknown because it sits inside {@code term}. */
+    private Value free(Value value, Node term) {
+        if (value.hasUnknown()) {
+            throw nonlinear(term);
+        }
+        return value;
+    }
+
+    private InputException nonlinear(Node term) {
+        return error("nonlinear term: " + text(term) + " (rootform solves linear equations)", term);
+    }
+
+    private InputException error(String message, Node node) {
+        return new InputException(message, source, node.start());
+    }
+
+    private String text(Node node) {
+        return source.substring(node.start(), node.end());
+    }
+}
