@@ -91,6 +91,13 @@ public final class Analyzer {
         if (root instanceof ExactRoot.Explicit e) {
             return new RootApproximation(root, e.re().toBigDecimal(mc), e.im().toBigDecimal(mc), BigDecimal.ZERO);
         }
+        if (root instanceof ExactRoot.OfUnity u) {
+            long precision = digits + GUARD_DIGITS;
+            Apfloat angle = ApfloatMath.pi(precision).multiply(new Apfloat(2L * u.k(), precision))
+                    .divide(new Apfloat(u.order(), precision));
+            return new RootApproximation(root, FunctionEvaluator.toBigDecimal(ApfloatMath.cos(angle), digits),
+                    FunctionEvaluator.toBigDecimal(ApfloatMath.sin(angle), digits), BigDecimal.ZERO);
+        }
         if (root instanceof ExactRoot.Implicit i) {
             Enclosure z = enclosures.get(i.factor()).get(i.index() - 1);
             return new RootApproximation(root, z.re().round(mc), z.im().round(mc), z.radius());

@@ -8,7 +8,7 @@ import java.util.Objects;
  *
  * @since 0.1
  */
-public sealed interface ExactRoot permits ExactRoot.Explicit, ExactRoot.Implicit {
+public sealed interface ExactRoot permits ExactRoot.Explicit, ExactRoot.OfUnity, ExactRoot.Implicit {
     /** Multiplicity m &ge; 1. */
     int multiplicity();
 
@@ -18,6 +18,10 @@ public sealed interface ExactRoot permits ExactRoot.Explicit, ExactRoot.Implicit
             Objects.requireNonNull(re, "re");
             Objects.requireNonNull(im, "im");
         }
+    }
+
+    /** The root of unity e^{2πi·k/order} = cos(2πk/order) + i·sin(2πk/order), gcd(k, order) = 1. */
+    record OfUnity(int order, int k, int multiplicity) implements ExactRoot {
     }
 
     /**

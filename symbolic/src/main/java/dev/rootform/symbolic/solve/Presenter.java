@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.solve;
 
+import dev.rootform.symbolic.algebra.Cyclotomic;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
@@ -78,6 +79,13 @@ final class Presenter {
                 } else {
                     roots.add(new ExactRoot.Explicit(Surd.of(q.a), q.omega(), m));
                     roots.add(new ExactRoot.Explicit(Surd.of(q.a), q.omega().negate(), m));
+                }
+            } else if (Cyclotomic.order(p).isPresent()) {
+                int order = Cyclotomic.order(p).getAsInt();
+                for (int k = 1; k < order; k++) {
+                    if (java.math.BigInteger.valueOf(k).gcd(java.math.BigInteger.valueOf(order)).intValue() == 1) {
+                        roots.add(new ExactRoot.OfUnity(order, k, m));
+                    }
                 }
             } else {
                 for (int j = 1; j <= p.degree(); j++) {
