@@ -1,7 +1,6 @@
 package dev.rootform.export;
 
 import dev.rootform.numeric.analysis.PointValue;
-import dev.rootform.numeric.analysis.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.ExactRoot;
@@ -90,7 +89,8 @@ public final class TextRenderer {
             lines.add("for all " + f.variable());
         }
         if (!f.freeConstants().isEmpty()) {
-            lines.add("general solution: " + String.join(", ", f.freeConstants()) + " are free constants");
+            int k = f.freeConstants().size();
+            lines.add("general solution: " + String.join(", ", f.freeConstants()) + (k == 1 ? " is a free constant" : " are free constants"));
         }
         return lines;
     }
