@@ -22,6 +22,8 @@ import java.util.Optional;
  * @since 0.1
  */
 final class FormulaWriter {
+    /** The base of the exponential, spelled the same in every notation. */
+    private static final String EULER = "e";
     private static final Coefficient ONE = new Coefficient.Exact(Surd.of(Rational.ONE));
 
     /** A summand written without its sign. */
@@ -91,7 +93,7 @@ final class FormulaWriter {
                 bases.add(power(n.lambda(), j));
             }
             String root = form.domain() == Domain.DIFFERENTIAL
-                    ? n.power(n.euler(), n.implicit(n.lambda(), v))
+                    ? n.power(EULER, n.implicit(n.lambda(), v))
                     : n.power(n.lambda(), v);
             return combination(r.coefficients(), bases, List.of(power(v, r.power()), root), true)
                     .map(s -> new Signed(s.negative(), n.rootSum(polynomial(r.factor(), n.lambda()), s.body())));
@@ -160,7 +162,7 @@ final class FormulaWriter {
     /** e^(rate·v) for differential equations, rate^v for difference equations; empty when trivial. */
     private String growth(Surd rate) {
         if (form.domain() == Domain.DIFFERENTIAL) {
-            return rate.isZero() ? "" : n.power(n.euler(), scaled(rate, v));
+            return rate.isZero() ? "" : n.power(EULER, scaled(rate, v));
         }
         if (rate.isRational() && rate.rational().isOne()) {
             return "";

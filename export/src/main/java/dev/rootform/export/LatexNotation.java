@@ -85,9 +85,4 @@ final class LatexNotation implements Notation {
     public String lambda() {
         return "\\lambda";
     }
-
-    @Override
-    public String euler() {
-        return "e";
-    }
 }

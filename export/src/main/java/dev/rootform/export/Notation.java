@@ -49,7 +49,4 @@ interface Notation {
 
     /** The bound variable λ of a root sum. */
     String lambda();
-
-    /** Euler's number e as the base of an exponential. */
-    String euler();
 }

@@ -82,9 +82,4 @@ final class PlainNotation implements Notation {
     public String lambda() {
         return "λ";
     }
-
-    @Override
-    public String euler() {
-        return "e";
-    }
 }
