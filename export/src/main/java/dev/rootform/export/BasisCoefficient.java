@@ -1,0 +1,50 @@
+package dev.rootform.export;
+
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Coefficient;
+import dev.rootform.symbolic.closedform.Surd;
+import dev.rootform.symbolic.closedform.Term;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+
+/**
+ * Each coefficient of a closed form with the basis function it multiplies, in term order: one
+ * entry per exponential term, two (cos, sin) per oscillating term, one per power of λ in a root
+ * sum. The basis is written by the formula walk from the same term with that coefficient set to 1
+ * and the others to 0.
+ *
+ * @param coefficient the coefficient as exact plain text, e.g. {@code -1/5·√5} or {@code C2}
+ * @param basis the basis function it multiplies, e.g. {@code e^(-t)·sin(2t)}
+ * @since 0.1
+ */
+record BasisCoefficient(String coefficient, String basis) {
+    private static final Coefficient ONE = new Coefficient.Exact(Surd.of(Rational.ONE));
+    private static final Coefficient ZERO = new Coefficient.Exact(Surd.of(Rational.ZERO));
+
+    /** The entries of every term of {@code f}, in order. */
+    static List<BasisCoefficient> of(ClosedForm f) {
+        FormulaWriter writer = new FormulaWriter(PlainNotation.INSTANCE, f);
+        List<BasisCoefficient> out = new ArrayList<>();
+        for (Term t : f.terms()) {
+            if (t instanceof Term.Exponential e) {
+                out.add(new BasisCoefficient(writer.coefficient(e.coefficient()),
+                        writer.term(new Term.Exponential(ONE, e.power(), e.rate()))));
+            } else if (t instanceof Term.Oscillating o) {
+                out.add(new BasisCoefficient(writer.coefficient(o.cosine()),
+                        writer.term(new Term.Oscillating(ONE, ZERO, o.power(), o.growth(), o.angle()))));
+                out.add(new BasisCoefficient(writer.coefficient(o.sine()),
+                        writer.term(new Term.Oscillating(ZERO, ONE, o.power(), o.growth(), o.angle()))));
+            } else if (t instanceof Term.RootSum r) {
+                for (int j = 0; j < r.coefficients().size(); j++) {
+                    List<Coefficient> unit = new ArrayList<>(Collections.nCopies(r.coefficients().size(), ZERO));
+                    unit.set(j, ONE);
+                    out.add(new BasisCoefficient(writer.coefficient(r.coefficients().get(j)),
+                            writer.term(new Term.RootSum(r.factor(), unit, r.power()))));
+                }
+            }
+        }
+        return out;
+    }
+}

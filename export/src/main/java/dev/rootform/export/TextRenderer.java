@@ -1,0 +1,123 @@
+package dev.rootform.export;
+
+import dev.rootform.numeric.analysis.PointValue;
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.ExactRoot;
+import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.solve.Check;
+import dev.rootform.symbolic.solve.Solution;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+
+/**
+ * The answer for a person on a terminal: equation, conditions, characteristic polynomial, roots,
+ * solution with its range of validity, verification, values and warnings, each under an aligned
+ * label.
+ *
+ * @since 0.1
+ */
+public final class TextRenderer {
+    /** Exact values longer than this are shown as rounded decimals. */
+    private static final int EXACT_LIMIT = 60;
+
+    private TextRenderer() {
+    }
+
+    /** The whole answer, one line per fact, ending in a newline. */
+    public static String render(Report r) {
+        Solution s = r.solution();
+        LinearEquation eq = s.problem().equation();
+        Layout out = new Layout()
+                .section("equation", List.of(EquationText.equation(eq), EquationText.kind(eq)))
+                .line("conditions", conditions(eq, s.problem().conditions()))
+                .line("characteristic", s.characteristic().toString(EquationText.LAMBDA))
+                .line("factored", EquationText.factorisation(s.characteristic(), s.factors()))
+                .section("roots", roots(s.roots(), r))
+                .section("solution", solution(s.closedForm()))
+                .section("verification", verification(r));
+        if (!r.values().isEmpty()) {
+            out.section("values", r.values().stream().map(v -> value(s.closedForm(), v, r.digits())).toList());
+        }
+        if (!r.warnings().isEmpty()) {
+            out.section("warnings", r.warnings());
+        }
+        return out.toString();
+    }
+
+    private static String conditions(LinearEquation eq, List<Condition> conditions) {
+        return conditions.isEmpty() ? "none (general solution)"
+                : conditions.stream().map(c -> EquationText.condition(eq, c)).collect(Collectors.joining(", "));
+    }
+
+    private static List<String> roots(List<ExactRoot> roots, Report r) {
+        List<String> exact = roots.stream().map(RootText::exact).toList();
+        int width = exact.stream().mapToInt(String::length).max().orElse(0);
+        List<String> decimals = new ArrayList<>();
+        for (int i = 0; i < roots.size(); i++) {
+            String approx = i < r.roots().size() ? "≈ " + RootText.decimal(r.roots().get(i), r.digits()) : "";
+            decimals.add(approx);
+        }
+        int decimalWidth = decimals.stream().mapToInt(String::length).max().orElse(0);
+        List<String> lines = new ArrayList<>();
+        for (int i = 0; i < roots.size(); i++) {
+            lines.add(pad(exact.get(i), width) + "  " + pad(decimals.get(i), decimalWidth)
+                    + "  multiplicity " + roots.get(i).multiplicity());
+        }
+        return lines;
+    }
+
+    /** The formula, where it holds, and what is free or fixed before that. */
+    private static List<String> solution(ClosedForm f) {
+        List<String> lines = new ArrayList<>();
+        lines.add(EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f));
+        if (f.domain() == Domain.DIFFERENCE) {
+            lines.add("for " + f.variable() + " ≥ " + f.validFrom());
+            long first = f.origin().toBigInteger().longValueExact();
+            for (int i = 0; i < f.leadingValues().size(); i++) {
+                lines.add(EquationText.unknownAt(f, Long.toString(first + i)) + " = " + f.leadingValues().get(i));
+            }
+            if (f.leadingValues().isEmpty() && f.validFrom() > first) {
+                String range = f.validFrom() - 1 == first ? Long.toString(first) : first + ".." + (f.validFrom() - 1);
+                lines.add(EquationText.unknownAt(f, range) + " free (any values)");
+            }
+        } else {
+            lines.add("for all " + f.variable());
+        }
+        if (!f.freeConstants().isEmpty()) {
+            int k = f.freeConstants().size();
+            lines.add("general solution: " + String.join(", ", f.freeConstants()) + (k == 1 ? " is a free constant" : " are free constants"));
+        }
+        return lines;
+    }
+
+    private static List<String> verification(Report r) {
+        List<Check> checks = Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).toList();
+        List<String> lines = new ArrayList<>();
+        for (Check c : checks) {
+            lines.add(pad(c.passed() ? "[ok]" : "[FAILED]", 9) + c.name() + ": " + c.detail());
+        }
+        List<String> failed = checks.stream().filter(c -> !c.passed()).map(Check::name).toList();
+        lines.add(failed.isEmpty() ? "verified" : "NOT verified: " + String.join(", ", failed));
+        return lines;
+    }
+
+    private static String value(ClosedForm f, PointValue v, int digits) {
+        String at = EquationText.unknownAt(f, Numbers.point(v.at()));
+        return at + exactOrDecimal(v, digits);
+    }
+
+    /** {@code " = 55"} when the exact value is known and short, else {@code " ≈ 0.2231"}. */
+    private static String exactOrDecimal(PointValue v, int digits) {
+        String exact = v.exact().map(Rational::toString).orElse("");
+        return !exact.isEmpty() && exact.length() <= EXACT_LIMIT ? " = " + exact : " ≈ " + Numbers.decimal(v.value(), digits);
+    }
+
+    private static String pad(String s, int width) {
+        return s + " ".repeat(Math.max(0, width - s.length()));
+    }
+}
