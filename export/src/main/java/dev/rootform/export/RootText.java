@@ -6,7 +6,7 @@ import dev.rootform.symbolic.closedform.Surd;
 
 /**
  * Text for a root of the characteristic polynomial: exact ({@code 1/2 + 1/2·√5}, {@code -1 - 2i},
- * {@code root 2 of λ^3 - λ - 1}) and as a rounded decimal ({@code -0.6623589786 + 0.5622795121i}).
+ * {@code cos(2π/5) + i·sin(2π/5)}, {@code root 2 of λ^3 - λ - 1}) and as a rounded decimal ({@code -0.6623589786 + 0.5622795121i}).
  *
  * @since 0.1
  */
@@ -18,6 +18,10 @@ final class RootText {
     static String exact(ExactRoot root) {
         if (root instanceof ExactRoot.Explicit e) {
             return complex(e.re(), e.im());
+        }
+        if (root instanceof ExactRoot.OfUnity u) {
+            String angle = "2" + (u.k() == 1 ? "" : "·" + u.k()) + "π/" + u.order();
+            return "cos(" + angle + ") + i·sin(" + angle + ")";
         }
         if (root instanceof ExactRoot.Implicit i) {
             return "root " + i.index() + " of " + i.factor().toString(EquationText.LAMBDA);

@@ -1,0 +1,127 @@
+package dev.rootform.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/** End-to-end tests of the command through {@link Main#execute}. */
+class MainTest {
+    /** Exit code, stdout and stderr of one run. */
+    record Run(int code, String out, String err) {
+    }
+
+    static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void solvesFibonacciExactly() {
+        Run r = run("solve", "x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1", "--values-at", "10,100");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("x[10] = 55"), r.out());
+        assertTrue(r.out().contains("x[100] = 354224848179261915075"), r.out());
+        assertTrue(r.out().contains("verified"), r.out());
+        assertEquals("", r.err());
+    }
+
+    @Test
+    void jsonHasTheContractKeys() throws Exception {
+        Run r = run("solve", "y'' + 2y' + 5y = 0; y(0) = 1; y'(0) = 0", "--format", "json", "--values-at", "1", "--digits", "40");
+        assertEquals(0, r.code(), r.err());
+        JsonNode json = new ObjectMapper().readTree(r.out());
+        for (String key : new String[] {"domain", "order", "characteristic", "roots", "solution", "constants",
+                "verification", "diagnostics", "values", "warnings"}) {
+            assertTrue(json.has(key), key);
+        }
+        assertEquals("differential", json.get("domain").asText());
+        assertTrue(json.get("verification").get("verified").asBoolean());
+        // y(1) = e^{-1}(cos 2 + ½ sin 2) (common practice), to 40 digits
+        double expected = Math.exp(-1) * (Math.cos(2) + 0.5 * Math.sin(2));
+        String value = json.get("values").get(0).get("value").asText();
+        assertEquals(expected, Double.parseDouble(value), 1e-15);
+        assertTrue(value.replace("-", "").replace("0.", "").length() >= 39, value);
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', value = {
+        "y'' + (2y' = 0|unbalanced",
+        "y'' + z = 0|",
+        "y*y' + y = 0|nonlinear",
+        "t*y' + y = 0|variable coefficient",
+        "''|empty",
+        "y'' + y = 0; y(0) = 1|needs exactly 2",
+        "y'' + y = sin(t); y(0) = 1; y'(0) = 0|not supported yet",
+        "x[n+1] = 2x[n]; x[0] = 1; x[0] = 2|",
+        "y'' + y = 0; y(0) = 0; y(3) = 1|boundary-value",
+    })
+    void badInputGetsOneLineAndExitCodeTwo(String input, String fragment) {
+        Run r = run("solve", input);
+        assertEquals(2, r.code(), r.out() + r.err());
+        assertEquals("", r.out());
+        assertTrue(r.err().startsWith("rootform: "), r.err());
+        assertTrue(fragment == null || r.err().contains(fragment), r.err());
+        assertTrue(!r.err().contains("Exception") && !r.err().contains("\tat "), r.err());
+    }
+
+    @Test
+    void caretPointsAtTheProblem() {
+        Run r = run("solve", "y'' + (2y' = 0");
+        String[] lines = r.err().split("\\R");
+        assertEquals(3, lines.length, r.err());
+        assertEquals(lines[1].indexOf('('), lines[2].indexOf('^'), r.err());
+    }
+
+    @Test
+    void badValuesAtListIsBadInput() {
+        Run r = run("solve", "x[n+1] = 2x[n]; x[0] = 1", "--values-at", "1,zz");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("'zz'"), r.err());
+    }
+
+    @Test
+    void generalSolutionHasFreeConstants() {
+        Run r = run("solve", "(D+1)^2 (D^2+4) y = 0");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("C4"), r.out());
+    }
+
+    @Test
+    void writesTheAnswerToAFile(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("answer.json");
+        Run r = run("solve", "x[n+1] = 3x[n]; x[0] = 2", "--format", "json", "-o", file.toString());
+        assertEquals(0, r.code(), r.err());
+        assertEquals("", r.out());
+        assertTrue(Files.readString(file).contains("\"verification\""));
+        try (var listing = Files.list(dir)) {
+            assertEquals(1, listing.count(), "no temporary file left behind");
+        }
+    }
+
+    @Test
+    void versionHelpAndDemo() {
+        assertEquals(0, run("--version").code());
+        assertTrue(run("--help").out().contains("solve"));
+        Run demo = run("demo");
+        assertEquals(0, demo.code(), demo.err());
+        assertTrue(demo.out().contains("verified"));
+    }
+
+    @Test
+    void unknownOptionIsBadInput() {
+        Run r = run("solve", "x[n+1] = x[n]; x[0] = 1", "--frobnicate");
+        assertEquals(2, r.code());
+    }
+}
