@@ -1,6 +1,5 @@
 package dev.rootform.numeric.roots;
 
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -42,32 +41,51 @@ final class InclusionCertificate {
     }
 
     /**
-     * Enclosures whose radii are at most 10^(−digits)·max(1, |root|), or empty when the disks
-     * overlap, some radius is too large, or two centres coincide.
+     * The outcome of a certification attempt: the enclosures when every radius is at most
+     * 10^(−digits)·max(1, |root|) and the disks are pairwise disjoint; otherwise no enclosures and
+     * the number of digits by which the widest disk missed the target ({@link #UNKNOWN} when disks
+     * overlap or centres coincide).
      */
-    static Optional<List<Enclosure>> certify(RationalPolynomial p, CentreSet centres, int digits) {
+    record Outcome(Optional<List<Enclosure>> enclosures, int missingDigits) {
+    }
+
+    /** {@link Outcome#missingDigits} when the shortfall cannot be estimated. */
+    static final int UNKNOWN = -1;
+
+    static Outcome certify(RationalPolynomial p, CentreSet centres, int digits) {
         int d = p.degree();
-        BigDecimal[] radius = new BigDecimal[d];
-        for (int i = 0; i < d; i++) {
-            int partner = centres.partner()[i];
-            if (partner < i) {
-                radius[i] = radius[partner];
-                continue;
-            }
-            Optional<BigDecimal> r = radius(p, centres, i, digits);
-            if (r.isEmpty()) {
-                return Optional.empty();
-            }
-            radius[i] = r.get();
-        }
         BigDecimal[] re = centres.re();
         BigDecimal[] im = centres.im();
-        BigDecimal target = BigDecimal.ONE.scaleByPowerOfTen(-digits);
+        Bound[] bounds = new Bound[d];
+        int maxPrecision = MIN_PRECISION;
         for (int i = 0; i < d; i++) {
-            BigDecimal size = Bounds.modulusDown(re[i], im[i]).subtract(radius[i]).max(BigDecimal.ONE);
-            if (radius[i].compareTo(target.multiply(size)) > 0) {
-                return Optional.empty();
+            if (centres.partner()[i] >= i) {
+                bounds[i] = bound(p, centres, i, digits);
+                if (bounds[i] == null) {
+                    return new Outcome(Optional.empty(), UNKNOWN);
+                }
+                maxPrecision = Math.max(maxPrecision, bounds[i].precision());
             }
+        }
+        BigDecimal[] coefficients = new BigDecimal[d + 1];
+        MathContext coefficientContext = new MathContext(maxPrecision, RoundingMode.HALF_EVEN);
+        for (int k = 0; k <= d; k++) {
+            coefficients[k] = p.coefficient(k).toBigDecimal(coefficientContext);
+        }
+        BigDecimal[] radius = new BigDecimal[d];
+        BigDecimal target = BigDecimal.ONE.scaleByPowerOfTen(-digits);
+        double worst = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < d; i++) {
+            int partner = centres.partner()[i];
+            radius[i] = partner < i ? radius[partner] : radius(coefficients, re[i], im[i], bounds[i]);
+            BigDecimal size = Bounds.modulusDown(re[i], im[i]).subtract(radius[i]).max(BigDecimal.ONE);
+            BigDecimal allowed = target.multiply(size);
+            if (radius[i].compareTo(allowed) > 0) {
+                worst = Math.max(worst, Bounds.log10(radius[i]) - Bounds.log10(allowed));
+            }
+        }
+        if (worst > Double.NEGATIVE_INFINITY) {
+            return new Outcome(Optional.empty(), (int) Math.ceil(worst));
         }
         for (int i = 0; i < d; i++) {
             for (int j = i + 1; j < d; j++) {
@@ -75,7 +93,7 @@ final class InclusionCertificate {
                 BigDecimal dy = im[i].subtract(im[j]);
                 BigDecimal sum = radius[i].add(radius[j]);
                 if (dx.multiply(dx).add(dy.multiply(dy)).compareTo(sum.multiply(sum)) <= 0) {
-                    return Optional.empty();
+                    return new Outcome(Optional.empty(), UNKNOWN);
                 }
             }
         }
@@ -83,11 +101,17 @@ final class InclusionCertificate {
         for (int i = 0; i < d; i++) {
             result.add(new Enclosure(re[i], im[i], radius[i]));
         }
-        return Optional.of(result);
+        return new Outcome(Optional.of(result), 0);
     }
 
-    /** An upper bound of d·|W_i|, or empty when centre i coincides with another. */
-    private static Optional<BigDecimal> radius(RationalPolynomial p, CentreSet centres, int i, int digits) {
+    /**
+     * Rounding-independent parts of the radius of disk i: a lower bound of |a_d|·∏_{j≠i}|z_i − z_j|,
+     * an upper bound of Σ|a_j||z_i|^j, and the Horner precision; {@code null} if centres coincide.
+     */
+    private record Bound(BigDecimal denominator, BigDecimal absoluteSum, int precision) {
+    }
+
+    private static Bound bound(RationalPolynomial p, CentreSet centres, int i, int digits) {
         int d = p.degree();
         BigDecimal x = centres.re()[i];
         BigDecimal y = centres.im()[i];
@@ -101,7 +125,7 @@ final class InclusionCertificate {
             }
         }
         if (distanceSquared.signum() == 0) {
-            return Optional.empty();
+            return null;
         }
         BigDecimal denominator = Bounds.absDown(p.leadingCoefficient())
                 .multiply(Bounds.sqrtDown(distanceSquared), Bounds.DOWN);
@@ -113,23 +137,32 @@ final class InclusionCertificate {
         double targetLog = -digits - SLACK_DIGITS + Math.max(0, Bounds.log10(modulus));
         double needed = Math.log10(MARGIN * (d + 2.0) * d) + Bounds.log10(absoluteSum)
                 - Bounds.log10(denominator) - targetLog;
-        int precision = Math.max(MIN_PRECISION, (int) Math.ceil(needed) + 2);
-        BigDecimal[] value = horner(p, x, y, new MathContext(precision, RoundingMode.HALF_EVEN));
-        BigDecimal unitRoundoff = new BigDecimal("0.5").scaleByPowerOfTen(1 - precision);
-        BigDecimal rounding = unitRoundoff.multiply(BigDecimal.valueOf(MARGIN * (d + 2L)))
-                .multiply(absoluteSum, Bounds.UP);
-        BigDecimal numerator = Bounds.modulusUp(value[0], value[1]).add(rounding, Bounds.UP)
-                .multiply(BigDecimal.valueOf(d), Bounds.UP);
-        return Optional.of(numerator.divide(denominator, new MathContext(RADIUS_DIGITS, RoundingMode.CEILING)));
+        return new Bound(denominator, absoluteSum, Math.max(MIN_PRECISION, (int) Math.ceil(needed) + 2));
     }
 
-    /** {re, im} of p(x + iy) by Horner's rule, each step exact then rounded once to {@code context}. */
-    private static BigDecimal[] horner(RationalPolynomial p, BigDecimal x, BigDecimal y, MathContext context) {
+    /**
+     * An upper bound of d·|W_i| = d·|p(z)| / (|a_d|·∏|z − z_j|) at z = x + iy, from coefficients
+     * rounded to at least {@code bound.precision()} digits.
+     */
+    private static BigDecimal radius(BigDecimal[] coefficients, BigDecimal x, BigDecimal y, Bound bound) {
+        int d = coefficients.length - 1;
+        int precision = bound.precision();
+        BigDecimal[] value = horner(coefficients, x, y, new MathContext(precision, RoundingMode.HALF_EVEN));
+        BigDecimal unitRoundoff = new BigDecimal("0.5").scaleByPowerOfTen(1 - precision);
+        BigDecimal rounding = unitRoundoff.multiply(BigDecimal.valueOf(MARGIN * (d + 2L)))
+                .multiply(bound.absoluteSum(), Bounds.UP);
+        BigDecimal numerator = Bounds.modulusUp(value[0], value[1]).add(rounding, Bounds.UP)
+                .multiply(BigDecimal.valueOf(d), Bounds.UP);
+        return numerator.divide(bound.denominator(), new MathContext(RADIUS_DIGITS, RoundingMode.CEILING));
+    }
+
+    /** {re, im} of p(x + iy) by Horner's rule, each step exact then rounded once to {@code context}; the
+     * coefficients are p's rounded to at least that precision. */
+    private static BigDecimal[] horner(BigDecimal[] coefficients, BigDecimal x, BigDecimal y, MathContext context) {
         BigDecimal re = BigDecimal.ZERO;
         BigDecimal im = BigDecimal.ZERO;
-        for (int k = p.degree(); k >= 0; k--) {
-            Rational c = p.coefficient(k);
-            BigDecimal nextRe = re.multiply(x).subtract(im.multiply(y)).add(c.toBigDecimal(context));
+        for (int k = coefficients.length - 1; k >= 0; k--) {
+            BigDecimal nextRe = re.multiply(x).subtract(im.multiply(y)).add(coefficients[k]);
             BigDecimal nextIm = re.multiply(y).add(im.multiply(x));
             re = nextRe.round(context);
             im = nextIm.round(context);

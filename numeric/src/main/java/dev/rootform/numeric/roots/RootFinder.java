@@ -24,8 +24,9 @@ import org.apfloat.Apcomplex;
  * ({@link AberthRefiner}; O. Aberth, Math. Comp. 27 (1973) 339–344; L. W. Ehrlich, Comm. ACM 10
  * (1967) 107–108), then an independent certificate by the Braess–Hadeler inclusion theorem
  * ({@link InclusionCertificate}; D. Braess and K. P. Hadeler, Numer. Math. 21 (1973) 161–165).
- * When certification fails (an unresolved cluster or too wide disks) the working precision is
- * doubled and the iteration resumed, at most {@link #MAX_ESCALATIONS} times.
+ * When certification fails the working precision is raised and the iteration resumed, at most
+ * {@link #MAX_ESCALATIONS} times: by the measured shortfall plus {@link #GUARD_DIGITS} when disks
+ * are merely too wide, otherwise (unresolved cluster) doubled.
  *
  * <p>Immutable and thread-safe.
  */
@@ -103,15 +104,21 @@ public final class RootFinder {
         Apcomplex[] z = Seeds.of(p, precision);
         for (int attempt = 0; attempt <= MAX_ESCALATIONS; attempt++) {
             new AberthRefiner(p, precision).refine(z, MAX_SWEEPS);
-            Optional<List<Enclosure>> certified = ConjugateSymmetry.centres(z, precision)
-                    .flatMap(centres -> InclusionCertificate.certify(p, centres, digits));
-            if (certified.isPresent()) {
-                return certified.get();
+            Optional<CentreSet> centres = ConjugateSymmetry.centres(z, precision);
+            int missing = InclusionCertificate.UNKNOWN;
+            if (centres.isPresent()) {
+                InclusionCertificate.Outcome outcome = InclusionCertificate.certify(p, centres.get(), digits);
+                if (outcome.enclosures().isPresent()) {
+                    return outcome.enclosures().get();
+                }
+                missing = outcome.missingDigits();
             }
-            precision *= 2;
+            precision = missing == InclusionCertificate.UNKNOWN
+                    ? 2 * precision
+                    : Math.min(2 * precision, precision + missing + GUARD_DIGITS);
         }
         throw new IllegalStateException("could not certify the roots of a degree-" + p.degree()
                 + " polynomial to " + digits + " digits within " + MAX_ESCALATIONS
-                + " precision doublings (working precision reached " + precision / 2 + " digits)");
+                + " precision increases");
     }
 }
