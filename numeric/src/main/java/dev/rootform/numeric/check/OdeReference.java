@@ -1,0 +1,97 @@
+package dev.rootform.numeric.check;
+
+import dev.rootform.symbolic.algebra.Rational;
+import java.util.List;
+import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
+import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
+
+/**
+ * An independent numeric reference for the homogeneous linear ODE Σ_{j=0..k} a_j·y^{(j)}(t) = 0
+ * with constant rational coefficients (a_k ≠ 0): approximate values of the solution with given
+ * initial derivatives at t0, obtained by integrating the equivalent first-order system
+ * u_j' = u_{j+1} (j &lt; k−1), u_{k−1}' = −Σ_{j&lt;k} a_j·u_j / a_k.
+ *
+ * <p>Method: the embedded Runge–Kutta pair of J. R. Dormand and P. J. Prince, "A family of
+ * embedded Runge–Kutta formulae", J. Comput. Appl. Math. 6 (1980) 19–26, in its 8(5,3) variant
+ * DOP853 (E. Hairer, S. P. Nørsett, G. Wanner, Solving Ordinary Differential Equations I, 2nd ed.,
+ * Springer 1993), as implemented by Commons Math, with step-size control at relative tolerance
+ * {@link #RELATIVE_TOLERANCE} and absolute tolerance {@link #RELATIVE_TOLERANCE}·scale, where scale
+ * is the largest of 1 and the |initial derivatives|. Each point is reached by a separate integration
+ * from t0, forward or backward. The values are approximate: local errors are controlled, global
+ * error is not bounded (it grows with |t − t0| and with the growth rate of the solution).
+ */
+public final class OdeReference {
+    /** Relative tolerance of the step-size control (absolute: this times the initial scale). */
+    public static final double RELATIVE_TOLERANCE = 1e-12;
+    /** Smallest step, relative to the integration span. */
+    private static final double MIN_STEP_FRACTION = 1e-14;
+
+    private OdeReference() {
+    }
+
+    /**
+     * Approximations of y(points[i]).
+     *
+     * @param coefficients a_0, …, a_k with a_k ≠ 0 and k ≥ 1
+     * @param t0 the initial time
+     * @param initialDerivatives y(t0), y'(t0), …, y^{(k−1)}(t0)
+     * @param points where to evaluate y
+     * @throws IllegalArgumentException on an order below 1, a zero leading coefficient or a wrong
+     *     number of initial values
+     */
+    public static double[] values(List<Rational> coefficients, Rational t0, List<Rational> initialDerivatives,
+            double[] points) {
+        int k = coefficients.size() - 1;
+        if (k < 1 || coefficients.get(k).isZero()) {
+            throw new IllegalArgumentException("need order ≥ 1 and a non-zero leading coefficient");
+        }
+        if (initialDerivatives.size() != k) {
+            throw new IllegalArgumentException("expected " + k + " initial values, got " + initialDerivatives.size());
+        }
+        double[] ratios = new double[k];
+        for (int j = 0; j < k; j++) {
+            ratios[j] = coefficients.get(j).divide(coefficients.get(k)).doubleValue();
+        }
+        double[] start = new double[k];
+        double scale = 1;
+        for (int j = 0; j < k; j++) {
+            start[j] = initialDerivatives.get(j).doubleValue();
+            scale = Math.max(scale, Math.abs(start[j]));
+        }
+        FirstOrderDifferentialEquations system = new CompanionSystem(ratios);
+        double begin = t0.doubleValue();
+        double[] result = new double[points.length];
+        for (int i = 0; i < points.length; i++) {
+            double span = Math.abs(points[i] - begin);
+            if (span == 0) {
+                result[i] = start[0];
+                continue;
+            }
+            DormandPrince853Integrator integrator = new DormandPrince853Integrator(
+                    MIN_STEP_FRACTION * span, span, RELATIVE_TOLERANCE * scale, RELATIVE_TOLERANCE);
+            double[] state = start.clone();
+            integrator.integrate(system, begin, state, points[i], state);
+            result[i] = state[0];
+        }
+        return result;
+    }
+
+    /** u' = C·u for the companion matrix C of the normalised equation. */
+    private record CompanionSystem(double[] ratios) implements FirstOrderDifferentialEquations {
+        @Override
+        public int getDimension() {
+            return ratios.length;
+        }
+
+        @Override
+        public void computeDerivatives(double t, double[] u, double[] du) {
+            int k = ratios.length;
+            double last = 0;
+            for (int j = 0; j < k; j++) {
+                last -= ratios[j] * u[j];
+            }
+            System.arraycopy(u, 1, du, 0, k - 1);
+            du[k - 1] = last;
+        }
+    }
+}
