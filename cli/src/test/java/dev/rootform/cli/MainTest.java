@@ -55,7 +55,7 @@ class MainTest {
         assertTrue(value.replace("-", "").replace("0.", "").length() >= 39, value);
     }
 
-    @ParameterizedTest(name = "{0}")
+    @ParameterizedTest(name = "[{index}] {0}")
     @CsvSource(delimiter = '|', value = {
         "y'' + (2y' = 0|unbalanced",
         "y'' + z = 0|",
