@@ -38,6 +38,8 @@ public final class TextRenderer {
                 .line("characteristic", s.characteristic().toString(EquationText.LAMBDA))
                 .line("factored", EquationText.factorisation(s.characteristic(), s.factors()))
                 .section("roots", roots(s.roots(), r))
+                .line("basis", BasisCoefficient.of(s.general()).stream().map(BasisCoefficient::basis)
+                        .collect(Collectors.joining(", ")))
                 .section("solution", solution(s.closedForm()))
                 .section("verification", verification(r));
         if (!r.values().isEmpty()) {

@@ -11,9 +11,10 @@ import java.util.Objects;
  * rationals with a_k ≠ 0.
  *
  * <p>For a difference equation the terms as written were x[n + shift + j]; {@code shift} is the
- * lowest offset that appeared (e.g. -2 for {@code x[n] = 3x[n-1] - 2x[n-2]}), so the normalised
- * equation Σ a_j x[m + j] = forcing(m - shift) holds with m = n + shift. For differential equations
- * {@code shift} is 0.
+ * lowest offset that appeared when it is negative (e.g. -2 for {@code x[n] = 3x[n-1] - 2x[n-2]}),
+ * else 0, so the normalised equation Σ a_j x[m + j] = forcing(m - shift) holds with m = n + shift.
+ * Forward shifts that skip x[n] ({@code x[n+3] = 2x[n+1]}) keep zero coefficients a_0.., which
+ * make λ = 0 a root. For differential equations {@code shift} is 0.
  *
  * @param domain difference or differential
  * @param function name of the unknown, e.g. {@code y} or {@code x}

@@ -25,7 +25,10 @@ final class NormalForm {
             throw new InputException("the unknown " + shape.function() + " cancels out", source, position);
         }
         boolean recurrence = shape.domain() == Domain.DIFFERENCE;
-        int low = recurrence ? difference.unknown().firstKey() : 0;
+        // a recurrence holds for n >= 0 wherever its terms are defined: backward shifts (x[n-2]) start it
+        // later, while forward shifts that skip x[n] (x[n+3] = 2x[n+1]) leave the first values free,
+        // i.e. λ = 0 is a root of the characteristic polynomial
+        int low = recurrence ? Math.min(0, difference.unknown().firstKey()) : 0;
         int high = difference.unknown().lastKey();
         if (high == low) {
             throw new InputException("order 0: " + (recurrence ? "no shift of " : "no derivative of ")

@@ -17,18 +17,20 @@ import java.util.Optional;
  * @param factors monic irreducible factors of χ with multiplicities
  * @param roots the exact roots, factor by factor
  * @param closedForm the real closed form that renderers walk
+ * @param general the general solution, whose terms are the basis functions with free constants
  * @param exact the fitted solution in number-field form (empty for a general solution)
  * @param checks the exact verification steps, all run
  * @since 0.1
  */
 public record Solution(Problem problem, RationalPolynomial characteristic, List<Factor> factors,
-        List<ExactRoot> roots, ClosedForm closedForm, Optional<ExactSolution> exact, List<Check> checks) {
+        List<ExactRoot> roots, ClosedForm closedForm, ClosedForm general, Optional<ExactSolution> exact, List<Check> checks) {
     public Solution {
         Objects.requireNonNull(problem, "problem");
         Objects.requireNonNull(characteristic, "characteristic");
         factors = List.copyOf(factors);
         roots = List.copyOf(roots);
         Objects.requireNonNull(closedForm, "closedForm");
+        Objects.requireNonNull(general, "general");
         Objects.requireNonNull(exact, "exact");
         checks = List.copyOf(checks);
     }

@@ -4,6 +4,7 @@ import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.NumberField;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.backend.JasFactorizer;
+import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
@@ -36,14 +37,15 @@ public final class Solver {
         }
         RationalPolynomial chi = eq.characteristicPolynomial();
         List<Factor> factors = JasFactorizer.factor(chi);
+        ClosedForm general = Presenter.general(eq, factors);
         if (problem.conditions().isEmpty()) {
-            return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.general(eq, factors),
+            return new Solution(problem, chi, factors, Presenter.roots(factors), general, general,
                     Optional.empty(), List.of(basisCheck(eq, factors)));
         }
         InitialState state = ConditionFitter.fit(eq, problem.conditions());
         ExactSolution exact = ExactSolver.solve(eq, factors, state);
         List<Check> checks = ExactVerifier.verify(exact, state, problem.conditions());
-        return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact),
+        return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact), general,
                 Optional.of(exact), checks);
     }
 

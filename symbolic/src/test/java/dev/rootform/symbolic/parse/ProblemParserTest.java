@@ -73,6 +73,8 @@ class ProblemParserTest {
         "a[k+1] = 2a[k]                  | k | 0  | -2 1",
         "2 x[n-1] + x[n+1] = 0           | n | -1 | 2 0 1",
         "(E-2)^2 x[n-1] = 0              | n | -1 | 4 -4 1",
+        "x[n+3] = 2x[n+1]                | n | 0  | 0 -2 0 1",
+        "E (E-2) x = 0                   | n | 0  | 0 -2 1",
     })
     void recurrenceCoefficients(String text, String index, int shift, String expected) {
         LinearEquation e = equation(text);
