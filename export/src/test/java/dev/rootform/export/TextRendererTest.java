@@ -22,6 +22,7 @@ class TextRendererTest {
             factored        λ^2 - λ - 1
             roots           1/2 + 1/2·√5  ≈ 1.618033989    multiplicity 1
                             1/2 - 1/2·√5  ≈ -0.6180339887  multiplicity 1
+            basis           (1/2 + 1/2·√5)^n, (1/2 - 1/2·√5)^n
             solution        x[n] = (1/5·√5)·(1/2 + 1/2·√5)^n - (1/5·√5)·(1/2 - 1/2·√5)^n
                             for n ≥ 0
             """;

@@ -2,8 +2,6 @@ package dev.rootform.numeric.analysis;
 
 import dev.rootform.numeric.check.OdeReference;
 import dev.rootform.numeric.roots.Enclosure;
-import dev.rootform.numeric.roots.RootFinder;
-import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.ExactRoot;
@@ -58,15 +56,10 @@ public final class Analyzer {
      *     non-integer index or below its first index
      */
     public Analysis analyze(Solution solution, List<Rational> points) {
-        Map<RationalPolynomial, List<Enclosure>> enclosures = new HashMap<>();
-        for (Factor f : solution.factors()) {
-            if (f.degree() >= 3) {
-                enclosures.put(f.polynomial(), new RootFinder(digits + GUARD_DIGITS).roots(f.polynomial()));
-            }
-        }
+        RootCache cache = new RootCache();
         List<RootApproximation> roots = new ArrayList<>();
         for (ExactRoot r : solution.roots()) {
-            roots.add(approximate(r, enclosures));
+            roots.add(approximate(r, cache));
         }
         List<PointValue> values = new ArrayList<>();
         List<Check> checks = new ArrayList<>();
@@ -77,16 +70,16 @@ public final class Analyzer {
         if (exact.isPresent()) {
             ExactSolution s = exact.get();
             for (Rational p : points) {
-                values.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p));
+                values.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p, digits, cache));
             }
             if (s.domain() == Domain.DIFFERENTIAL) {
-                checks.add(integratorCheck(s));
+                checks.add(integratorCheck(s, cache));
             }
         }
         return new Analysis(roots, values, checks, List.of());
     }
 
-    private RootApproximation approximate(ExactRoot root, Map<RationalPolynomial, List<Enclosure>> enclosures) {
+    private RootApproximation approximate(ExactRoot root, RootCache cache) {
         MathContext mc = new MathContext(digits);
         if (root instanceof ExactRoot.Explicit e) {
             return new RootApproximation(root, e.re().toBigDecimal(mc), e.im().toBigDecimal(mc), BigDecimal.ZERO);
@@ -99,7 +92,7 @@ public final class Analyzer {
                     FunctionEvaluator.toBigDecimal(ApfloatMath.sin(angle), digits), BigDecimal.ZERO);
         }
         if (root instanceof ExactRoot.Implicit i) {
-            Enclosure z = enclosures.get(i.factor()).get(i.index() - 1);
+            Enclosure z = cache.roots(i.factor(), digits + GUARD_DIGITS).get(i.index() - 1);
             return new RootApproximation(root, z.re().round(mc), z.im().round(mc), z.radius());
         }
         throw new AssertionError(root);
@@ -117,20 +110,21 @@ public final class Analyzer {
         return new PointValue(at, v.toBigDecimal(new MathContext(digits)), Optional.of(v));
     }
 
-    private PointValue functionValue(ExactSolution s, Rational t) {
+    /** y(t) to {@code wanted} significant digits. */
+    private static PointValue functionValue(ExactSolution s, Rational t, int wanted, RootCache cache) {
         if (t.equals(s.origin())) {
             Rational v = s.derivativeAtOrigin(0);
-            return new PointValue(t, v.toBigDecimal(new MathContext(digits)), Optional.of(v));
+            return new PointValue(t, v.toBigDecimal(new MathContext(wanted)), Optional.of(v));
         }
-        int working = digits + GUARD_DIGITS;
+        int working = wanted + GUARD_DIGITS;
         while (working <= MAX_WORKING_DIGITS) {
-            Apfloat[] low = evaluate(s, t, working);
-            Apfloat[] high = evaluate(s, t, working + GUARD_DIGITS);
+            Apfloat[] low = evaluate(s, t, working, working + GUARD_DIGITS, cache);
+            Apfloat[] high = evaluate(s, t, working + GUARD_DIGITS, working + GUARD_DIGITS, cache);
             Apfloat difference = ApfloatMath.abs(low[0].subtract(high[0]));
-            Apfloat relative = ApfloatMath.abs(high[0]).multiply(new Apfloat("1e-" + (digits + 2), working));
+            Apfloat relative = ApfloatMath.abs(high[0]).multiply(new Apfloat("1e-" + (wanted + 2), working));
             Apfloat floor = high[1].multiply(new Apfloat("1e-" + (working - GUARD_DIGITS / 2), working));
             if (difference.compareTo(relative) <= 0 || difference.compareTo(floor) <= 0) {
-                return new PointValue(t, FunctionEvaluator.toBigDecimal(high[0], digits), Optional.empty());
+                return new PointValue(t, FunctionEvaluator.toBigDecimal(high[0], wanted), Optional.empty());
             }
             working += GUARD_DIGITS + (int) Math.ceil(
                     ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10));
@@ -138,18 +132,19 @@ public final class Analyzer {
         throw new IllegalStateException("value at t = " + t + " did not settle within " + MAX_WORKING_DIGITS + " digits");
     }
 
-    private static Apfloat[] evaluate(ExactSolution s, Rational t, int working) {
+    /** y(t) at {@code working} digits with roots certified to {@code rootDigits} &ge; working. */
+    private static Apfloat[] evaluate(ExactSolution s, Rational t, int working, int rootDigits, RootCache cache) {
         Map<RationalPolynomial, List<Enclosure>> roots = new HashMap<>();
         for (var c : s.components()) {
             RationalPolynomial f = c.factor().polynomial();
             if (f.degree() > 1) {
-                roots.put(f, new RootFinder(working).roots(f));
+                roots.put(f, cache.roots(f, rootDigits));
             }
         }
         return new FunctionEvaluator(s, roots).value(t, working);
     }
 
-    private Check integratorCheck(ExactSolution s) {
+    private static Check integratorCheck(ExactSolution s, RootCache cache) {
         int k = s.equation().order();
         List<Rational> initial = new ArrayList<>(k);
         for (int d = 0; d < k; d++) {
@@ -161,11 +156,10 @@ public final class Analyzer {
             points[i] = t0 + CHECK_OFFSETS[i];
         }
         double[] reference = OdeReference.values(s.equation().coefficients(), s.origin(), initial, points);
-        Analyzer doubles = new Analyzer(17);
         double scale = 1;
         double worst = 0;
         for (int i = 0; i < points.length; i++) {
-            double closed = doubles.functionValue(s, Rational.of(BigDecimal.valueOf(points[i]))).value().doubleValue();
+            double closed = functionValue(s, Rational.of(BigDecimal.valueOf(points[i])), 17, cache).value().doubleValue();
             scale = Math.max(scale, Math.abs(closed));
             worst = Math.max(worst, Math.abs(closed - reference[i]));
         }

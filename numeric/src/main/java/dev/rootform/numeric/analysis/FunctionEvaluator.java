@@ -35,7 +35,7 @@ final class FunctionEvaluator {
         Apfloat largest = Apfloat.ZERO;
         for (Component c : solution.components()) {
             for (Apcomplex alpha : rootValues(c.factor().polynomial(), precision)) {
-                Apcomplex e = ApcomplexMath.exp(alpha.multiply(u));
+                Apcomplex e = ComplexExp.exp(alpha.multiply(u), precision);
                 Apcomplex power = new Apfloat(1, precision);
                 for (RationalPolynomial ci : c.coefficients()) {
                     Apcomplex term = evaluate(ci, alpha, precision).multiply(power).multiply(e);

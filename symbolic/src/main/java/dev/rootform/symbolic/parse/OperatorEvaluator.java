@@ -37,6 +37,10 @@ final class OperatorEvaluator {
                     + (symbol.equals(Names.SHIFT_OPERATOR) ? "recurrence; use E" : "differential equation; use D"),
                     source, node.start());
         }
+        if (node instanceof Node.Call call && call.name().equals(symbol)) {
+            // D (D+1) reads like a call; for the operator symbol it can only be a product
+            return RationalPolynomial.X.multiply(polynomial(call.argument()));
+        }
         if (node instanceof Node.Negation negation) {
             return polynomial(negation.operand()).negate();
         }

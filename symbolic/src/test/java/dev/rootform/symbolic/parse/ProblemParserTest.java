@@ -74,6 +74,7 @@ class ProblemParserTest {
         "2 x[n-1] + x[n+1] = 0           | n | -1 | 2 0 1",
         "(E-2)^2 x[n-1] = 0              | n | -1 | 4 -4 1",
         "x[n+3] = 2x[n+1]                | n | 0  | 0 -2 0 1",
+        "(E^2 - 2E) x = 0                | n | 0  | 0 -2 1",
         "E (E-2) x = 0                   | n | 0  | 0 -2 1",
     })
     void recurrenceCoefficients(String text, String index, int shift, String expected) {
