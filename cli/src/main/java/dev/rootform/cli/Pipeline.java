@@ -32,6 +32,6 @@ public final class Pipeline {
         Problem problem = ProblemParser.parse(text, given, variable);
         Solution solution = Solver.solve(problem);
         Analysis analysis = new Analyzer(digits).analyze(solution, points);
-        return new Report(solution, analysis.roots(), analysis.values(), analysis.checks(), analysis.warnings(), digits);
+        return new Report(solution, analysis, digits);
     }
 }

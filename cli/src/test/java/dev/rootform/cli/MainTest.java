@@ -63,7 +63,10 @@ class MainTest {
         "t*y' + y = 0|variable coefficient",
         "''|empty",
         "y'' + y = 0; y(0) = 1|needs exactly 2",
-        "y'' + y = sin(t); y(0) = 1; y'(0) = 0|not supported yet",
+        "y'' + y = tan(t); y(0) = 1; y'(0) = 0|out of scope",
+        "x[n+1] = x[n] + cos(2n); x[0] = 1|not a rational multiple of π",
+        "x[n+1] = x[n] + 1/n; x[0] = 1|",
+        "x[n+1] = x[n] + sin(pi n/4); x[0] = 1|irrational value",
         "x[n+1] = 2x[n]; x[0] = 1; x[0] = 2|",
         "y'' + y = 0; y(0) = 0; y(3) = 1|boundary-value",
     })

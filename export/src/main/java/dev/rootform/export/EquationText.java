@@ -91,8 +91,17 @@ final class EquationText {
 
     /** The forcing terms, written through the formula walk as a closed form with origin 0. */
     private static String rightSide(LinearEquation eq) {
+        return forcing(eq, eq.forcing());
+    }
+
+    /** One forcing term as written, e.g. {@code 2·sin(3t)}. */
+    static String forcingTerm(LinearEquation eq, ForcingTerm term) {
+        return forcing(eq, List.of(term));
+    }
+
+    private static String forcing(LinearEquation eq, List<ForcingTerm> forcing) {
         List<Term> terms = new ArrayList<>();
-        for (ForcingTerm t : eq.forcing()) {
+        for (ForcingTerm t : forcing) {
             Coefficient c = new Coefficient.Exact(Surd.of(t.coefficient()));
             Surd growth = Surd.of(t.exponential());
             if (t.oscillation() == ForcingTerm.Oscillation.NONE) {

@@ -1,6 +1,7 @@
 package dev.rootform.export;
 
 import dev.rootform.numeric.analysis.PointValue;
+import dev.rootform.numeric.analysis.SteadyState;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.ExactRoot;
@@ -45,10 +46,21 @@ public final class TextRenderer {
         if (!r.values().isEmpty()) {
             out.section("values", r.values().stream().map(v -> value(s.closedForm(), v, r.digits())).toList());
         }
+        if (!r.steadyStates().isEmpty()) {
+            out.section("steady state", r.steadyStates().stream().map(st -> steadyState(s, st, r.digits())).toList());
+        }
         if (!r.warnings().isEmpty()) {
             out.section("warnings", r.warnings());
         }
         return out.toString();
+    }
+
+    /** e.g. {@code input 2·sin(3t): amplitude 0.25, gain 0.125, phase -180°}. */
+    private static String steadyState(Solution s, SteadyState st, int digits) {
+        return "input " + EquationText.forcingTerm(s.problem().equation(), st.input())
+                + ": amplitude " + Numbers.decimal(st.amplitude(), digits)
+                + ", gain " + Numbers.decimal(st.gain(), digits)
+                + ", phase " + Numbers.decimal(st.phaseDegrees(), digits) + "°";
     }
 
     private static String conditions(LinearEquation eq, List<Condition> conditions) {
@@ -77,6 +89,10 @@ public final class TextRenderer {
     private static List<String> solution(ClosedForm f) {
         List<String> lines = new ArrayList<>();
         lines.add(EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f));
+        if (!f.particularTerms().isEmpty()) {
+            lines.add("transient (homogeneous) part: " + Formulas.plain(f.withTerms(f.transientTerms())));
+            lines.add("steady (particular) part: " + Formulas.plain(f.withTerms(f.particularTerms())));
+        }
         if (f.domain() == Domain.DIFFERENCE) {
             lines.add("for " + f.variable() + " ≥ " + f.validFrom());
             long first = f.origin().toBigInteger().longValueExact();

@@ -1,5 +1,6 @@
 package dev.rootform.export;
 
+import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.analysis.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
@@ -63,7 +64,7 @@ final class Fixtures {
         for (ExactRoot r : s.roots()) {
             roots.add(approximate(r));
         }
-        return new Report(s, roots, values, numericChecks, warnings, 10);
+        return new Report(s, new Analysis(roots, values, numericChecks, List.of(), warnings), 10);
     }
 
     static PointValue value(long at, long exact) {

@@ -1,5 +1,6 @@
 package dev.rootform.numeric.analysis;
 
+import dev.rootform.numeric.check.ForcingFunction;
 import dev.rootform.numeric.check.OdeReference;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.symbolic.algebra.Rational;
@@ -76,7 +77,23 @@ public final class Analyzer {
                 checks.add(integratorCheck(s, cache));
             }
         }
-        return new Analysis(roots, values, checks, List.of());
+        List<SteadyState> steady = strictlyStable(solution.problem().equation().domain(), roots)
+                ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
+        return new Analysis(roots, values, checks, steady, List.of());
+    }
+
+    /** Every root certainly inside the stability region: Re λ &lt; 0, or |λ| &lt; 1, with its enclosure. */
+    private static boolean strictlyStable(Domain domain, List<RootApproximation> roots) {
+        for (RootApproximation r : roots) {
+            BigDecimal edge = domain == Domain.DIFFERENTIAL
+                    ? r.re().add(r.radius())
+                    : r.re().pow(2).add(r.im().pow(2)).sqrt(MathContext.DECIMAL64).add(r.radius()).subtract(BigDecimal.ONE)
+                            .add(new BigDecimal("1e-15"));
+            if (edge.signum() >= 0) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private RootApproximation approximate(ExactRoot root, RootCache cache) {
@@ -155,7 +172,8 @@ public final class Analyzer {
         for (int i = 0; i < points.length; i++) {
             points[i] = t0 + CHECK_OFFSETS[i];
         }
-        double[] reference = OdeReference.values(s.equation().coefficients(), s.origin(), initial, points);
+        double[] reference = OdeReference.values(s.equation().coefficients(),
+                ForcingFunction.of(s.equation().forcing()), s.origin(), initial, points);
         double scale = 1;
         double worst = 0;
         for (int i = 0; i < points.length; i++) {

@@ -2,14 +2,15 @@ package dev.rootform.numeric.check;
 
 import dev.rootform.symbolic.algebra.Rational;
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 
 /**
- * An independent numeric reference for the homogeneous linear ODE Σ_{j=0..k} a_j·y^{(j)}(t) = 0
- * with constant rational coefficients (a_k ≠ 0): approximate values of the solution with given
+ * An independent numeric reference for the linear ODE Σ_{j=0..k} a_j·y^{(j)}(t) = g(t) with
+ * constant rational coefficients (a_k ≠ 0): approximate values of the solution with given
  * initial derivatives at t0, obtained by integrating the equivalent first-order system
- * u_j' = u_{j+1} (j &lt; k−1), u_{k−1}' = −Σ_{j&lt;k} a_j·u_j / a_k.
+ * u_j' = u_{j+1} (j &lt; k−1), u_{k−1}' = (g(t) − Σ_{j&lt;k} a_j·u_j) / a_k.
  *
  * <p>Method: the embedded Runge–Kutta pair of J. R. Dormand and P. J. Prince, "A family of
  * embedded Runge–Kutta formulae", J. Comput. Appl. Math. 6 (1980) 19–26, in its 8(5,3) variant
@@ -41,6 +42,16 @@ public final class OdeReference {
      */
     public static double[] values(List<Rational> coefficients, Rational t0, List<Rational> initialDerivatives,
             double[] points) {
+        return values(coefficients, t -> 0, t0, initialDerivatives, points);
+    }
+
+    /**
+     * Approximations of y(points[i]) for the forced equation with right-hand side {@code forcing}.
+     *
+     * @throws IllegalArgumentException as {@link #values(List, Rational, List, double[])}
+     */
+    public static double[] values(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
+            List<Rational> initialDerivatives, double[] points) {
         int k = coefficients.size() - 1;
         if (k < 1 || coefficients.get(k).isZero()) {
             throw new IllegalArgumentException("need order ≥ 1 and a non-zero leading coefficient");
@@ -58,7 +69,8 @@ public final class OdeReference {
             start[j] = initialDerivatives.get(j).doubleValue();
             scale = Math.max(scale, Math.abs(start[j]));
         }
-        FirstOrderDifferentialEquations system = new CompanionSystem(ratios);
+        double lead = coefficients.get(k).doubleValue();
+        FirstOrderDifferentialEquations system = new CompanionSystem(ratios, t -> forcing.applyAsDouble(t) / lead);
         double begin = t0.doubleValue();
         double[] result = new double[points.length];
         for (int i = 0; i < points.length; i++) {
@@ -76,8 +88,8 @@ public final class OdeReference {
         return result;
     }
 
-    /** u' = C·u for the companion matrix C of the normalised equation. */
-    private record CompanionSystem(double[] ratios) implements FirstOrderDifferentialEquations {
+    /** u' = C·u + (0, …, 0, g(t)/a_k) for the companion matrix C of the normalised equation. */
+    private record CompanionSystem(double[] ratios, DoubleUnaryOperator input) implements FirstOrderDifferentialEquations {
         @Override
         public int getDimension() {
             return ratios.length;
@@ -86,7 +98,7 @@ public final class OdeReference {
         @Override
         public void computeDerivatives(double t, double[] u, double[] du) {
             int k = ratios.length;
-            double last = 0;
+            double last = input.applyAsDouble(t);
             for (int j = 0; j < k; j++) {
                 last -= ratios[j] * u[j];
             }

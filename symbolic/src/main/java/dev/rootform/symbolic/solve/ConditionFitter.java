@@ -12,10 +12,13 @@ import java.util.List;
 /**
  * Reduces k conditions given at any points to the {@link InitialState} at one origin, exactly.
  *
- * <p>On the solution space of an operator with characteristic polynomial χ, L^a acts as
- * (λ^a mod χ)(L), so a condition x[origin + a] = v (difference) or y^(d)(t0) = v (differential)
- * is the rational linear equation Σ_j [λ^a mod χ]_j·v_j = v in the initial values. The k×k system is
- * solved by exact elimination; λ^a mod χ is computed by binary powering, O(k² log a).
+ * <p>The solution lies in the kernel of an operator M with characteristic polynomial μ (μ = χ for
+ * a homogeneous equation; μ = χ·A with A the forcing's annihilator otherwise), where L^a acts as
+ * (λ^a mod μ)(L). So a condition x[origin + a] = v (difference) or y^(d)(t0) = v (differential)
+ * is the rational linear equation Σ_j [λ^a mod μ]_j·w_j = v in the K = deg μ initial values w. A
+ * forced equation adds deg A equations (L y)^(j) = g^(j) at the origin: L y - g lies in the kernel
+ * of A, so agreeing there makes L y = g everywhere. The K×K system is solved by exact elimination;
+ * λ^a mod μ is computed by binary powering, O(K² log a).
  *
  * <p>The origin is min(0, lowest condition index) for difference equations. A differential
  * equation's conditions must all be at one point t0, which becomes the origin.
@@ -27,41 +30,54 @@ public final class ConditionFitter {
     }
 
     /**
+     * @param operator μ, a multiple of the characteristic polynomial that annihilates the forcing
      * @throws InputException if the number of conditions is not the order, the conditions are at
      *     several points of a differential equation, or they are inconsistent or do not determine
      *     the solution
      */
-    public static InitialState fit(LinearEquation equation, List<Condition> conditions) {
+    public static InitialState fit(LinearEquation equation, RationalPolynomial operator, List<Condition> conditions) {
         int k = equation.order();
         if (conditions.size() != k) {
             throw new InputException(conditions.size() + " condition" + (conditions.size() == 1 ? "" : "s")
                     + " given, but an equation of order " + k + " needs exactly " + k, "", -1);
         }
         Rational origin = origin(equation.domain(), conditions);
-        RationalPolynomial chi = equation.characteristicPolynomial();
         List<List<Rational>> rows = new ArrayList<>();
         List<Rational> rhs = new ArrayList<>();
         for (Condition c : conditions) {
             long power = equation.domain() == Domain.DIFFERENCE
                     ? c.at().subtract(origin).toBigInteger().longValueExact()
                     : c.derivative();
-            RationalPolynomial reduced = powerModulo(power, chi);
-            List<Rational> row = new ArrayList<>(k);
-            for (int j = 0; j < k; j++) {
-                row.add(reduced.coefficient(j));
-            }
-            rows.add(row);
+            rows.add(row(powerModulo(power, operator), operator.degree()));
             rhs.add(c.value());
+        }
+        for (int j = 0; j < operator.degree() - k; j++) {
+            RationalPolynomial applied = RationalPolynomial.ZERO;
+            for (int i = 0; i <= k; i++) {
+                applied = applied.add(powerModulo(i + j, operator).multiply(equation.coefficients().get(i)));
+            }
+            rows.add(row(applied, operator.degree()));
+            rhs.add(equation.domain() == Domain.DIFFERENCE
+                    ? ForcingValues.at(equation, origin.toBigInteger().longValueExact() + j)
+                    : ForcingValues.derivative(equation, origin, j));
         }
         LinearSystem.Result result = LinearSystem.solve(rows, rhs);
         if (!result.consistent()) {
             throw new InputException("the conditions are inconsistent: no solution satisfies all of them", "", -1);
         }
         if (!result.unique()) {
-            throw new InputException("the conditions do not determine the solution: only " + result.rank()
-                    + " of the " + k + " are independent", "", -1);
+            throw new InputException("the conditions do not determine the solution: only "
+                    + (result.rank() - operator.degree() + k) + " of the " + k + " are independent", "", -1);
         }
         return new InitialState(origin, result.solution());
+    }
+
+    private static List<Rational> row(RationalPolynomial reduced, int size) {
+        List<Rational> row = new ArrayList<>(size);
+        for (int j = 0; j < size; j++) {
+            row.add(reduced.coefficient(j));
+        }
+        return row;
     }
 
     private static Rational origin(Domain domain, List<Condition> conditions) {
@@ -85,18 +101,18 @@ public final class ConditionFitter {
         return point;
     }
 
-    /** λ^power mod χ by binary powering. */
-    static RationalPolynomial powerModulo(long power, RationalPolynomial chi) {
-        RationalPolynomial result = RationalPolynomial.ONE.mod(chi);
-        RationalPolynomial base = RationalPolynomial.X.mod(chi);
+    /** λ^power mod the modulus, by binary powering. */
+    static RationalPolynomial powerModulo(long power, RationalPolynomial modulus) {
+        RationalPolynomial result = RationalPolynomial.ONE.mod(modulus);
+        RationalPolynomial base = RationalPolynomial.X.mod(modulus);
         long e = power;
         while (e > 0) {
             if ((e & 1) == 1) {
-                result = result.multiply(base).mod(chi);
+                result = result.multiply(base).mod(modulus);
             }
             e >>= 1;
             if (e > 0) {
-                base = base.multiply(base).mod(chi);
+                base = base.multiply(base).mod(modulus);
             }
         }
         return result;

@@ -9,8 +9,9 @@ import java.util.List;
 import java.util.Objects;
 
 /**
- * The fitted solution of a homogeneous equation in exact form: a sum of {@link Component}s, one
- * per irreducible factor of the characteristic polynomial with nonzero roots.
+ * A fitted solution in exact form: a sum of {@link Component}s, one per irreducible factor with
+ * nonzero roots of the operator polynomial μ that annihilates it (the characteristic polynomial χ,
+ * times the forcing's annihilator for a forced equation).
  *
  * <p>Difference equations: the formula holds for n &ge; {@code validFrom}; the values
  * x[origin .. validFrom-1] (present when λ = 0 is a root of multiplicity m, then
@@ -19,11 +20,12 @@ import java.util.Objects;
  *
  * @since 0.1
  */
-public record ExactSolution(LinearEquation equation, Rational origin, long validFrom, List<Rational> leadingValues,
-        List<Component> components) {
+public record ExactSolution(LinearEquation equation, RationalPolynomial operator, Rational origin, long validFrom,
+        List<Rational> leadingValues, List<Component> components) {
 
     public ExactSolution {
         Objects.requireNonNull(equation, "equation");
+        Objects.requireNonNull(operator, "operator");
         Objects.requireNonNull(origin, "origin");
         leadingValues = List.copyOf(leadingValues);
         components = List.copyOf(components);
@@ -86,5 +88,10 @@ public record ExactSolution(LinearEquation equation, Rational origin, long valid
             sum = sum.add(k.trace(total));
         }
         return sum;
+    }
+
+    /** The same solution with other components (e.g. without its transient part). */
+    public ExactSolution withComponents(List<Component> replacement) {
+        return new ExactSolution(equation, operator, origin, validFrom, leadingValues, replacement);
     }
 }

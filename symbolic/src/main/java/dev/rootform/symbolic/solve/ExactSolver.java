@@ -28,24 +28,27 @@ public final class ExactSolver {
     private ExactSolver() {
     }
 
-    /** The solution with the given initial state; {@code factors} is the factorisation of χ. */
-    public static ExactSolution solve(LinearEquation equation, List<Factor> factors, InitialState state) {
-        RationalPolynomial chi = equation.characteristicPolynomial();
-        RationalPolynomial p = transformNumerator(equation.coefficients(), state.values());
+    /**
+     * The solution in the kernel of the operator μ with the given initial state (deg μ values);
+     * {@code factors} is the factorisation of μ.
+     */
+    public static ExactSolution solve(LinearEquation equation, RationalPolynomial operator, List<Factor> factors,
+            InitialState state) {
+        RationalPolynomial p = transformNumerator(operator.coefficients(), state.values());
         boolean difference = equation.domain() == Domain.DIFFERENCE;
-        int zeroMultiplicity = difference ? chi.zeroRootMultiplicity() : 0;
+        int zeroMultiplicity = difference ? operator.zeroRootMultiplicity() : 0;
         List<Component> components = new ArrayList<>();
         for (Factor f : factors) {
             if (difference && f.polynomial().equals(RationalPolynomial.X)) {
                 continue;
             }
-            List<RationalPolynomial> b = Residues.at(f, p, chi);
+            List<RationalPolynomial> b = Residues.at(f, p, operator);
             NumberField k = new NumberField(f.polynomial());
             List<RationalPolynomial> c = difference ? sequenceBasis(k, b, state.origin()) : functionBasis(b);
             components.add(new Component(f, c));
         }
         long origin = difference ? state.origin().toBigInteger().longValueExact() : 0;
-        return new ExactSolution(equation, state.origin(), origin + zeroMultiplicity,
+        return new ExactSolution(equation, operator, state.origin(), origin + zeroMultiplicity,
                 state.values().subList(0, zeroMultiplicity), components);
     }
 

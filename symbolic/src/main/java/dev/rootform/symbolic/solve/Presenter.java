@@ -29,18 +29,39 @@ final class Presenter {
     private Presenter() {
     }
 
-    static ClosedForm fitted(ExactSolution s) {
+    /**
+     * The fitted solution; {@code characteristic} (the factors of χ) decides which terms are
+     * transient (power below the factor's multiplicity in χ) and which are particular.
+     */
+    static ClosedForm fitted(ExactSolution s, List<Factor> characteristic) {
         LinearEquation eq = s.equation();
-        List<Term> terms = new ArrayList<>();
+        List<Term> transients = new ArrayList<>();
+        List<Term> particular = new ArrayList<>();
         for (Component c : s.components()) {
+            int homogeneous = multiplicity(characteristic, c.factor().polynomial());
             for (int i = 0; i < c.coefficients().size(); i++) {
-                RationalPolynomial ci = c.coefficients().get(i);
-                terms.addAll(terms(eq.domain(), c.factor().polynomial(), i, ci));
+                List<Term> terms = terms(eq.domain(), c.factor().polynomial(), i, c.coefficients().get(i));
+                (i < homogeneous ? transients : particular).addAll(terms);
             }
         }
-        terms.removeIf(Presenter::vanishes);
+        transients.removeIf(Presenter::vanishes);
+        particular.removeIf(Presenter::vanishes);
+        List<Term> all = new ArrayList<>(transients);
+        all.addAll(particular);
         return new ClosedForm(eq.domain(), eq.function(), eq.variable(), s.origin(), s.validFrom(),
-                s.leadingValues(), terms, List.of());
+                s.leadingValues(), all, List.of(), transients.size());
+    }
+
+    /** The general solution: basis terms with free constants, followed by a particular solution's terms. */
+    static ClosedForm withParticular(ClosedForm general, ClosedForm particular) {
+        List<Term> all = new ArrayList<>(general.terms());
+        all.addAll(particular.particularTerms());
+        return new ClosedForm(general.domain(), general.function(), general.variable(), particular.origin(),
+                general.validFrom(), general.leadingValues(), all, general.freeConstants(), general.terms().size());
+    }
+
+    static int multiplicity(List<Factor> factors, RationalPolynomial f) {
+        return factors.stream().filter(x -> x.polynomial().equals(f)).mapToInt(Factor::multiplicity).findFirst().orElse(0);
     }
 
     static ClosedForm general(LinearEquation eq, List<Factor> factors) {

@@ -2,20 +2,25 @@ package dev.rootform.symbolic.solve;
 
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.NumberField;
+import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.backend.JasFactorizer;
 import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.ExactRoot;
+import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
-import dev.rootform.symbolic.parse.InputException;
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
- * The exact pipeline: χ → irreducible factors → exact constants from the conditions → verified
- * closed form. Stateless.
+ * The exact pipeline: χ → irreducible factors → (with forcing: times the annihilator A) → exact
+ * constants from the conditions → verified closed form. Stateless.
  *
  * @since 0.1
  */
@@ -24,29 +29,90 @@ public final class Solver {
     }
 
     /**
-     * Solves a homogeneous problem exactly: the fitted solution when conditions are given, else the
-     * general solution with free constants C1..Ck.
+     * Solves a problem exactly: the fitted solution when conditions are given, else the general
+     * solution with free constants C1..Ck (plus a particular solution for a forced equation).
      *
-     * @throws InputException if the equation is forced (not supported yet) or the conditions are
-     *     wrong in number, inconsistent or do not determine the solution
+     * @throws dev.rootform.symbolic.parse.InputException if the forcing has no exact annihilator or
+     *     rational values, or the conditions are wrong in number, inconsistent or do not determine
+     *     the solution
      */
     public static Solution solve(Problem problem) {
         LinearEquation eq = problem.equation();
-        if (!eq.isHomogeneous()) {
-            throw new InputException("equations with a forcing term (right-hand side) are not supported yet", "", -1);
-        }
         RationalPolynomial chi = eq.characteristicPolynomial();
         List<Factor> factors = JasFactorizer.factor(chi);
+        List<Factor> annihilator = eq.isHomogeneous() ? List.of() : Annihilator.of(eq);
+        List<Factor> operatorFactors = merge(factors, annihilator);
+        RationalPolynomial operator = product(chi.leadingCoefficient(), operatorFactors);
         ClosedForm general = Presenter.general(eq, factors);
+        List<ExactRoot> roots = Presenter.roots(factors);
         if (problem.conditions().isEmpty()) {
-            return new Solution(problem, chi, factors, Presenter.roots(factors), general, general,
-                    Optional.empty(), List.of(basisCheck(eq, factors)));
+            if (eq.isHomogeneous()) {
+                return new Solution(problem, chi, factors, roots, general, general, Optional.empty(),
+                        List.of(basisCheck(eq, factors)));
+            }
+            ExactSolution any = ExactSolver.solve(eq, operator, operatorFactors,
+                    ConditionFitter.fit(eq, operator, zeroConditions(eq)));
+            ExactSolution particular = any.withComponents(withoutTransient(any.components(), factors));
+            List<Check> checks = new ArrayList<>();
+            checks.add(basisCheck(eq, factors));
+            checks.addAll(ExactVerifier.verify(particular, List.of()));
+            return new Solution(problem, chi, factors, roots,
+                    Presenter.withParticular(general, Presenter.fitted(particular, factors)), general,
+                    Optional.empty(), checks);
         }
-        InitialState state = ConditionFitter.fit(eq, problem.conditions());
-        ExactSolution exact = ExactSolver.solve(eq, factors, state);
-        List<Check> checks = ExactVerifier.verify(exact, state, problem.conditions());
-        return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact), general,
+        InitialState state = ConditionFitter.fit(eq, operator, problem.conditions());
+        ExactSolution exact = ExactSolver.solve(eq, operator, operatorFactors, state);
+        List<Check> checks = ExactVerifier.verify(exact, problem.conditions());
+        return new Solution(problem, chi, factors, roots, Presenter.fitted(exact, factors), general,
                 Optional.of(exact), checks);
+    }
+
+    /** The factors of both lists, multiplicities added where a factor appears in both (resonance). */
+    static List<Factor> merge(List<Factor> a, List<Factor> b) {
+        Map<RationalPolynomial, Integer> m = new LinkedHashMap<>();
+        for (Factor f : a) {
+            m.merge(f.polynomial(), f.multiplicity(), Integer::sum);
+        }
+        for (Factor f : b) {
+            m.merge(f.polynomial(), f.multiplicity(), Integer::sum);
+        }
+        List<Factor> result = new ArrayList<>();
+        m.forEach((f, k) -> result.add(new Factor(f, k)));
+        result.sort(Comparator.comparingInt(Factor::degree).thenComparing(f -> f.polynomial().toString()));
+        return result;
+    }
+
+    private static RationalPolynomial product(Rational lead, List<Factor> factors) {
+        RationalPolynomial p = RationalPolynomial.constant(lead);
+        for (Factor f : factors) {
+            p = p.multiply(f.polynomial().pow(f.multiplicity()));
+        }
+        return p;
+    }
+
+    /** x[0..k-1] = 0 or y^(i)(0) = 0: the conditions of a particular solution. */
+    private static List<Condition> zeroConditions(LinearEquation eq) {
+        List<Condition> zero = new ArrayList<>();
+        for (int i = 0; i < eq.order(); i++) {
+            zero.add(eq.domain() == Domain.DIFFERENCE
+                    ? new Condition(0, Rational.of(i), Rational.ZERO)
+                    : new Condition(i, Rational.ZERO, Rational.ZERO));
+        }
+        return zero;
+    }
+
+    /** The components with the homogeneous powers (below the multiplicity in χ) set to zero. */
+    private static List<Component> withoutTransient(List<Component> components, List<Factor> characteristic) {
+        List<Component> result = new ArrayList<>();
+        for (Component c : components) {
+            int homogeneous = Presenter.multiplicity(characteristic, c.factor().polynomial());
+            List<RationalPolynomial> kept = new ArrayList<>(c.coefficients());
+            for (int i = 0; i < Math.min(homogeneous, kept.size()); i++) {
+                kept.set(i, RationalPolynomial.ZERO);
+            }
+            result.add(new Component(c.factor(), kept));
+        }
+        return result;
     }
 
     /** Every basis function v^i·α^j·(e^{αv} or α^v) of every factor is annihilated, in Q(α). */
@@ -62,12 +128,13 @@ public final class Solver {
                     for (int l = 0; l < f.multiplicity(); l++) {
                         c.add(l == i ? k.pow(k.generator(), j) : RationalPolynomial.ZERO);
                     }
-                    if (!ExactVerifier.annihilates(eq, new Component(f, c))) {
-                        return new Check("satisfies the equation", false, "basis function of " + f.polynomial() + " fails");
+                    if (!ExactVerifier.annihilates(eq.domain(), eq.coefficients(), new Component(f, c))) {
+                        return new Check("basis solves the homogeneous equation", false, "basis function of " + f.polynomial() + " fails");
                     }
                 }
             }
         }
-        return new Check("satisfies the equation", true, "every basis function, by exact substitution in Q(α)");
+        return new Check("basis solves the homogeneous equation", true,
+                "every basis function, by exact substitution in Q(α)");
     }
 }

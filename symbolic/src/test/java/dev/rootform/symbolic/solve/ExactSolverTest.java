@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.backend.JasFactorizer;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
@@ -22,9 +23,10 @@ class ExactSolverTest {
     }
 
     private static ExactSolution solve(LinearEquation eq, List<Condition> conditions) {
-        InitialState state = ConditionFitter.fit(eq, conditions);
-        ExactSolution s = ExactSolver.solve(eq, JasFactorizer.factor(eq.characteristicPolynomial()), state);
-        for (Check c : ExactVerifier.verify(s, state, conditions)) {
+        RationalPolynomial chi = eq.characteristicPolynomial();
+        InitialState state = ConditionFitter.fit(eq, chi, conditions);
+        ExactSolution s = ExactSolver.solve(eq, chi, JasFactorizer.factor(chi), state);
+        for (Check c : ExactVerifier.verify(s, conditions)) {
             assertTrue(c.passed(), c.name() + ": " + c.detail());
         }
         return s;
