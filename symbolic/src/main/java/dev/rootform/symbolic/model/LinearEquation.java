@@ -51,6 +51,11 @@ public record LinearEquation(Domain domain, String function, String variable, Li
         return forcing.isEmpty();
     }
 
+    /** The same equation without its right-hand side. */
+    public LinearEquation homogeneous() {
+        return new LinearEquation(domain, function, variable, coefficients, shift, List.of());
+    }
+
     /** The characteristic polynomial χ(λ) = Σ a_j λ^j. */
     public RationalPolynomial characteristicPolynomial() {
         return RationalPolynomial.of(coefficients);

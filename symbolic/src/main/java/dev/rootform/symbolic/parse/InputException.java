@@ -7,7 +7,7 @@ package dev.rootform.symbolic.parse;
  *
  * @since 0.1
  */
-public final class InputException extends RuntimeException {
+public class InputException extends RuntimeException {
     private static final long serialVersionUID = 1L;
 
     private final String source;

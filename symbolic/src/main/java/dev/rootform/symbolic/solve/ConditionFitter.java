@@ -41,6 +41,12 @@ public final class ConditionFitter {
             throw new InputException(conditions.size() + " condition" + (conditions.size() == 1 ? "" : "s")
                     + " given, but an equation of order " + k + " needs exactly " + k, "", -1);
         }
+        for (int i = 0; i < conditions.size(); i++) {
+            Condition c = conditions.get(i);
+            if (conditions.subList(0, i).stream().anyMatch(d -> d.derivative() == c.derivative() && d.at().equals(c.at()))) {
+                throw new InputException("the condition on " + label(equation, c) + " is given twice", "", -1);
+            }
+        }
         Rational origin = origin(equation.domain(), conditions);
         List<List<Rational>> rows = new ArrayList<>();
         List<Rational> rhs = new ArrayList<>();
@@ -62,14 +68,66 @@ public final class ConditionFitter {
                     : ForcingValues.derivative(equation, origin, j));
         }
         LinearSystem.Result result = LinearSystem.solve(rows, rhs);
-        if (!result.consistent()) {
-            throw new InputException("the conditions are inconsistent: no solution satisfies all of them", "", -1);
+        if (result.certificate() != null) {
+            throw new ConditionsException(inconsistency(equation, conditions, rhs, result.certificate()), null);
         }
-        if (!result.unique()) {
-            throw new InputException("the conditions do not determine the solution: only "
-                    + (result.rank() - operator.degree() + k) + " of the " + k + " are independent", "", -1);
+        if (result.kernel() != null) {
+            throw new UnderdeterminedConditions("the conditions do not determine the solution: only "
+                    + (result.rank() - operator.degree() + k) + " of the " + k + " are independent",
+                    new InitialState(origin, result.kernel()));
         }
         return new InitialState(origin, result.solution());
+    }
+
+    /**
+     * "every solution has x[2] + x[0] = 0, but the given values make it 1": the relation u·A = 0
+     * restricted to the user's conditions, whose forced value comes from the forcing rows.
+     */
+    private static String inconsistency(LinearEquation eq, List<Condition> conditions, List<Rational> rhs,
+            List<Rational> u) {
+        int k = conditions.size();
+        Rational scale = normaliser(u.subList(0, k));
+        StringBuilder relation = new StringBuilder();
+        Rational given = Rational.ZERO;
+        for (int i = 0; i < k; i++) {
+            Rational c = u.get(i).multiply(scale);
+            if (c.isZero()) {
+                continue;
+            }
+            String label = label(eq, conditions.get(i));
+            String size = c.abs().isOne() ? "" : c.abs() + "·";
+            relation.append(relation.length() == 0 ? (c.signum() < 0 ? "-" : "") : (c.signum() < 0 ? " - " : " + "))
+                    .append(size).append(label);
+            given = given.add(c.multiply(conditions.get(i).value()));
+        }
+        Rational forced = Rational.ZERO;
+        for (int i = k; i < u.size(); i++) {
+            forced = forced.subtract(u.get(i).multiply(scale).multiply(rhs.get(i)));
+        }
+        return "the conditions are inconsistent: every solution has " + relation + " = " + forced
+                + ", but the given values make it " + given;
+    }
+
+    /** A factor that makes the entries integers with no common divisor and the first nonzero one positive. */
+    private static Rational normaliser(List<Rational> u) {
+        java.math.BigInteger lcm = java.math.BigInteger.ONE;
+        java.math.BigInteger gcd = java.math.BigInteger.ZERO;
+        for (Rational r : u) {
+            lcm = lcm.divide(lcm.gcd(r.denominator())).multiply(r.denominator());
+        }
+        Rational first = Rational.ZERO;
+        for (Rational r : u) {
+            gcd = gcd.gcd(r.multiply(Rational.of(lcm)).toBigInteger());
+            first = first.isZero() ? r : first;
+        }
+        Rational scale = gcd.signum() == 0 ? Rational.ONE : Rational.of(lcm, gcd);
+        return first.signum() < 0 ? scale.negate() : scale;
+    }
+
+    /** The left side of a condition as written: {@code x[5]} or {@code y''(3/2)}. */
+    private static String label(LinearEquation eq, Condition c) {
+        return eq.domain() == Domain.DIFFERENCE ? eq.function() + "[" + c.at() + "]"
+                : eq.function() + "'".repeat(c.derivative()) + "(" + c.at() + ")";
     }
 
     private static List<Rational> row(RationalPolynomial reduced, int size) {

@@ -60,11 +60,22 @@ public final class Solver {
                     Presenter.withParticular(general, Presenter.fitted(particular, factors)), general,
                     Optional.empty(), checks);
         }
-        InitialState state = ConditionFitter.fit(eq, operator, problem.conditions());
+        InitialState state = fit(eq, operator, operatorFactors, factors, problem.conditions());
         ExactSolution exact = ExactSolver.solve(eq, operator, operatorFactors, state);
         List<Check> checks = ExactVerifier.verify(exact, problem.conditions());
         return new Solution(problem, chi, factors, roots, Presenter.fitted(exact, factors), general,
                 Optional.of(exact), checks);
+    }
+
+    /** {@link ConditionFitter#fit}, with a free solution attached when the conditions leave one. */
+    private static InitialState fit(LinearEquation eq, RationalPolynomial operator, List<Factor> operatorFactors,
+            List<Factor> characteristic, List<Condition> conditions) {
+        try {
+            return ConditionFitter.fit(eq, operator, conditions);
+        } catch (UnderdeterminedConditions e) {
+            ExactSolution free = ExactSolver.solve(eq.homogeneous(), operator, operatorFactors, e.freeState());
+            throw new ConditionsException(e.getMessage(), Presenter.fitted(free, characteristic));
+        }
     }
 
     /** The factors of both lists, multiplicities added where a factor appears in both (resonance). */
