@@ -37,12 +37,18 @@ final class CodeHeader {
                     + form.first() + " <= " + v + " <= " + String.format("%.0f", facts.high())
                     + (facts.high() >= CodeFacts.CAP ? " (searched to 1e15)" : "") + ".");
         }
-        out.add(String.format("Accuracy measured by rootform when it generated this code: max relative error %.2e against "
+        out.add(String.format("Accuracy measured by rootform when it generated this code: max relative error %s against "
                 + "the exact values at %d points (%s), with StrictMath (a C math library may differ in the last bits; "
-                + "points where the exact value is 0 are left out).", facts.maxRelativeError(), facts.points().size(),
+                + "points where the exact value is 0 are left out).", statedError(facts), facts.points().size(),
                 facts.points().stream().map(Numbers::point).collect(Collectors.joining(", "))));
         out.add(CAUTION);
         return wrap(out);
+    }
+
+    /** The measured error rounded up to 3 significant digits, as stated in the header. */
+    static String statedError(CodeFacts facts) {
+        return new java.math.BigDecimal(facts.maxRelativeError()).round(new java.math.MathContext(3, java.math.RoundingMode.UP))
+                .stripTrailingZeros().toString();
     }
 
     /** Equation, conditions, closed form and where it holds. */
