@@ -1,6 +1,12 @@
 package dev.rootform.cli;
 
+import dev.rootform.export.CRenderer;
+import dev.rootform.export.CSource;
+import dev.rootform.export.Identifiers;
+import dev.rootform.export.JavaRenderer;
 import dev.rootform.export.JsonRenderer;
+import dev.rootform.export.LatexRenderer;
+import dev.rootform.export.MathMlRenderer;
 import dev.rootform.export.Report;
 import dev.rootform.export.TextRenderer;
 import dev.rootform.numeric.analysis.Analyzer;
@@ -13,6 +19,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -52,6 +59,18 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write the answer to FILE instead of standard output.")
     Path output;
 
+    @Option(names = "--package", paramLabel = "NAME", description = "Java package of the generated class (default: none).")
+    String packageName;
+
+    @Option(names = "--class", paramLabel = "NAME", description = "Name of the generated Java class (default ${DEFAULT-VALUE}).")
+    String className = "Solution";
+
+    @Option(names = "--function", paramLabel = "NAME", description = "Name of the generated C function (default ${DEFAULT-VALUE}).")
+    String function = "rootform_value";
+
+    @Option(names = "--header", paramLabel = "FILE", description = "Write the C header to FILE (the source, on stdout or -o, includes it).")
+    Path header;
+
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
@@ -59,12 +78,9 @@ final class SolveCommand implements Callable<Integer> {
             if (digits < 1 || digits > 10_000) {
                 throw new InputException("--digits " + digits + " is out of range 1..10000", "", -1);
             }
-            if (format != Format.text && format != Format.json) {
-                throw new InputException("--format " + format + " is not available yet (text and json are)", "", -1);
-            }
+            validateNames();
             Report report = Pipeline.run(input, given, variable, digits, Points.parse(valuesAt));
-            String answer = format == Format.json ? JsonRenderer.render(report) : TextRenderer.render(report);
-            write(answer);
+            write(output, render(report));
             return report.verified() ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;
         } catch (InputException e) {
             err.println(Diagnostics.describe(e));
@@ -73,7 +89,44 @@ final class SolveCommand implements Callable<Integer> {
         }
     }
 
-    private void write(String answer) throws IOException {
+    /** Checks the code-naming options before any work, so a bad name fails fast. */
+    private void validateNames() {
+        Identifiers.javaClass(className);
+        if (packageName != null) {
+            Identifiers.javaPackage(packageName);
+        }
+        Identifiers.cFunction("--function", function);
+        if (header != null) {
+            if (format != Format.c) {
+                throw new InputException("--header is for --format c", "", -1);
+            }
+            Identifiers.cHeader(header.getFileName().toString());
+        }
+    }
+
+    /** The answer in the chosen format; for C with --header, the header is written here. */
+    private String render(Report report) throws IOException {
+        switch (format) {
+            case json:
+                return JsonRenderer.render(report);
+            case latex:
+                return LatexRenderer.render(report);
+            case mathml:
+                return MathMlRenderer.render(report);
+            case java:
+                return JavaRenderer.render(report, packageName, className);
+            case c:
+                CSource c = CRenderer.render(report, function, Optional.ofNullable(header).map(h -> h.getFileName().toString()));
+                if (header != null) {
+                    write(header, c.header().orElseThrow());
+                }
+                return c.source();
+            default:
+                return TextRenderer.render(report);
+        }
+    }
+
+    private void write(Path output, String answer) throws IOException {
         String text = answer.endsWith("\n") ? answer : answer + System.lineSeparator();
         if (output == null) {
             PrintWriter out = spec.commandLine().getOut();

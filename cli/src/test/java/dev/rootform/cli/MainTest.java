@@ -129,4 +129,24 @@ class MainTest {
         Run r = run("solve", "x[n+1] = x[n]; x[0] = 1", "--frobnicate");
         assertEquals(2, r.code());
     }
+
+    @ParameterizedTest(name = "[{index}] {0} {1}")
+    @CsvSource(delimiter = '|', value = {
+        "--class|class", "--class|A;B", "--package|a.int", "--function|int", "--function|f();x"})
+    void badCodeNamesAreBadInput(String option, String name) {
+        Run r = run("solve", "x[n+1] = 2x[n]; x[0] = 1", "--format", "java", option, name);
+        assertEquals(2, r.code(), r.err());
+        assertEquals("", r.out());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+    }
+
+    @Test
+    void writesCWithASeparateHeader(@TempDir Path dir) throws Exception {
+        Path c = dir.resolve("fib.c");
+        Run r = run("solve", "x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1", "--format", "c", "--function", "fib",
+                "-o", c.toString(), "--header", dir.resolve("fib.h").toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(Files.readString(c).contains("#include \"fib.h\""));
+        assertTrue(Files.readString(dir.resolve("fib.h")).contains("double fib(long n);"));
+    }
 }

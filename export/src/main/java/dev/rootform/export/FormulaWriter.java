@@ -43,9 +43,9 @@ final class FormulaWriter {
         this.form = form;
         Rational origin = form.origin();
         if (form.domain() == Domain.DIFFERENTIAL && !origin.isZero()) {
-            v = n.parens(sum(List.of(new Signed(false, form.variable()), new Signed(origin.signum() > 0, number(origin.abs())))));
+            v = n.parens(sum(List.of(new Signed(false, n.name(form.variable())), new Signed(origin.signum() > 0, number(origin.abs())))));
         } else {
-            v = form.variable();
+            v = n.name(form.variable());
         }
     }
 
@@ -93,7 +93,7 @@ final class FormulaWriter {
                 bases.add(power(n.lambda(), j));
             }
             String root = form.domain() == Domain.DIFFERENTIAL
-                    ? n.power(EULER, n.implicit(n.lambda(), v))
+                    ? n.power(n.name(EULER), n.implicit(n.lambda(), v))
                     : n.power(n.lambda(), v);
             return combination(r.coefficients(), bases, List.of(power(v, r.power()), root), true)
                     .map(s -> new Signed(s.negative(), n.rootSum(polynomial(r.factor(), n.lambda()), s.body())));
@@ -162,7 +162,7 @@ final class FormulaWriter {
     /** e^(rate·v) for differential equations, rate^v for difference equations; empty when trivial. */
     private String growth(Surd rate) {
         if (form.domain() == Domain.DIFFERENTIAL) {
-            return rate.isZero() ? "" : n.power(EULER, scaled(rate, v));
+            return rate.isZero() ? "" : n.power(n.name(EULER), scaled(rate, v));
         }
         if (rate.isRational() && rate.rational().isOne()) {
             return "";
@@ -175,7 +175,7 @@ final class FormulaWriter {
     private String oscillationGrowth(Surd growth) {
         boolean root = form.domain() == Domain.DIFFERENCE && !growth.isRational() && growth.rational().isZero()
                 && growth.coefficient().isOne();
-        return root ? n.power(growth.radicand().toString(), scaled(Rational.of(1, 2), v)) : growth(growth);
+        return root ? n.power(n.number(growth.radicand().toString()), scaled(Rational.of(1, 2), v)) : growth(growth);
     }
 
     /** angle·v as the argument of cos and sin. */
@@ -202,13 +202,13 @@ final class FormulaWriter {
 
     private String scaled(Rational q, String x) {
         Rational a = q.abs();
-        String top = a.numerator().equals(BigInteger.ONE) ? x : n.implicit(a.numerator().toString(), x);
-        String body = a.isInteger() ? top : n.fraction(top, a.denominator().toString());
-        return (q.signum() < 0 ? "-" : "") + body;
+        String top = a.numerator().equals(BigInteger.ONE) ? x : n.implicit(n.number(a.numerator().toString()), x);
+        String body = a.isInteger() ? top : n.fraction(top, n.number(a.denominator().toString()));
+        return q.signum() < 0 ? n.negate(body) : body;
     }
 
     private String power(String base, int exponent) {
-        return exponent == 0 ? "" : exponent == 1 ? base : n.power(base, Integer.toString(exponent));
+        return exponent == 0 ? "" : exponent == 1 ? base : n.power(base, n.number(Integer.toString(exponent)));
     }
 
     /** a + b·√r with its own signs. */
@@ -219,7 +219,7 @@ final class FormulaWriter {
         }
         if (!s.isRational()) {
             Rational b = s.coefficient().abs();
-            String root = n.sqrt(s.radicand().toString());
+            String root = n.sqrt(n.number(s.radicand().toString()));
             parts.add(new Signed(s.coefficient().signum() < 0, b.isOne() ? root : n.times(number(b), root)));
         }
         return sum(parts);
@@ -234,15 +234,16 @@ final class FormulaWriter {
     }
 
     private String number(Rational nonNegative) {
-        return nonNegative.isInteger() ? nonNegative.toString()
-                : n.fraction(nonNegative.numerator().toString(), nonNegative.denominator().toString());
+        return nonNegative.isInteger() ? n.number(nonNegative.toString())
+                : n.fraction(n.number(nonNegative.numerator().toString()), n.number(nonNegative.denominator().toString()));
     }
 
     private String sum(List<Signed> pieces) {
         if (pieces.isEmpty()) {
-            return "0";
+            return n.number("0");
         }
-        StringBuilder sb = new StringBuilder(pieces.get(0).negative() ? "-" : "").append(pieces.get(0).body());
+        Signed first = pieces.get(0);
+        StringBuilder sb = new StringBuilder(first.negative() ? n.negate(first.body()) : first.body());
         for (Signed p : pieces.subList(1, pieces.size())) {
             sb.append(p.negative() ? n.minus() : n.plus()).append(p.body());
         }

@@ -49,4 +49,13 @@ interface Notation {
 
     /** The bound variable λ of a root sum. */
     String lambda();
+
+    /** A non-negative integer written in decimal digits. */
+    String number(String digits);
+
+    /** A single-letter or short name: a variable, a function or the base e. */
+    String name(String identifier);
+
+    /** The negation -body of an already written operand. */
+    String negate(String body);
 }
