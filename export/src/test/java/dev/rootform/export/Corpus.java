@@ -1,5 +1,6 @@
 package dev.rootform.export;
 
+import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.symbolic.parse.ProblemParser;
 import dev.rootform.symbolic.solve.Solver;
 import java.util.List;
@@ -29,6 +30,7 @@ final class Corpus {
     }
 
     static Report report(String input) {
-        return new Report(Solver.solve(ProblemParser.parse(input, List.of(), null)), List.of(), List.of(), List.of(), List.of(), 20);
+        return new Report(Solver.solve(ProblemParser.parse(input, List.of(), null)),
+                new Analysis(List.of(), List.of(), List.of(), List.of(), List.of()), 20);
     }
 }
