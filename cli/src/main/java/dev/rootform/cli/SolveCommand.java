@@ -46,6 +46,9 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--values-at", paramLabel = "LIST", description = "Comma-separated points at which to print the solution's value, e.g. 0,10,1e3.")
     String valuesAt;
 
+    @Option(names = "--numeric", description = "Show the constants and roots as decimals to --digits instead of exact forms.")
+    boolean numeric;
+
     @Option(names = "--format", paramLabel = "FORMAT", description = "Output format: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
     Format format = Format.text;
 
@@ -62,7 +65,7 @@ final class SolveCommand implements Callable<Integer> {
             if (format != Format.text && format != Format.json) {
                 throw new InputException("--format " + format + " is not available yet (text and json are)", "", -1);
             }
-            Report report = Pipeline.run(input, given, variable, digits, Points.parse(valuesAt));
+            Report report = Pipeline.run(input, given, variable, digits, Points.parse(valuesAt), numeric);
             String answer = format == Format.json ? JsonRenderer.render(report) : TextRenderer.render(report);
             write(answer);
             return report.verified() ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;

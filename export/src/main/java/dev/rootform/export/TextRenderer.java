@@ -42,6 +42,7 @@ public final class TextRenderer {
                         .collect(Collectors.joining(", ")))
                 .section("solution", solution(s.closedForm()))
                 .section("verification", verification(r));
+        r.diagnostics().ifPresent(d -> out.section("diagnostics", DiagnosticsText.lines(d, r)));
         if (!r.values().isEmpty()) {
             out.section("values", r.values().stream().map(v -> value(s.closedForm(), v, r.digits())).toList());
         }

@@ -1,6 +1,8 @@
 package dev.rootform.numeric.analysis;
 
 import dev.rootform.numeric.check.OdeReference;
+import dev.rootform.numeric.diagnostics.Diagnoser;
+import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
@@ -39,6 +41,10 @@ public final class Analyzer {
     static final double[] CHECK_OFFSETS = {0.25, 0.5, 1.0, 2.0};
     /** Relative agreement required of the double-precision integrator. */
     static final double CHECK_TOLERANCE = 1e-7;
+    /** Offsets from the first index (sequences) or from t0 (functions) of the cancellation samples. */
+    static final long[] SAMPLE_OFFSETS = {1, 10, 100};
+    /** Digits of the sample values: enough to size a double-precision evaluation's error. */
+    static final int SAMPLE_DIGITS = 17;
 
     private final int digits;
 
@@ -76,7 +82,20 @@ public final class Analyzer {
                 checks.add(integratorCheck(s, cache));
             }
         }
-        return new Analysis(roots, values, checks, List.of());
+        List<PointValue> samples = new ArrayList<>(values);
+        exact.ifPresent(s -> samples.addAll(samples(s, cache)));
+        Diagnostics diagnostics = new Diagnoser(digits).diagnose(solution, roots, samples);
+        return new Analysis(roots, values, checks, diagnostics, diagnostics.warnings());
+    }
+
+    /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
+    private List<PointValue> samples(ExactSolution s, RootCache cache) {
+        List<PointValue> samples = new ArrayList<>();
+        for (long offset : SAMPLE_OFFSETS) {
+            samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset))
+                    : functionValue(s, s.origin().add(Rational.of(offset)), SAMPLE_DIGITS, cache));
+        }
+        return samples;
     }
 
     private RootApproximation approximate(ExactRoot root, RootCache cache) {

@@ -8,6 +8,7 @@ import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.parse.InputException;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Reduces k conditions given at any points to the {@link InitialState} at one origin, exactly.
@@ -38,9 +39,54 @@ public final class ConditionFitter {
                     + " given, but an equation of order " + k + " needs exactly " + k, "", -1);
         }
         Rational origin = origin(equation.domain(), conditions);
+        List<List<Rational>> rows = rows(equation, conditions, origin);
+        List<Rational> rhs = conditions.stream().map(Condition::value).toList();
+        LinearSystem.Result result = LinearSystem.solve(rows, rhs);
+        if (!result.consistent()) {
+            throw new InputException("the conditions are inconsistent: no solution satisfies all of them", "", -1);
+        }
+        if (!result.unique()) {
+            throw new InputException("the conditions do not determine the solution: only " + result.rank()
+                    + " of the " + k + " are independent", "", -1);
+        }
+        return new InitialState(origin, result.solution());
+    }
+
+    /**
+     * The k×k matrix A of the fitting system A·v = (condition values), which maps the initial state
+     * v at the origin to the conditions: row i holds the coefficients of λ^{a_i} mod χ. Exact.
+     *
+     * @throws InputException if the conditions are at several points of a differential equation or
+     *     at a non-integer index of a sequence
+     */
+    public static List<List<Rational>> matrix(LinearEquation equation, List<Condition> conditions) {
+        return rows(equation, conditions, origin(equation.domain(), conditions));
+    }
+
+    /**
+     * The condition number κ_∞(A) = ‖A‖_∞·‖A⁻¹‖_∞ of the fitting {@link #matrix}, exactly: relative
+     * errors in the condition values (measured in the max norm) can be amplified by up to this factor
+     * in the initial state, and so in the fitted constants. 1 when the conditions are the initial
+     * values themselves; empty when the conditions do not determine the solution.
+     */
+    public static Optional<Rational> conditionNumber(LinearEquation equation, List<Condition> conditions) {
+        List<List<Rational>> a = matrix(equation, conditions);
+        return LinearSystem.inverse(a).map(inverse -> maxRowSum(a).multiply(maxRowSum(inverse)));
+    }
+
+    private static Rational maxRowSum(List<List<Rational>> m) {
+        Rational max = Rational.ZERO;
+        for (List<Rational> row : m) {
+            Rational sum = row.stream().map(Rational::abs).reduce(Rational.ZERO, Rational::add);
+            max = sum.compareTo(max) > 0 ? sum : max;
+        }
+        return max;
+    }
+
+    private static List<List<Rational>> rows(LinearEquation equation, List<Condition> conditions, Rational origin) {
+        int k = equation.order();
         RationalPolynomial chi = equation.characteristicPolynomial();
         List<List<Rational>> rows = new ArrayList<>();
-        List<Rational> rhs = new ArrayList<>();
         for (Condition c : conditions) {
             long power = equation.domain() == Domain.DIFFERENCE
                     ? c.at().subtract(origin).toBigInteger().longValueExact()
@@ -51,17 +97,8 @@ public final class ConditionFitter {
                 row.add(reduced.coefficient(j));
             }
             rows.add(row);
-            rhs.add(c.value());
         }
-        LinearSystem.Result result = LinearSystem.solve(rows, rhs);
-        if (!result.consistent()) {
-            throw new InputException("the conditions are inconsistent: no solution satisfies all of them", "", -1);
-        }
-        if (!result.unique()) {
-            throw new InputException("the conditions do not determine the solution: only " + result.rank()
-                    + " of the " + k + " are independent", "", -1);
-        }
-        return new InitialState(origin, result.solution());
+        return rows;
     }
 
     private static Rational origin(Domain domain, List<Condition> conditions) {
