@@ -116,8 +116,13 @@ public final class TextRenderer {
 
     /** {@code " = 55"} when the exact value is known and short, else {@code " ≈ 0.2231"}. */
     private static String exactOrDecimal(PointValue v, int digits) {
-        String exact = v.exact().map(Rational::toString).orElse("");
+        String exact = v.exact().filter(TextRenderer::fitsShort).map(Rational::toString).orElse("");
         return !exact.isEmpty() && exact.length() <= EXACT_LIMIT ? " = " + exact : " ≈ " + Numbers.decimal(v.value(), digits);
+    }
+
+    /** Whether the exact value may fit {@link #EXACT_LIMIT} characters, judged without writing it out. */
+    private static boolean fitsShort(Rational q) {
+        return (q.numerator().bitLength() + q.denominator().bitLength()) * Math.log10(2) <= EXACT_LIMIT + 2;
     }
 
     private static String pad(String s, int width) {
