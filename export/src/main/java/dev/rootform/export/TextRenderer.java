@@ -40,7 +40,7 @@ public final class TextRenderer {
                 .section("roots", roots(s.roots(), r))
                 .line("basis", BasisCoefficient.of(s.general()).stream().map(BasisCoefficient::basis)
                         .collect(Collectors.joining(", ")))
-                .section("solution", solution(s.closedForm()))
+                .section("solution", r.numeric() ? numericSolution(s.closedForm(), r.digits()) : solution(s.closedForm()))
                 .section("verification", verification(r));
         r.diagnostics().ifPresent(d -> out.section("diagnostics", DiagnosticsText.lines(d, r)));
         if (!r.values().isEmpty()) {
@@ -58,7 +58,7 @@ public final class TextRenderer {
     }
 
     private static List<String> roots(List<ExactRoot> roots, Report r) {
-        List<String> exact = roots.stream().map(RootText::exact).toList();
+        List<String> exact = roots.stream().map(x -> r.numeric() ? "" : RootText.exact(x)).toList();
         int width = exact.stream().mapToInt(String::length).max().orElse(0);
         List<String> decimals = new ArrayList<>();
         for (int i = 0; i < roots.size(); i++) {
@@ -95,6 +95,15 @@ public final class TextRenderer {
             int k = f.freeConstants().size();
             lines.add("general solution: " + String.join(", ", f.freeConstants()) + (k == 1 ? " is a free constant" : " are free constants"));
         }
+        return lines;
+    }
+
+    /** With --numeric: the solution as Σ decimal·basis, then the same range lines as the exact form. */
+    private static List<String> numericSolution(ClosedForm f, int digits) {
+        List<String> lines = new ArrayList<>(solution(f));
+        String sum = BasisCoefficient.of(f).stream().filter(c -> !c.value().isZero())
+                .map(c -> "(" + c.decimal(digits) + ")·" + c.basis()).collect(Collectors.joining(" + "));
+        lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.isEmpty() ? "0" : sum));
         return lines;
     }
 
