@@ -20,18 +20,25 @@ public final class Pipeline {
     private Pipeline() {
     }
 
+    /** {@link #run(String, List, String, int, List, boolean)} with exact presentation. */
+    public static Report run(String text, List<String> given, String variable, int digits, List<Rational> points) {
+        return run(text, given, variable, digits, points, false);
+    }
+
     /**
      * @param text equation and optional conditions separated by {@code ;}
      * @param given further conditions, one per string
      * @param variable independent variable of a differential equation, or null for the default
      * @param digits significant digits of numeric output
      * @param points where to evaluate the solution
+     * @param numeric show constants and roots as decimals only
      * @throws dev.rootform.symbolic.parse.InputException for bad or out-of-scope input
      */
-    public static Report run(String text, List<String> given, String variable, int digits, List<Rational> points) {
+    public static Report run(String text, List<String> given, String variable, int digits, List<Rational> points,
+            boolean numeric) {
         Problem problem = ProblemParser.parse(text, given, variable);
         Solution solution = Solver.solve(problem);
         Analysis analysis = new Analyzer(digits).analyze(solution, points);
-        return new Report(solution, analysis, digits);
+        return new Report(solution, analysis, digits, numeric);
     }
 }

@@ -53,6 +53,9 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--values-at", paramLabel = "LIST", description = "Comma-separated points at which to print the solution's value, e.g. 0,10,1e3.")
     String valuesAt;
 
+    @Option(names = "--numeric", description = "Show the constants and roots as decimals to --digits instead of exact forms.")
+    boolean numeric;
+
     @Option(names = "--format", paramLabel = "FORMAT", description = "Output format: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
     Format format = Format.text;
 
@@ -79,7 +82,7 @@ final class SolveCommand implements Callable<Integer> {
                 throw new InputException("--digits " + digits + " is out of range 1..10000", "", -1);
             }
             validateNames();
-            Report report = Pipeline.run(input, given, variable, digits, Points.parse(valuesAt));
+            Report report = Pipeline.run(input, given, variable, digits, Points.parse(valuesAt), numeric);
             write(output, render(report));
             return report.verified() ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;
         } catch (InputException e) {

@@ -5,6 +5,7 @@ import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.closedform.Term;
+import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -17,11 +18,18 @@ import java.util.List;
  *
  * @param coefficient the coefficient as exact plain text, e.g. {@code -1/5·√5} or {@code C2}
  * @param basis the basis function it multiplies, e.g. {@code e^(-t)·sin(2t)}
+ * @param value the coefficient itself
  * @since 0.1
  */
-record BasisCoefficient(String coefficient, String basis) {
+record BasisCoefficient(String coefficient, String basis, Coefficient value) {
     private static final Coefficient ONE = new Coefficient.Exact(Surd.of(Rational.ONE));
     private static final Coefficient ZERO = new Coefficient.Exact(Surd.of(Rational.ZERO));
+
+    /** The coefficient rounded to {@code digits} significant digits, or its name when it is free. */
+    String decimal(int digits) {
+        return value instanceof Coefficient.Exact e
+                ? Numbers.decimal(e.value().toBigDecimal(new MathContext(digits + 2)), digits) : coefficient;
+    }
 
     /** The entries of every term of {@code f}, in order. */
     static List<BasisCoefficient> of(ClosedForm f) {
@@ -30,18 +38,18 @@ record BasisCoefficient(String coefficient, String basis) {
         for (Term t : f.terms()) {
             if (t instanceof Term.Exponential e) {
                 out.add(new BasisCoefficient(writer.coefficient(e.coefficient()),
-                        writer.term(new Term.Exponential(ONE, e.power(), e.rate()))));
+                        writer.term(new Term.Exponential(ONE, e.power(), e.rate())), e.coefficient()));
             } else if (t instanceof Term.Oscillating o) {
                 out.add(new BasisCoefficient(writer.coefficient(o.cosine()),
-                        writer.term(new Term.Oscillating(ONE, ZERO, o.power(), o.growth(), o.angle()))));
+                        writer.term(new Term.Oscillating(ONE, ZERO, o.power(), o.growth(), o.angle())), o.cosine()));
                 out.add(new BasisCoefficient(writer.coefficient(o.sine()),
-                        writer.term(new Term.Oscillating(ZERO, ONE, o.power(), o.growth(), o.angle()))));
+                        writer.term(new Term.Oscillating(ZERO, ONE, o.power(), o.growth(), o.angle())), o.sine()));
             } else if (t instanceof Term.RootSum r) {
                 for (int j = 0; j < r.coefficients().size(); j++) {
                     List<Coefficient> unit = new ArrayList<>(Collections.nCopies(r.coefficients().size(), ZERO));
                     unit.set(j, ONE);
                     out.add(new BasisCoefficient(writer.coefficient(r.coefficients().get(j)),
-                            writer.term(new Term.RootSum(r.factor(), unit, r.power()))));
+                            writer.term(new Term.RootSum(r.factor(), unit, r.power())), r.coefficients().get(j)));
                 }
             }
         }

@@ -51,9 +51,11 @@ public final class JsonRenderer {
         roots(root.putArray("roots"), s.roots(), r.roots(), r.digits());
         solution(root.putObject("solution"), s.closedForm());
         ArrayNode constants = root.putArray("constants");
-        BasisCoefficient.of(s.closedForm()).forEach(c -> constants.addObject().put("coefficient", c.coefficient()).put("basis", c.basis()));
+        BasisCoefficient.of(s.closedForm()).forEach(c -> constants.addObject()
+                .put("coefficient", r.numeric() ? c.decimal(r.digits()) : c.coefficient()).put("basis", c.basis()));
         verification(root.putObject("verification"), r);
-        root.putObject("diagnostics");
+        ObjectNode diagnostics = root.putObject("diagnostics");
+        r.diagnostics().ifPresent(d -> DiagnosticsText.json(diagnostics, d, r));
         ArrayNode values = root.putArray("values");
         for (PointValue v : r.values()) {
             values.addObject().put("at", v.at().toString()).put("value", Numbers.decimal(v.value(), r.digits()))

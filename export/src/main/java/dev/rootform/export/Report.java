@@ -4,10 +4,12 @@ import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.analysis.RootApproximation;
 import dev.rootform.numeric.analysis.SteadyState;
+import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * Everything one answer shows: the exact solution with its exact checks, and the numeric analysis
@@ -17,12 +19,19 @@ import java.util.Objects;
  * @param solution the exact solution and its exact checks
  * @param analysis the numeric side; its roots are in the order of {@code solution.roots()}
  * @param digits significant digits of the numeric parts
+ * @param numeric show constants and roots as decimals to {@code digits} instead of exact forms (a
+ *     presentation choice; the solution stays exact)
  * @since 0.1
  */
-public record Report(Solution solution, Analysis analysis, int digits) {
+public record Report(Solution solution, Analysis analysis, int digits, boolean numeric) {
     public Report {
         Objects.requireNonNull(solution, "solution");
         Objects.requireNonNull(analysis, "analysis");
+    }
+
+    /** A report shown exactly. */
+    public Report(Solution solution, Analysis analysis, int digits) {
+        this(solution, analysis, digits, false);
     }
 
     public List<RootApproximation> roots() {
@@ -39,6 +48,11 @@ public record Report(Solution solution, Analysis analysis, int digits) {
 
     public List<SteadyState> steadyStates() {
         return analysis.steadyStates();
+    }
+
+    /** Stability, modes, sensitivity; empty when not computed. */
+    public Optional<Diagnostics> diagnostics() {
+        return analysis.diagnostics();
     }
 
     public List<String> warnings() {

@@ -41,8 +41,9 @@ public final class TextRenderer {
                 .section("roots", roots(s.roots(), r))
                 .line("basis", BasisCoefficient.of(s.general()).stream().map(BasisCoefficient::basis)
                         .collect(Collectors.joining(", ")))
-                .section("solution", solution(s.closedForm()))
+                .section("solution", r.numeric() ? numericSolution(s.closedForm(), r.digits()) : solution(s.closedForm()))
                 .section("verification", verification(r));
+        r.diagnostics().ifPresent(d -> out.section("diagnostics", DiagnosticsText.lines(d, r)));
         if (!r.values().isEmpty()) {
             out.section("values", r.values().stream().map(v -> value(s.closedForm(), v, r.digits())).toList());
         }
@@ -69,7 +70,7 @@ public final class TextRenderer {
     }
 
     private static List<String> roots(List<ExactRoot> roots, Report r) {
-        List<String> exact = roots.stream().map(RootText::exact).toList();
+        List<String> exact = roots.stream().map(x -> r.numeric() ? "" : RootText.exact(x)).toList();
         int width = exact.stream().mapToInt(String::length).max().orElse(0);
         List<String> decimals = new ArrayList<>();
         for (int i = 0; i < roots.size(); i++) {
@@ -113,6 +114,15 @@ public final class TextRenderer {
         return lines;
     }
 
+    /** With --numeric: the solution as Σ decimal·basis, then the same range lines as the exact form. */
+    private static List<String> numericSolution(ClosedForm f, int digits) {
+        List<String> lines = new ArrayList<>(solution(f));
+        String sum = BasisCoefficient.of(f).stream().filter(c -> !c.value().isZero())
+                .map(c -> "(" + c.decimal(digits) + ")·" + c.basis()).collect(Collectors.joining(" + "));
+        lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.isEmpty() ? "0" : sum));
+        return lines;
+    }
+
     private static List<String> verification(Report r) {
         List<Check> checks = Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).toList();
         List<String> lines = new ArrayList<>();
@@ -131,8 +141,13 @@ public final class TextRenderer {
 
     /** {@code " = 55"} when the exact value is known and short, else {@code " ≈ 0.2231"}. */
     private static String exactOrDecimal(PointValue v, int digits) {
-        String exact = v.exact().map(Rational::toString).orElse("");
+        String exact = v.exact().filter(TextRenderer::fitsShort).map(Rational::toString).orElse("");
         return !exact.isEmpty() && exact.length() <= EXACT_LIMIT ? " = " + exact : " ≈ " + Numbers.decimal(v.value(), digits);
+    }
+
+    /** Whether the exact value may fit {@link #EXACT_LIMIT} characters, judged without writing it out. */
+    private static boolean fitsShort(Rational q) {
+        return (q.numerator().bitLength() + q.denominator().bitLength()) * Math.log10(2) <= EXACT_LIMIT + 2;
     }
 
     private static String pad(String s, int width) {

@@ -4,6 +4,7 @@ import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.symbolic.parse.ProblemParser;
 import dev.rootform.symbolic.solve.Solver;
 import java.util.List;
+import java.util.Optional;
 
 /** Equations for the exporter tests, each solved by the whole pipeline. */
 final class Corpus {
@@ -31,6 +32,6 @@ final class Corpus {
 
     static Report report(String input) {
         return new Report(Solver.solve(ProblemParser.parse(input, List.of(), null)),
-                new Analysis(List.of(), List.of(), List.of(), List.of(), List.of()), 20);
+                new Analysis(List.of(), List.of(), List.of(), List.of(), Optional.empty(), List.of()), 20);
     }
 }

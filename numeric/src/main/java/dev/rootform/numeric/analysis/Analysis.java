@@ -1,21 +1,26 @@
 package dev.rootform.numeric.analysis;
 
+import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.symbolic.solve.Check;
 import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
 
 /**
  * The numeric side of one answer: root values, values at requested points, numeric cross-checks,
- * steady-state responses to sinusoidal inputs (stable systems only) and warnings.
+ * steady-state responses to sinusoidal inputs (stable systems only), diagnostics and warnings (the
+ * diagnostics' warnings).
  *
  * @since 0.1
  */
 public record Analysis(List<RootApproximation> roots, List<PointValue> values, List<Check> checks,
-        List<SteadyState> steadyStates, List<String> warnings) {
+        List<SteadyState> steadyStates, Optional<Diagnostics> diagnostics, List<String> warnings) {
     public Analysis {
         roots = List.copyOf(roots);
         values = List.copyOf(values);
         checks = List.copyOf(checks);
         steadyStates = List.copyOf(steadyStates);
+        Objects.requireNonNull(diagnostics, "diagnostics");
         warnings = List.copyOf(warnings);
     }
 }

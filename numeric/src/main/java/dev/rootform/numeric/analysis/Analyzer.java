@@ -2,6 +2,9 @@ package dev.rootform.numeric.analysis;
 
 import dev.rootform.numeric.check.ForcingFunction;
 import dev.rootform.numeric.check.OdeReference;
+import dev.rootform.numeric.diagnostics.Diagnoser;
+import dev.rootform.numeric.diagnostics.Diagnostics;
+import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
@@ -40,6 +43,10 @@ public final class Analyzer {
     static final double[] CHECK_OFFSETS = {0.25, 0.5, 1.0, 2.0};
     /** Relative agreement required of the double-precision integrator. */
     static final double CHECK_TOLERANCE = 1e-7;
+    /** Offsets from the first index (sequences) or from t0 (functions) of the cancellation samples. */
+    static final long[] SAMPLE_OFFSETS = {1, 10, 100};
+    /** Digits of the sample values: enough to size a double-precision evaluation's error. */
+    static final int SAMPLE_DIGITS = 17;
 
     private final int digits;
 
@@ -77,23 +84,22 @@ public final class Analyzer {
                 checks.add(integratorCheck(s, cache));
             }
         }
-        List<SteadyState> steady = strictlyStable(solution.problem().equation().domain(), roots)
+        List<PointValue> samples = new ArrayList<>(values);
+        exact.ifPresent(s -> samples.addAll(samples(s, cache)));
+        Diagnostics diagnostics = new Diagnoser(digits).diagnose(solution, roots, samples);
+        List<SteadyState> steady = diagnostics.stability().verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE
                 ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
-        return new Analysis(roots, values, checks, steady, List.of());
+        return new Analysis(roots, values, checks, steady, Optional.of(diagnostics), diagnostics.warnings());
     }
 
-    /** Every root certainly inside the stability region: Re λ &lt; 0, or |λ| &lt; 1, with its enclosure. */
-    private static boolean strictlyStable(Domain domain, List<RootApproximation> roots) {
-        for (RootApproximation r : roots) {
-            BigDecimal edge = domain == Domain.DIFFERENTIAL
-                    ? r.re().add(r.radius())
-                    : r.re().pow(2).add(r.im().pow(2)).sqrt(MathContext.DECIMAL64).add(r.radius()).subtract(BigDecimal.ONE)
-                            .add(new BigDecimal("1e-15"));
-            if (edge.signum() >= 0) {
-                return false;
-            }
+    /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
+    private List<PointValue> samples(ExactSolution s, RootCache cache) {
+        List<PointValue> samples = new ArrayList<>();
+        for (long offset : SAMPLE_OFFSETS) {
+            samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset))
+                    : functionValue(s, s.origin().add(Rational.of(offset)), SAMPLE_DIGITS, cache));
         }
-        return true;
+        return samples;
     }
 
     private RootApproximation approximate(ExactRoot root, RootCache cache) {

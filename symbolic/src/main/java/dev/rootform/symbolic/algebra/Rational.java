@@ -18,6 +18,12 @@ public final class Rational implements Comparable<Rational> {
 
     private final BigInteger numerator;
     private final BigInteger denominator;
+    /** log2(10): bits per decimal digit. */
+    private static final double BITS_PER_DIGIT = 3.3219280948873626;
+    /** Extra bits kept when a long numerator or denominator is cut for rounding. */
+    private static final int GUARD_BITS = 64;
+    /** Extra decimal digits of the intermediate results of a cut rounding. */
+    private static final int GUARD_DIGITS = 10;
 
     private Rational(BigInteger numerator, BigInteger denominator) {
         this.numerator = numerator;
@@ -160,9 +166,30 @@ public final class Rational implements Comparable<Rational> {
         return numerator;
     }
 
-    /** The value rounded to {@code context}; approximate unless the decimal expansion terminates in time. */
+    /**
+     * The value rounded to {@code context}; approximate unless the decimal expansion terminates in
+     * time. A numerator or denominator far longer than the precision needs is first cut to
+     * precision + {@link #GUARD_BITS} bits and the power of two restored in decimal at
+     * {@link #GUARD_DIGITS} extra digits, so x[10^6] of a recurrence rounds in milliseconds; the
+     * result can then differ from correct rounding only when the value lies within about
+     * 10^-(precision + 8) relative of a rounding boundary.
+     */
     public BigDecimal toBigDecimal(MathContext context) {
-        return new BigDecimal(numerator).divide(new BigDecimal(denominator), context);
+        if (context.getPrecision() == 0) {
+            return new BigDecimal(numerator).divide(new BigDecimal(denominator), context);
+        }
+        int keep = (int) Math.ceil(context.getPrecision() * BITS_PER_DIGIT) + GUARD_BITS;
+        int cutNumerator = Math.max(0, numerator.bitLength() - keep);
+        int cutDenominator = Math.max(0, denominator.bitLength() - keep);
+        if (cutNumerator == 0 && cutDenominator == 0) {
+            return new BigDecimal(numerator).divide(new BigDecimal(denominator), context);
+        }
+        MathContext wide = new MathContext(context.getPrecision() + GUARD_DIGITS);
+        BigDecimal quotient = new BigDecimal(numerator.shiftRight(cutNumerator))
+                .divide(new BigDecimal(denominator.shiftRight(cutDenominator)), wide);
+        int shift = cutNumerator - cutDenominator;
+        BigDecimal power = BigDecimal.valueOf(2).pow(Math.abs(shift), wide);
+        return (shift >= 0 ? quotient.multiply(power, wide) : quotient.divide(power, wide)).round(context);
     }
 
     public double doubleValue() {

@@ -8,6 +8,7 @@ import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.parse.InputException;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Reduces k conditions given at any points to the {@link InitialState} at one origin, exactly.
@@ -48,15 +49,8 @@ public final class ConditionFitter {
             }
         }
         Rational origin = origin(equation.domain(), conditions);
-        List<List<Rational>> rows = new ArrayList<>();
-        List<Rational> rhs = new ArrayList<>();
-        for (Condition c : conditions) {
-            long power = equation.domain() == Domain.DIFFERENCE
-                    ? c.at().subtract(origin).toBigInteger().longValueExact()
-                    : c.derivative();
-            rows.add(row(powerModulo(power, operator), operator.degree()));
-            rhs.add(c.value());
-        }
+        List<List<Rational>> rows = new ArrayList<>(rows(equation, conditions, origin, operator));
+        List<Rational> rhs = new ArrayList<>(conditions.stream().map(Condition::value).toList());
         for (int j = 0; j < operator.degree() - k; j++) {
             RationalPolynomial applied = RationalPolynomial.ZERO;
             for (int i = 0; i <= k; i++) {
@@ -77,6 +71,50 @@ public final class ConditionFitter {
                     new InitialState(origin, result.kernel()));
         }
         return new InitialState(origin, result.solution());
+    }
+
+    /**
+     * The k×k matrix A of the fitting system A·v = (condition values), which maps the initial state
+     * v at the origin to the conditions: row i holds the coefficients of λ^{a_i} mod χ. Exact.
+     *
+     * @throws InputException if the conditions are at several points of a differential equation or
+     *     at a non-integer index of a sequence
+     */
+    public static List<List<Rational>> matrix(LinearEquation equation, List<Condition> conditions) {
+        return rows(equation, conditions, origin(equation.domain(), conditions), equation.characteristicPolynomial());
+    }
+
+    /**
+     * The condition number κ_∞(A) = ‖A‖_∞·‖A⁻¹‖_∞ of the fitting {@link #matrix}, exactly: relative
+     * errors in the condition values (measured in the max norm) can be amplified by up to this factor
+     * in the initial state, and so in the fitted constants. 1 when the conditions are the initial
+     * values themselves; empty when the conditions do not determine the solution.
+     */
+    public static Optional<Rational> conditionNumber(LinearEquation equation, List<Condition> conditions) {
+        List<List<Rational>> a = matrix(equation, conditions);
+        return LinearSystem.inverse(a).map(inverse -> maxRowSum(a).multiply(maxRowSum(inverse)));
+    }
+
+    private static Rational maxRowSum(List<List<Rational>> m) {
+        Rational max = Rational.ZERO;
+        for (List<Rational> row : m) {
+            Rational sum = row.stream().map(Rational::abs).reduce(Rational.ZERO, Rational::add);
+            max = sum.compareTo(max) > 0 ? sum : max;
+        }
+        return max;
+    }
+
+    /** One row per condition: the coefficients of λ^a mod the operator polynomial. */
+    private static List<List<Rational>> rows(LinearEquation equation, List<Condition> conditions, Rational origin,
+            RationalPolynomial operator) {
+        List<List<Rational>> rows = new ArrayList<>();
+        for (Condition c : conditions) {
+            long power = equation.domain() == Domain.DIFFERENCE
+                    ? c.at().subtract(origin).toBigInteger().longValueExact()
+                    : c.derivative();
+            rows.add(row(powerModulo(power, operator), operator.degree()));
+        }
+        return rows;
     }
 
     /**

@@ -1,0 +1,78 @@
+package dev.rootform.numeric.diagnostics;
+
+import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.model.Domain;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * Finds the dominant mode and the {@link Growth} of a solution from the modes it contains: for a
+ * fitted solution the roots whose coefficients are nonzero, each with its effective power (one more
+ * than the highest power of t or n with a nonzero coefficient); for a general solution all roots
+ * with their multiplicities. Roots whose Re λ (or |λ|) agree to within {@link #tieTolerance} of
+ * the larger are treated as tied, and the higher power wins.
+ */
+final class DominantMode {
+    private final Domain domain;
+    private final String variable;
+    private final double tolerance;
+
+    /** @param digits significant digits of the root values, which bound how finely ties are told apart */
+    DominantMode(Domain domain, String variable, int digits) {
+        this.domain = domain;
+        this.variable = variable;
+        this.tolerance = tieTolerance(digits);
+    }
+
+    /** Relative tolerance for ties: two digits looser than the root values, at most double precision. */
+    static double tieTolerance(int digits) {
+        return Math.pow(10, -(Math.min(digits, 15) - 2));
+    }
+
+    /** @param powers effective multiplicity per factor; factors absent or 0 contribute nothing */
+    Growth of(List<RootEntry> roots, Map<RationalPolynomial, Integer> powers) {
+        RootEntry best = null;
+        int bestPower = 0;
+        for (RootEntry r : roots) {
+            int m = powers.getOrDefault(r.factor().polynomial(), 0);
+            if (m == 0) {
+                continue;
+            }
+            if (best == null || beats(rate(r), m, r.im(), rate(best), bestPower)) {
+                best = r;
+                bestPower = m;
+            }
+        }
+        if (best == null) {
+            return new Growth(Optional.empty(), 0, 0, "0 (the solution is identically zero)");
+        }
+        double rate = rate(best);
+        return new Growth(Optional.of(best.approximation()), bestPower - 1, rate, theta(bestPower - 1, rate));
+    }
+
+    private double rate(RootEntry r) {
+        return domain == Domain.DIFFERENTIAL ? r.re() : r.modulus();
+    }
+
+    private boolean beats(double rate, int power, double im, double bestRate, int bestPower) {
+        double scale = Math.max(1, Math.max(Math.abs(rate), Math.abs(bestRate)));
+        if (Math.abs(rate - bestRate) <= tolerance * scale) {
+            return power > bestPower || (power == bestPower && im > 0);
+        }
+        return rate > bestRate;
+    }
+
+    private String theta(int power, double rate) {
+        String polynomial = power == 0 ? "" : power == 1 ? variable : variable + "^" + power;
+        String exponential;
+        if (domain == Domain.DIFFERENTIAL) {
+            String sigma = Approx.text(rate);
+            exponential = Math.abs(rate) <= tolerance ? "" : "e^(" + (sigma.equals("1") ? "" : sigma.equals("-1") ? "-" : sigma) + variable + ")";
+        } else {
+            exponential = Math.abs(rate - 1) <= tolerance ? "" : Approx.text(rate) + "^" + variable;
+        }
+        String body = polynomial.isEmpty() ? exponential : exponential.isEmpty() ? polynomial : polynomial + "·" + exponential;
+        return "Θ(" + (body.isEmpty() ? "1" : body) + ")";
+    }
+}
