@@ -70,7 +70,7 @@ class MainTest {
         "x[n+2] = 2x[n]; x[0] = 1; x[0] = 2|given twice",
         "x[n+2] = -x[n]; x[0] = 0; x[2] = 1|every solution has x[0] + x[2] = 0, but the given values make it 1",
         "x[n+2] = -x[n]; x[0] = 0; x[2] = 0|adding any multiple of sin(πn/2) keeps every condition",
-        "y'' + y = 0; y(0) = 0; y(3) = 1|boundary-value",
+        "y'' = 0; y'(0) = 1; y'(1) = 1|singular",
     })
     void badInputGetsOneLineAndExitCodeTwo(String input, String fragment) {
         Run r = run("solve", input);

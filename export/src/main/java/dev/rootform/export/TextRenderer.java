@@ -10,6 +10,7 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
+import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
@@ -41,7 +42,7 @@ public final class TextRenderer {
                 .section("roots", roots(s.roots(), r))
                 .line("basis", BasisCoefficient.of(s.general()).stream().map(BasisCoefficient::basis)
                         .collect(Collectors.joining(", ")))
-                .section("solution", r.numeric() ? numericSolution(s.closedForm(), r.digits()) : solution(s.closedForm()))
+                .section("solution", r.numeric() ? numericSolution(s.closedForm(), r) : solution(s.closedForm(), r))
                 .section("verification", verification(r));
         r.diagnostics().ifPresent(d -> out.section("diagnostics", DiagnosticsText.lines(d, r)));
         if (!r.values().isEmpty()) {
@@ -87,7 +88,7 @@ public final class TextRenderer {
     }
 
     /** The formula, where it holds, and what is free or fixed before that. */
-    private static List<String> solution(ClosedForm f) {
+    private static List<String> solution(ClosedForm f, Report r) {
         List<String> lines = new ArrayList<>();
         lines.add(EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f));
         if (!f.particularTerms().isEmpty()) {
@@ -107,7 +108,13 @@ public final class TextRenderer {
         } else {
             lines.add("for all " + f.variable());
         }
-        if (!f.freeConstants().isEmpty()) {
+        List<BigDecimal> values = r.analysis().constantValues();
+        if (!values.isEmpty()) {
+            lines.add("constants from the boundary conditions (not exact rationals; solved to " + r.digits() + " digits):");
+            for (int i = 0; i < values.size(); i++) {
+                lines.add("  " + f.freeConstants().get(i) + " ≈ " + Numbers.decimal(values.get(i), r.digits()));
+            }
+        } else if (!f.freeConstants().isEmpty()) {
             int k = f.freeConstants().size();
             lines.add("general solution: " + String.join(", ", f.freeConstants()) + (k == 1 ? " is a free constant" : " are free constants"));
         }
@@ -115,8 +122,9 @@ public final class TextRenderer {
     }
 
     /** With --numeric: the solution as Σ decimal·basis, then the same range lines as the exact form. */
-    private static List<String> numericSolution(ClosedForm f, int digits) {
-        List<String> lines = new ArrayList<>(solution(f));
+    private static List<String> numericSolution(ClosedForm f, Report r) {
+        int digits = r.digits();
+        List<String> lines = new ArrayList<>(solution(f, r));
         String sum = BasisCoefficient.of(f).stream().filter(c -> !c.value().isZero())
                 .map(c -> "(" + c.decimal(digits) + ")·" + c.basis()).collect(Collectors.joining(" + "));
         lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.isEmpty() ? "0" : sum));

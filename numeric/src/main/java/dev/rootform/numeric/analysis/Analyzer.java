@@ -7,7 +7,6 @@ import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.parse.InputException;
@@ -17,9 +16,7 @@ import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -71,8 +68,18 @@ public final class Analyzer {
         }
         List<PointValue> values = new ArrayList<>();
         List<Check> checks = new ArrayList<>();
-        if (!points.isEmpty() && solution.exact().isEmpty()) {
+        if (!points.isEmpty() && solution.exact().isEmpty() && !solution.isBoundaryValueProblem()) {
             throw new InputException("values need conditions: the general solution has free constants", "", -1);
+        }
+        List<BigDecimal> constants = new ArrayList<>();
+        if (solution.isBoundaryValueProblem()) {
+            BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
+            constants.addAll(bvp.constants(digits));
+            for (Rational p : points) {
+                values.add(new PointValue(p, Decimals.toBigDecimal(bvp.derivative(0, p), digits), Optional.empty()));
+            }
+            checks.add(bvp.conditionsCheck(digits));
+            checks.add(bvp.integratorCheck());
         }
         Optional<ExactSolution> exact = solution.exact();
         if (exact.isPresent()) {
@@ -89,7 +96,7 @@ public final class Analyzer {
         Diagnostics diagnostics = new Diagnoser(digits).diagnose(solution, roots, samples);
         List<SteadyState> steady = diagnostics.stability().verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE
                 ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
-        return new Analysis(roots, values, checks, steady, Optional.of(diagnostics), diagnostics.warnings());
+        return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings());
     }
 
     /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
@@ -111,8 +118,8 @@ public final class Analyzer {
             long precision = digits + GUARD_DIGITS;
             Apfloat angle = ApfloatMath.pi(precision).multiply(new Apfloat(2L * u.k(), precision))
                     .divide(new Apfloat(u.order(), precision));
-            return new RootApproximation(root, FunctionEvaluator.toBigDecimal(ApfloatMath.cos(angle), digits),
-                    FunctionEvaluator.toBigDecimal(ApfloatMath.sin(angle), digits), BigDecimal.ZERO);
+            return new RootApproximation(root, Decimals.toBigDecimal(ApfloatMath.cos(angle), digits),
+                    Decimals.toBigDecimal(ApfloatMath.sin(angle), digits), BigDecimal.ZERO);
         }
         if (root instanceof ExactRoot.Implicit i) {
             Enclosure z = cache.roots(i.factor(), digits + GUARD_DIGITS).get(i.index() - 1);
@@ -141,13 +148,13 @@ public final class Analyzer {
         }
         int working = wanted + GUARD_DIGITS;
         while (working <= MAX_WORKING_DIGITS) {
-            Apfloat[] low = evaluate(s, t, working, working + GUARD_DIGITS, cache);
-            Apfloat[] high = evaluate(s, t, working + GUARD_DIGITS, working + GUARD_DIGITS, cache);
+            Apfloat[] high = evaluate(s, t, working + GUARD_DIGITS, cache);
+            Apfloat[] low = evaluate(s, t, working, cache);
             Apfloat difference = ApfloatMath.abs(low[0].subtract(high[0]));
             Apfloat relative = ApfloatMath.abs(high[0]).multiply(new Apfloat("1e-" + (wanted + 2), working));
             Apfloat floor = high[1].multiply(new Apfloat("1e-" + (working - GUARD_DIGITS / 2), working));
             if (difference.compareTo(relative) <= 0 || difference.compareTo(floor) <= 0) {
-                return new PointValue(t, FunctionEvaluator.toBigDecimal(high[0], wanted), Optional.empty());
+                return new PointValue(t, Decimals.toBigDecimal(high[0], wanted), Optional.empty());
             }
             working += GUARD_DIGITS + (int) Math.ceil(
                     ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10));
@@ -155,16 +162,9 @@ public final class Analyzer {
         throw new IllegalStateException("value at t = " + t + " did not settle within " + MAX_WORKING_DIGITS + " digits");
     }
 
-    /** y(t) at {@code working} digits with roots certified to {@code rootDigits} &ge; working. */
-    private static Apfloat[] evaluate(ExactSolution s, Rational t, int working, int rootDigits, RootCache cache) {
-        Map<RationalPolynomial, List<Enclosure>> roots = new HashMap<>();
-        for (var c : s.components()) {
-            RationalPolynomial f = c.factor().polynomial();
-            if (f.degree() > 1) {
-                roots.put(f, cache.roots(f, rootDigits));
-            }
-        }
-        return new FunctionEvaluator(s, roots).value(t, working);
+    /** y(t) at {@code working} digits, and the largest mode magnitude there. */
+    private static Apfloat[] evaluate(ExactSolution s, Rational t, int working, RootCache cache) {
+        return ModeSum.of(s, cache, working).valueAndLargest(t);
     }
 
     private static Check integratorCheck(ExactSolution s, RootCache cache) {

@@ -29,7 +29,7 @@ final class FrequencyResponse {
             if (t.oscillation() == ForcingTerm.Oscillation.NONE || t.power() != 0 || !plainRate(eq.domain(), t)) {
                 continue;
             }
-            Apfloat w = FunctionEvaluator.toApfloat(t.frequency(), precision);
+            Apfloat w = Decimals.toApfloat(t.frequency(), precision);
             if (t.frequencyTimesPi()) {
                 w = w.multiply(ApfloatMath.pi(precision));
             }
@@ -38,9 +38,9 @@ final class FrequencyResponse {
                     : unitShift(w, -eq.shift(), precision).divide(characteristic(eq, unitShift(w, 1, precision), precision));
             Apfloat gain = ApcomplexMath.abs(h);
             Apfloat degrees = ApfloatMath.toDegrees(ApfloatMath.atan2(h.imag(), h.real()));
-            result.add(new SteadyState(t, FunctionEvaluator.toBigDecimal(gain, digits),
-                    FunctionEvaluator.toBigDecimal(gain.multiply(FunctionEvaluator.toApfloat(t.coefficient().abs(), precision)), digits),
-                    FunctionEvaluator.toBigDecimal(degrees, digits)));
+            result.add(new SteadyState(t, Decimals.toBigDecimal(gain, digits),
+                    Decimals.toBigDecimal(gain.multiply(Decimals.toApfloat(t.coefficient().abs(), precision)), digits),
+                    Decimals.toBigDecimal(degrees, digits)));
         }
         return result;
     }
@@ -59,7 +59,7 @@ final class FrequencyResponse {
     private static Apcomplex characteristic(LinearEquation eq, Apcomplex z, long precision) {
         Apcomplex v = Apcomplex.ZERO;
         for (int j = eq.order(); j >= 0; j--) {
-            v = v.multiply(z).add(FunctionEvaluator.toApfloat(eq.coefficients().get(j), precision));
+            v = v.multiply(z).add(Decimals.toApfloat(eq.coefficients().get(j), precision));
         }
         return v;
     }

@@ -47,7 +47,7 @@ public final class Diagnoser {
         List<String> warnings = new ArrayList<>();
         CloseRoots.warning(entries).ifPresent(warnings::add);
         solution.exact().flatMap(s -> Cancellation.warning(s, entries, samples)).ifPresent(warnings::add);
-        Optional<BigDecimal> kappa = solution.problem().conditions().isEmpty() ? Optional.empty()
+        Optional<BigDecimal> kappa = solution.exact().isEmpty() ? Optional.empty()
                 : ConditionFitter.conditionNumber(eq, solution.problem().conditions())
                         .map(k -> k.toBigDecimal(new MathContext(digits)));
         return new Diagnostics(stability, growth, ModeFacts.of(eq.domain(), entries), kappa, warnings);

@@ -38,16 +38,7 @@ public final class ConditionFitter {
      */
     public static InitialState fit(LinearEquation equation, RationalPolynomial operator, List<Condition> conditions) {
         int k = equation.order();
-        if (conditions.size() != k) {
-            throw new InputException(conditions.size() + " condition" + (conditions.size() == 1 ? "" : "s")
-                    + " given, but an equation of order " + k + " needs exactly " + k, "", -1);
-        }
-        for (int i = 0; i < conditions.size(); i++) {
-            Condition c = conditions.get(i);
-            if (conditions.subList(0, i).stream().anyMatch(d -> d.derivative() == c.derivative() && d.at().equals(c.at()))) {
-                throw new InputException("the condition on " + label(equation, c) + " is given twice", "", -1);
-            }
-        }
+        validate(equation, conditions);
         Rational origin = origin(equation.domain(), conditions);
         List<List<Rational>> rows = new ArrayList<>(rows(equation, conditions, origin, operator));
         List<Rational> rhs = new ArrayList<>(conditions.stream().map(Condition::value).toList());
@@ -166,6 +157,25 @@ public final class ConditionFitter {
     private static String label(LinearEquation eq, Condition c) {
         return eq.domain() == Domain.DIFFERENCE ? eq.function() + "[" + c.at() + "]"
                 : eq.function() + "'".repeat(c.derivative()) + "(" + c.at() + ")";
+    }
+
+    /**
+     * Checks that there are exactly k conditions and none is given twice.
+     *
+     * @throws InputException otherwise
+     */
+    static void validate(LinearEquation equation, List<Condition> conditions) {
+        int k = equation.order();
+        if (conditions.size() != k) {
+            throw new InputException(conditions.size() + " condition" + (conditions.size() == 1 ? "" : "s")
+                    + " given, but an equation of order " + k + " needs exactly " + k, "", -1);
+        }
+        for (int i = 0; i < conditions.size(); i++) {
+            Condition c = conditions.get(i);
+            if (conditions.subList(0, i).stream().anyMatch(d -> d.derivative() == c.derivative() && d.at().equals(c.at()))) {
+                throw new InputException("the condition on " + label(equation, c) + " is given twice", "", -1);
+            }
+        }
     }
 
     private static List<Rational> row(RationalPolynomial reduced, int size) {

@@ -1,7 +1,6 @@
 package dev.rootform.symbolic.solve;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.parse.InputException;

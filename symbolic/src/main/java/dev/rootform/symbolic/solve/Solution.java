@@ -18,12 +18,16 @@ import java.util.Optional;
  * @param roots the exact roots, factor by factor
  * @param closedForm the real closed form that renderers walk
  * @param general the general solution, whose terms are the basis functions with free constants
- * @param exact the fitted solution in number-field form (empty for a general solution)
+ * @param exact the fitted solution in number-field form (empty for a general solution and for a
+ *     boundary-value problem, whose constants are not exact)
+ * @param particular a particular solution of a forced equation with no transient part, in
+ *     number-field form, when {@code exact} is empty (general solution or boundary-value problem)
  * @param checks the exact verification steps, all run
  * @since 0.1
  */
 public record Solution(Problem problem, RationalPolynomial characteristic, List<Factor> factors,
-        List<ExactRoot> roots, ClosedForm closedForm, ClosedForm general, Optional<ExactSolution> exact, List<Check> checks) {
+        List<ExactRoot> roots, ClosedForm closedForm, ClosedForm general, Optional<ExactSolution> exact,
+        Optional<ExactSolution> particular, List<Check> checks) {
     public Solution {
         Objects.requireNonNull(problem, "problem");
         Objects.requireNonNull(characteristic, "characteristic");
@@ -32,7 +36,16 @@ public record Solution(Problem problem, RationalPolynomial characteristic, List<
         Objects.requireNonNull(closedForm, "closedForm");
         Objects.requireNonNull(general, "general");
         Objects.requireNonNull(exact, "exact");
+        Objects.requireNonNull(particular, "particular");
         checks = List.copyOf(checks);
+    }
+
+    /**
+     * True for a differential equation with conditions at several points: the constants of
+     * {@link #closedForm} are then fixed numerically by the numeric layer.
+     */
+    public boolean isBoundaryValueProblem() {
+        return exact.isEmpty() && !problem.conditions().isEmpty();
     }
 
     /** True when every check ran and held. */

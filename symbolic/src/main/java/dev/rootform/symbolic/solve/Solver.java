@@ -45,26 +45,27 @@ public final class Solver {
         RationalPolynomial operator = product(chi.leadingCoefficient(), operatorFactors);
         ClosedForm general = Presenter.general(eq, factors);
         List<ExactRoot> roots = Presenter.roots(factors);
-        if (problem.conditions().isEmpty()) {
+        if (problem.conditions().isEmpty() || severalPoints(eq, problem.conditions())) {
+            if (!problem.conditions().isEmpty()) {
+                ConditionFitter.validate(eq, problem.conditions());
+            }
+            List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
             if (eq.isHomogeneous()) {
-                return new Solution(problem, chi, factors, roots, general, general, Optional.empty(),
-                        List.of(basisCheck(eq, factors)));
+                return new Solution(problem, chi, factors, roots, general, general, Optional.empty(), Optional.empty(), checks);
             }
             ExactSolution any = ExactSolver.solve(eq, operator, operatorFactors,
                     ConditionFitter.fit(eq, operator, zeroConditions(eq)));
             ExactSolution particular = any.withComponents(withoutTransient(any.components(), factors));
-            List<Check> checks = new ArrayList<>();
-            checks.add(basisCheck(eq, factors));
             checks.addAll(ExactVerifier.verify(particular, List.of()));
             return new Solution(problem, chi, factors, roots,
                     Presenter.withParticular(general, Presenter.fitted(particular, factors)), general,
-                    Optional.empty(), checks);
+                    Optional.empty(), Optional.of(particular), checks);
         }
         InitialState state = fit(eq, operator, operatorFactors, factors, problem.conditions());
         ExactSolution exact = ExactSolver.solve(eq, operator, operatorFactors, state);
         List<Check> checks = ExactVerifier.verify(exact, problem.conditions());
         return new Solution(problem, chi, factors, roots, Presenter.fitted(exact, factors), general,
-                Optional.of(exact), checks);
+                Optional.of(exact), Optional.empty(), checks);
     }
 
     /** {@link ConditionFitter#fit}, with a free solution attached when the conditions leave one. */
@@ -99,6 +100,11 @@ public final class Solver {
             p = p.multiply(f.polynomial().pow(f.multiplicity()));
         }
         return p;
+    }
+
+    /** Conditions of a differential equation at more than one point: a boundary-value problem. */
+    private static boolean severalPoints(LinearEquation eq, List<Condition> conditions) {
+        return eq.domain() == Domain.DIFFERENTIAL && conditions.stream().map(Condition::at).distinct().count() > 1;
     }
 
     /** x[0..k-1] = 0 or y^(i)(0) = 0: the conditions of a particular solution. */

@@ -1,0 +1,149 @@
+package dev.rootform.numeric.analysis;
+
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Term;
+import dev.rootform.symbolic.closedform.Angle;
+import dev.rootform.symbolic.solve.Component;
+import dev.rootform.symbolic.solve.ExactSolution;
+import java.util.ArrayList;
+import java.util.List;
+import org.apfloat.Apcomplex;
+import org.apfloat.Apfloat;
+
+/**
+ * A real function of t written as Re Σ_r w_r·u^{p_r}·e^{z_r u}, u = t - origin, with complex
+ * weights w_r and rates z_r at a fixed working precision, and its derivatives:
+ * D^d(u^p e^{zu}) = Σ_{l ≤ min(d,p)} C(d,l)·p!/(p-l)!·u^{p-l}·z^{d-l}·e^{zu} (Leibniz rule).
+ * Approximate; built from exact solutions and basis functions with certified root values. The
+ * value of a fitted solution y(t) = Σ_components Σ_α Σ_i c_i(α)·u^i·e^{αu} is one such sum.
+ */
+final class ModeSum {
+    /** One mode w·u^p·e^{zu}. */
+    record Mode(Apcomplex weight, int power, Apcomplex rate) {
+    }
+
+    private final Rational origin;
+    private final List<Mode> modes;
+    private final long precision;
+
+    private ModeSum(Rational origin, List<Mode> modes, long precision) {
+        this.origin = origin;
+        this.modes = List.copyOf(modes);
+        this.precision = precision;
+    }
+
+    /** The exact solution's components Σ_α Σ_i c_i(α) u^i e^{αu}. */
+    static ModeSum of(ExactSolution s, RootCache cache, long precision) {
+        List<Mode> modes = new ArrayList<>();
+        for (Component c : s.components()) {
+            for (Apcomplex alpha : roots(c.factor().polynomial(), cache, precision)) {
+                for (int i = 0; i < c.coefficients().size(); i++) {
+                    modes.add(new Mode(polynomialAt(c.coefficients().get(i), alpha, precision), i, alpha));
+                }
+            }
+        }
+        return new ModeSum(s.origin(), modes, precision);
+    }
+
+    /** One function per free constant of a general solution (origin 0), in the order of its constants. */
+    static List<ModeSum> basis(ClosedForm general, RootCache cache, long precision) {
+        Apcomplex one = new Apfloat(1, precision);
+        List<ModeSum> basis = new ArrayList<>();
+        for (Term t : general.transientTerms()) {
+            if (t instanceof Term.Exponential e) {
+                basis.add(single(new Mode(one, e.power(), real(e.rate().toBigDecimal(context(precision)), precision))));
+            } else if (t instanceof Term.Oscillating o) {
+                Apfloat w = real(((Angle.Value) o.angle()).value().toBigDecimal(context(precision)), precision).real();
+                Apcomplex z = new Apcomplex(real(o.growth().toBigDecimal(context(precision)), precision).real(), w);
+                basis.add(single(new Mode(one, o.power(), z)));
+                basis.add(single(new Mode(new Apcomplex(Apfloat.ZERO, new Apfloat(-1, precision)), o.power(), z)));
+            } else if (t instanceof Term.RootSum r) {
+                List<Apcomplex> alphas = roots(r.factor(), cache, precision);
+                for (int j = 0; j < r.coefficients().size(); j++) {
+                    List<Mode> modes = new ArrayList<>();
+                    for (Apcomplex alpha : alphas) {
+                        modes.add(new Mode(org.apfloat.ApcomplexMath.pow(alpha, j), r.power(), alpha));
+                    }
+                    basis.add(new ModeSum(Rational.ZERO, modes, precision));
+                }
+            } else {
+                throw new AssertionError(t);
+            }
+        }
+        return basis;
+    }
+
+    /** The d-th derivative at t. */
+    Apfloat derivative(int d, Rational t) {
+        Apcomplex sum = Apcomplex.ZERO;
+        for (Apcomplex term : terms(d, t)) {
+            sum = sum.add(term);
+        }
+        return sum.real();
+    }
+
+    /** The value at t and the largest magnitude of one mode there (to size cancellation). */
+    Apfloat[] valueAndLargest(Rational t) {
+        Apcomplex sum = Apcomplex.ZERO;
+        Apfloat largest = Apfloat.ZERO;
+        for (Apcomplex term : terms(0, t)) {
+            sum = sum.add(term);
+            Apfloat size = org.apfloat.ApcomplexMath.abs(term);
+            largest = size.compareTo(largest) > 0 ? size : largest;
+        }
+        return new Apfloat[] {sum.real(), largest};
+    }
+
+    /** w·D^d(u^p e^{zu}) for every mode. */
+    private List<Apcomplex> terms(int d, Rational t) {
+        Apcomplex u = Decimals.toApfloat(t.subtract(origin), precision);
+        List<Apcomplex> terms = new ArrayList<>(modes.size());
+        for (Mode m : modes) {
+            Apcomplex e = ComplexExp.exp(m.rate().multiply(u), precision);
+            Apcomplex inner = Apcomplex.ZERO;
+            Apfloat binomial = new Apfloat(1, precision);
+            Apfloat falling = new Apfloat(1, precision);
+            for (int l = 0; l <= Math.min(d, m.power()); l++) {
+                inner = inner.add(binomial.multiply(falling).multiply(pow(u, m.power() - l)).multiply(pow(m.rate(), d - l)));
+                binomial = binomial.multiply(new Apfloat(d - l, precision)).divide(new Apfloat(l + 1, precision));
+                falling = falling.multiply(new Apfloat(m.power() - l, precision));
+            }
+            terms.add(m.weight().multiply(inner).multiply(e));
+        }
+        return terms;
+    }
+
+    private static ModeSum single(Mode m) {
+        return new ModeSum(Rational.ZERO, List.of(m), m.weight().precision());
+    }
+
+    private static Apcomplex pow(Apcomplex z, int n) {
+        return n == 0 ? new Apfloat(1, z.precision()) : org.apfloat.ApcomplexMath.pow(z, n);
+    }
+
+    private static List<Apcomplex> roots(RationalPolynomial f, RootCache cache, long precision) {
+        if (f.degree() == 1) {
+            return List.of(Decimals.toApfloat(f.coefficient(0).negate(), precision));
+        }
+        return cache.roots(f, (int) precision).stream()
+                .map(r -> new Apcomplex(new Apfloat(r.re(), precision), new Apfloat(r.im(), precision))).toList();
+    }
+
+    private static Apcomplex polynomialAt(RationalPolynomial c, Apcomplex alpha, long precision) {
+        Apcomplex v = Apcomplex.ZERO;
+        for (int j = c.degree(); j >= 0; j--) {
+            v = v.multiply(alpha).add(Decimals.toApfloat(c.coefficient(j), precision));
+        }
+        return v;
+    }
+
+    private static Apcomplex real(java.math.BigDecimal x, long precision) {
+        return new Apfloat(x, precision);
+    }
+
+    private static java.math.MathContext context(long precision) {
+        return new java.math.MathContext((int) precision);
+    }
+}
