@@ -29,7 +29,11 @@ final class DemoCommand implements Callable<Integer> {
             new Example("Humidity sensor smoothing filter, impulse response (two real poles)",
                     "x[n] = 1.5x[n-1] - 0.56x[n-2]; x[0] = 0; x[1] = 1", "10,100"),
             new Example("Seedling trays filled per week (a third-order count with no radical roots shown)",
-                    "x[n+3] = x[n+1] + x[n]; x[0] = 1; x[1] = 1; x[2] = 1", "20,1000"));
+                    "x[n+3] = x[n+1] + x[n]; x[0] = 1; x[1] = 1; x[2] = 1", "20,1000"),
+            new Example("Bench heater temperature under a sinusoidal daily load, from rest (forced, stable)",
+                    "y'' + 3y' + 2y = 2sin(t); y(0) = 0; y'(0) = 0", "1,10"),
+            new Example("Greenhouse roof loan: monthly balance at 0.4 % interest with payments of 900",
+                    "b[n] = 1.004 b[n-1] - 900; b[0] = 60000", "12,60"));
 
     @Spec
     CommandSpec spec;
