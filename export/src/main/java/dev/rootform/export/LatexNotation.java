@@ -85,19 +85,4 @@ final class LatexNotation implements Notation {
     public String lambda() {
         return "\\lambda";
     }
-
-    @Override
-    public String number(String digits) {
-        return digits;
-    }
-
-    @Override
-    public String name(String identifier) {
-        return identifier;
-    }
-
-    @Override
-    public String negate(String body) {
-        return "-" + body;
-    }
 }

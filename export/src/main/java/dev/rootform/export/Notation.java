@@ -50,12 +50,18 @@ interface Notation {
     /** The bound variable λ of a root sum. */
     String lambda();
 
-    /** A non-negative integer written in decimal digits. */
-    String number(String digits);
+    /** A non-negative integer written in decimal digits; as is, unless the notation marks up numbers. */
+    default String number(String digits) {
+        return digits;
+    }
 
-    /** A single-letter or short name: a variable, a function or the base e. */
-    String name(String identifier);
+    /** A single-letter or short name: a variable, a function or the base e; as is by default. */
+    default String name(String identifier) {
+        return identifier;
+    }
 
     /** The negation -body of an already written operand. */
-    String negate(String body);
+    default String negate(String body) {
+        return "-" + body;
+    }
 }

@@ -82,19 +82,4 @@ final class PlainNotation implements Notation {
     public String lambda() {
         return "λ";
     }
-
-    @Override
-    public String number(String digits) {
-        return digits;
-    }
-
-    @Override
-    public String name(String identifier) {
-        return identifier;
-    }
-
-    @Override
-    public String negate(String body) {
-        return "-" + body;
-    }
 }
