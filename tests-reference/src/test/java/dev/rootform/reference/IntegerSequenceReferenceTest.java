@@ -7,14 +7,20 @@ import dev.rootform.cli.Pipeline;
 import dev.rootform.export.Report;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.model.Problem;
+import dev.rootform.symbolic.parse.ProblemParser;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.Collectors;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvFileSource;
 
 /**
  * The whole job (text in, verified closed form out) against integer-sequence tables: every listed
- * term must equal the closed form's exact value at that index. Source per row in the CSV header.
+ * term must equal the closed form's exact value at that index, and the table itself (written from
+ * memory) must equal exact rational iteration from the row's starting values, which start at
+ * index 0 and are consecutive. Source per row in the CSV header.
  */
 class IntegerSequenceReferenceTest {
     @ParameterizedTest(name = "{0} ({1})")
@@ -25,10 +31,14 @@ class IntegerSequenceReferenceTest {
         for (int n = 0; n < expected.length; n++) {
             points.add(Rational.of(n));
         }
+        Problem problem = ProblemParser.parse(input, List.of(), null);
+        List<Rational> start = problem.conditions().stream().map(Condition::value).collect(Collectors.toList());
+        List<Rational> iterated = ExactIteration.values(problem.equation().coefficients(), start, expected.length);
         Report report = Pipeline.run(input, List.of(), null, 30, points);
         assertTrue(report.verified(), name + " not verified: " + report.solution().checks());
         for (int n = 0; n < expected.length; n++) {
             PointValue v = report.values().get(n);
+            assertEquals(Rational.parse(expected[n]), iterated.get(n), name + ": table against iteration at n = " + n);
             assertEquals(Rational.parse(expected[n]), v.exact().orElseThrow(), name + " at n = " + n);
         }
     }
