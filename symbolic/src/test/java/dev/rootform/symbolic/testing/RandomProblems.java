@@ -60,7 +60,7 @@ public final class RandomProblems {
         List<Rational> a = chi.multiply(rational(true)).coefficients();
         boolean difference = domain == Domain.DIFFERENCE;
         LinearEquation eq = new LinearEquation(domain, difference ? "x" : "y", difference ? "n" : "t", a, 0, List.of());
-        Problem problem = new Problem(eq, conditions(domain, order, cases.contains(RootCase.ZERO)));
+        Problem problem = new Problem(eq, conditions(domain, order, chi.coefficient(0).isZero()));
         boolean decimals = cases.contains(RootCase.DECIMAL) || random.nextInt(4) == 0;
         String label = "case " + count++ + " (seed " + seed + ", " + forcing + "): " + domain + " χ = " + chi;
         return new GeneratedProblem(problem, ProblemText.of(problem, decimals), chi, cases, label);
