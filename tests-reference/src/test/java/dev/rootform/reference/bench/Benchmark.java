@@ -92,11 +92,13 @@ public final class Benchmark {
         int[] solved = new int[2];
         int[] symjaSolved = new int[2];
         int[] total = new int[2];
+        int[] firstOrder = new int[2];
         List<Double> ratios = new ArrayList<>();
         for (int i = 0; i < SIDE_BY_SIDE; i++) {
             GeneratedProblem g = corpus.next(i % 4 == 0 ? 1 : 12);
             int d = g.problem().equation().domain().ordinal();
             total[d]++;
+            firstOrder[d] += g.order() == 1 ? 1 : 0;
             long start = System.nanoTime();
             Report report = solve(g);
             long ours = System.nanoTime() - start;
@@ -114,8 +116,9 @@ public final class Benchmark {
         }
         for (Domain domain : Domain.values()) {
             int d = domain.ordinal();
-            System.out.printf("side by side, %s (%d problems, a quarter of order 1): rootform solved %d, Symja %s solved %d%n",
-                    domain, total[d], solved[d], domain == Domain.DIFFERENCE ? "RSolve" : "DSolve", symjaSolved[d]);
+            System.out.printf("side by side, %s (%d problems, %d of order 1; seed %d): rootform verified %d, Symja %s solved %d%n",
+                    domain, total[d], firstOrder[d], SEED + 10, solved[d], domain == Domain.DIFFERENCE ? "RSolve" : "DSolve",
+                    symjaSolved[d]);
         }
         ratios.sort(Double::compare);
         System.out.printf("side by side, time Symja / rootform on the %d problems both solve: %s%n", ratios.size(),
