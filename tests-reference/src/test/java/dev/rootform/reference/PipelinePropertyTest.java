@@ -27,7 +27,7 @@ import org.junit.jupiter.api.Test;
  */
 class PipelinePropertyTest {
     private static final long SEED = 6_2026_12_01L;
-    private static final int CASES = 40 * Integer.getInteger("tests.multiplier", 1);
+    private static final int CASES = 100 * Integer.getInteger("tests.multiplier", 1);
     private static final double ODE_TOLERANCE = 1e-8;
     private static final List<Integer> INDEX_OFFSETS = List.of(0, 1, 13, 40);
     private static final List<Rational> TIME_OFFSETS = List.of(Rational.of(-1, 2), Rational.of(1, 2), Rational.ONE);

@@ -9,8 +9,9 @@ import dev.rootform.symbolic.testing.GeneratedProblem;
 import dev.rootform.symbolic.testing.RandomProblems;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.List;
-import java.util.Optional;
+import java.util.Map;
 
 /**
  * The benchmark: warm per-problem time of the whole job over generated problems, cold time of the
@@ -90,7 +91,7 @@ public final class Benchmark {
         SymjaBaseline symja = SymjaBaseline.start();
         RandomProblems corpus = new RandomProblems(SEED + 10, Forcing.NONE);
         int[] solved = new int[2];
-        int[] symjaSolved = new int[2];
+        Map<Domain, Map<SymjaBaseline.Outcome, Integer>> outcomes = new EnumMap<>(Domain.class);
         int[] total = new int[2];
         int[] firstOrder = new int[2];
         List<Double> ratios = new ArrayList<>();
@@ -105,20 +106,19 @@ public final class Benchmark {
             solved[d] += report.verified() ? 1 : 0;
             double[] reference = report.values().stream().mapToDouble(v -> v.value().doubleValue()).toArray();
             start = System.nanoTime();
-            Optional<double[]> theirs = symja.solve(g.problem(), points(g));
+            SymjaBaseline.Outcome outcome = symja.check(g.problem(), points(g), reference);
             long symjaTime = System.nanoTime() - start;
-            if (theirs.isPresent() && SymjaBaseline.agrees(theirs.get(), reference)) {
-                symjaSolved[d]++;
-                if (report.verified()) {
-                    ratios.add((double) symjaTime / ours);
-                }
+            outcomes.computeIfAbsent(g.problem().equation().domain(), x -> new EnumMap<>(SymjaBaseline.Outcome.class))
+                    .merge(outcome, 1, Integer::sum);
+            if (outcome == SymjaBaseline.Outcome.SOLVED && report.verified()) {
+                ratios.add((double) symjaTime / ours);
             }
         }
         for (Domain domain : Domain.values()) {
             int d = domain.ordinal();
-            System.out.printf("side by side, %s (%d problems, %d of order 1; seed %d): rootform verified %d, Symja %s solved %d%n",
+            System.out.printf("side by side, %s (%d problems, %d of order 1; seed %d): rootform verified %d, Symja %s %s%n",
                     domain, total[d], firstOrder[d], SEED + 10, solved[d], domain == Domain.DIFFERENCE ? "RSolve" : "DSolve",
-                    symjaSolved[d]);
+                    outcomes.getOrDefault(domain, Map.of()));
         }
         ratios.sort(Double::compare);
         System.out.printf("side by side, time Symja / rootform on the %d problems both solve: %s%n", ratios.size(),

@@ -7,7 +7,6 @@ import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import org.matheclipse.core.basic.Config;
 import org.matheclipse.core.eval.ExprEvaluator;
 import org.matheclipse.core.expression.F;
@@ -18,7 +17,7 @@ import org.matheclipse.core.interfaces.IExpr;
  * Symja's own built-in solvers on rootform's problems: {@code RSolve} for recurrences and
  * {@code DSolve} for differential equations, each call capped by {@code TimeConstrained}. An answer
  * counts only if it is a rule for the unknown whose values at the given points match the reference
- * values; an unevaluated call, a failure or a timeout counts as not solved.
+ * values; an unevaluated call, a wrong answer, a failure or a timeout counts as not solved.
  */
 final class SymjaBaseline {
     private static final int SECONDS = 10;
@@ -41,47 +40,49 @@ final class SymjaBaseline {
         return new SymjaBaseline(evaluator);
     }
 
+    /** How Symja fared on one problem. */
+    enum Outcome {
+        /** A rule whose values agree with the reference. */
+        SOLVED,
+        /** A rule whose values do not agree (or cannot be evaluated to numbers). */
+        DISAGREES,
+        /** Returned unevaluated, or aborted by the time limit. */
+        UNSOLVED,
+        /** Threw an exception. */
+        ERROR
+    }
+
     /**
-     * Symja's values at {@code points}, or empty when it leaves the problem unsolved.
+     * Runs Symja on the problem and compares its answer at {@code points} with {@code reference}
+     * within a relative {@value #TOLERANCE}.
      *
      * @param points where to evaluate its answer (indices or times)
+     * @param reference rootform's verified values at those points
      */
-    Optional<double[]> solve(Problem problem, List<Rational> points) {
+    Outcome check(Problem problem, List<Rational> points, double[] reference) {
         IExpr answer;
         try {
             answer = evaluator.eval("TimeConstrained(" + input(problem) + "," + SECONDS + ",$Aborted)");
         } catch (RuntimeException e) {
-            return Optional.empty();
+            return Outcome.ERROR;
         }
-        if (!answer.isList() || answer.argSize() < 1 || !answer.first().isList()) {
-            return Optional.empty();
+        if (!answer.isList() || answer.argSize() < 1 || !answer.first().isList() || !answer.first().first().isRuleAST()) {
+            return Outcome.UNSOLVED;
         }
-        IExpr rule = answer.first().first();
-        if (!rule.isRuleAST()) {
-            return Optional.empty();
-        }
-        IExpr formula = ((IAST) rule).arg2();
+        IExpr formula = ((IAST) answer.first().first()).arg2();
         String variable = problem.equation().variable();
-        double[] values = new double[points.size()];
-        for (int i = 0; i < values.length; i++) {
-            try {
-                IExpr value = evaluator.eval("N(ReplaceAll(" + formula + "," + variable + "->(" + points.get(i) + ")))");
-                values[i] = value.evalDouble();
-            } catch (RuntimeException e) {
-                return Optional.empty();
-            }
-        }
-        return Optional.of(values);
-    }
-
-    /** True when Symja's values agree with the reference within a relative {@value #TOLERANCE}. */
-    static boolean agrees(double[] symja, double[] reference) {
         for (int i = 0; i < reference.length; i++) {
-            if (!(Math.abs(symja[i] - reference[i]) <= TOLERANCE * Math.max(1, Math.abs(reference[i])))) {
-                return false;
+            double value;
+            try {
+                value = evaluator.eval("N(ReplaceAll(" + formula + "," + variable + "->(" + points.get(i) + ")))").evalDouble();
+            } catch (RuntimeException e) {
+                return Outcome.DISAGREES;
+            }
+            if (!(Math.abs(value - reference[i]) <= TOLERANCE * Math.max(1, Math.abs(reference[i])))) {
+                return Outcome.DISAGREES;
             }
         }
-        return true;
+        return Outcome.SOLVED;
     }
 
     /** The problem in Symja syntax: {@code RSolve({eq, a(0)==v, ...}, a(n), n)} or {@code DSolve(...)}. */
