@@ -10,7 +10,7 @@ import java.util.Set;
  *
  * @param problem the equation and its conditions
  * @param text the same problem in ordinary notation, e.g. {@code 2y'' - 3y' + y = 0; y(0) = 1; y'(0) = 0}
- * @param characteristic the monic-free product of the chosen factors, χ(λ) up to the scale factor
+ * @param characteristic the product of the chosen monic factors; the equation's coefficients are this times a random rational scale
  * @param cases the root kinds that went into χ
  * @param label a short description that names the seed and the case number, for failure messages
  */
