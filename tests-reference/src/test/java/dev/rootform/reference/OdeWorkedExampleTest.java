@@ -47,7 +47,21 @@ class OdeWorkedExampleTest {
                 Arguments.of("(D^2 + 1)^2 y = 0; y(0) = 0; y'(0) = 0; y''(0) = 0; y'''(0) = 1",
                         (DoubleUnaryOperator) t -> (Math.sin(t) - t * Math.cos(t)) / 2),
                 // a surd pair: y'' - 2y = 0, y(0) = 1, y'(0) = 0 → cosh(√2 t) (common practice)
-                Arguments.of("y'' - 2y = 0; y(0) = 1; y'(0) = 0", (DoubleUnaryOperator) t -> Math.cosh(Math.sqrt(2) * t)));
+                Arguments.of("y'' - 2y = 0; y(0) = 1; y'(0) = 0", (DoubleUnaryOperator) t -> Math.cosh(Math.sqrt(2) * t)),
+                // roots 3 and -2 with data that cancels the growing mode: y = e^{-2t}
+                // (textbook initial-value exercise, e.g. Boyce & DiPrima section 3.1 — from memory)
+                Arguments.of("y'' - y' - 6y = 0; y(0) = 1; y'(0) = -2", (DoubleUnaryOperator) t -> Math.exp(-2 * t)),
+                // triple root 1: y = (1 + t)e^t (textbook higher-order example — from memory)
+                Arguments.of("y''' - 3y'' + 3y' - y = 0; y(0) = 1; y'(0) = 2; y''(0) = 3",
+                        (DoubleUnaryOperator) t -> (1 + t) * Math.exp(t)),
+                // roots ±1 ± i: y = cos t cosh t, the even solution of y'''' = -4y (beam-equation
+                // handbook identity; common practice)
+                Arguments.of("y'''' + 4y = 0; y(0) = 1; y'(0) = 0; y''(0) = 0; y'''(0) = 0",
+                        (DoubleUnaryOperator) t -> Math.cos(t) * Math.cosh(t)),
+                // y = cos 3t + sin 3t (textbook undamped oscillator — from memory)
+                Arguments.of("y'' + 9y = 0; y(0) = 1; y'(0) = 3", (DoubleUnaryOperator) t -> Math.cos(3 * t) + Math.sin(3 * t)),
+                // root 0 and -1: y = 1 + e^{-t} (common practice: a constant mode)
+                Arguments.of("y'' + y' = 0; y(0) = 2; y'(0) = -1", (DoubleUnaryOperator) t -> 1 + Math.exp(-t)));
     }
 
     @ParameterizedTest(name = "{0}")
