@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.rootform.cli.Pipeline;
 import dev.rootform.export.Report;
+import dev.rootform.numeric.check.ForcingFunction;
 import dev.rootform.numeric.check.OdeReference;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Condition;
@@ -18,7 +19,7 @@ import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
 
 /**
- * The seeded random corpus (orders 1–12, every root case) through the whole job, text in → report
+ * The seeded random corpus (orders 1–12, every root case, a third of it forced) through the whole job, text in → report
  * out: every answer must be verified, and its values must equal exact rational iteration at
  * indices up to 40 past the conditions (sequences), or Commons Math's DOP853 integrator
  * ({@link OdeReference}, relative tolerance 1e-12) within {@value #ODE_TOLERANCE} relative to
@@ -34,7 +35,7 @@ class PipelinePropertyTest {
 
     @Test
     void wholePipelineAgreesWithIndependentReferences() {
-        RandomProblems corpus = new RandomProblems(SEED, Forcing.NONE);
+        RandomProblems corpus = new RandomProblems(SEED, Forcing.MIXED);
         for (int i = 0; i < CASES; i++) {
             GeneratedProblem g = corpus.next(12);
             if (g.problem().equation().domain() == Domain.DIFFERENCE) {
@@ -52,7 +53,8 @@ class PipelinePropertyTest {
         List<Rational> points = INDEX_OFFSETS.stream().map(d -> Rational.of(first + eq.order() + d)).collect(Collectors.toList());
         Report report = run(g, points);
         List<Rational> start = conditions.stream().map(Condition::value).collect(Collectors.toList());
-        List<Rational> iterated = ExactIteration.values(eq.coefficients(), start, eq.order() + INDEX_OFFSETS.get(INDEX_OFFSETS.size() - 1) + 1);
+        List<Rational> iterated = ExactIteration.values(eq.coefficients(), eq.forcing(), first, start,
+                eq.order() + INDEX_OFFSETS.get(INDEX_OFFSETS.size() - 1) + 1);
         for (int p = 0; p < points.size(); p++) {
             int index = points.get(p).toBigInteger().intValueExact() - first;
             assertEquals(iterated.get(index), report.values().get(p).exact().orElseThrow(), g.label() + " at n = " + points.get(p));
@@ -66,7 +68,8 @@ class PipelinePropertyTest {
         Report report = run(g, points);
         List<Rational> initial = g.problem().conditions().stream().map(Condition::value).collect(Collectors.toList());
         double scale = initial.stream().mapToDouble(r -> Math.abs(r.doubleValue())).max().orElse(0);
-        double[] reference = OdeReference.values(eq.coefficients(), t0, initial, points.stream().mapToDouble(Rational::doubleValue).toArray());
+        double[] reference = OdeReference.values(eq.coefficients(), ForcingFunction.of(eq.forcing()), t0, initial,
+                points.stream().mapToDouble(Rational::doubleValue).toArray());
         for (int p = 0; p < points.size(); p++) {
             double actual = report.values().get(p).value().doubleValue();
             double bound = ODE_TOLERANCE * Math.max(1, Math.max(Math.abs(reference[p]), scale));

@@ -26,11 +26,13 @@ class RandomCorpusPropertyTest {
 
     @Test
     void everyRandomProblemIsVerifiedExactly() {
-        RandomProblems corpus = new RandomProblems(SEED, Forcing.NONE);
+        RandomProblems corpus = new RandomProblems(SEED, Forcing.MIXED);
         Set<RootCase> seen = EnumSet.noneOf(RootCase.class);
+        int forced = 0;
         for (int i = 0; i < CASES; i++) {
             GeneratedProblem g = corpus.next(12);
             seen.addAll(g.cases());
+            forced += g.problem().equation().isHomogeneous() ? 0 : 1;
             Solution s = Solver.solve(g.problem());
             for (Check c : s.checks()) {
                 assertTrue(c.passed(), g.label() + ": " + c.name() + ": " + c.detail());
@@ -38,11 +40,12 @@ class RandomCorpusPropertyTest {
             assertEquals(3, s.checks().size(), g.label());
         }
         assertEquals(EnumSet.allOf(RootCase.class), seen, "seed " + SEED + " must cover every root case");
+        assertTrue(forced >= CASES / 5 && forced <= CASES / 2, "about a third forced, got " + forced + " of " + CASES);
     }
 
     @Test
     void generatedTextReadsBackAsTheSameProblem() {
-        RandomProblems corpus = new RandomProblems(SEED + 1, Forcing.NONE);
+        RandomProblems corpus = new RandomProblems(SEED + 1, Forcing.MIXED);
         for (int i = 0; i < CASES; i++) {
             GeneratedProblem g = corpus.next(12);
             Problem read = ProblemParser.parse(g.text(), List.of(), null);

@@ -24,6 +24,11 @@ public final class ProblemText {
 
     /** The problem as text; the equation must be homogeneous with shift 0. */
     public static String of(Problem problem, boolean decimals) {
+        return of(problem, decimals, "0");
+    }
+
+    /** The homogeneous problem's text with {@code rightSide} in place of 0 (a forced equation). */
+    public static String of(Problem problem, boolean decimals, String rightSide) {
         LinearEquation eq = problem.equation();
         if (!eq.isHomogeneous() || eq.shift() != 0) {
             throw new IllegalArgumentException("only homogeneous equations with shift 0 are written");
@@ -35,7 +40,7 @@ public final class ProblemText {
                 appendTerm(text, a.get(j), unknown(eq, j), decimals);
             }
         }
-        text.append(" = 0");
+        text.append(" = ").append(rightSide);
         for (Condition c : problem.conditions()) {
             text.append("; ").append(condition(eq, c, decimals));
         }

@@ -6,6 +6,7 @@ import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
+import dev.rootform.symbolic.parse.ProblemParser;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
@@ -34,7 +35,7 @@ public final class RandomProblems {
 
     /**
      * @param seed the seed, named in every label
-     * @param forcing which right-hand sides to generate (only {@link Forcing#NONE} so far)
+     * @param forcing which right-hand sides to generate
      */
     public RandomProblems(long seed, Forcing forcing) {
         this.seed = seed;
@@ -60,10 +61,16 @@ public final class RandomProblems {
         List<Rational> a = chi.multiply(rational(true)).coefficients();
         boolean difference = domain == Domain.DIFFERENCE;
         LinearEquation eq = new LinearEquation(domain, difference ? "x" : "y", difference ? "n" : "t", a, 0, List.of());
-        Problem problem = new Problem(eq, conditions(domain, order, chi.coefficient(0).isZero()));
+        boolean forced = forcing == Forcing.MIXED && random.nextInt(3) == 0;
+        Problem problem = new Problem(eq, conditions(domain, order, chi.coefficient(0).isZero(), forced));
         boolean decimals = cases.contains(RootCase.DECIMAL) || random.nextInt(4) == 0;
-        String label = "case " + count++ + " (seed " + seed + ", " + forcing + "): " + domain + " χ = " + chi;
-        return new GeneratedProblem(problem, ProblemText.of(problem, decimals), chi, cases, label);
+        String label = "case " + count++ + " (seed " + seed + ", " + (forced ? "forced" : "unforced") + "): "
+                + domain + " χ = " + chi;
+        if (!forced) {
+            return new GeneratedProblem(problem, ProblemText.of(problem, decimals), chi, cases, label);
+        }
+        String text = ProblemText.of(problem, decimals, ForcingText.of(random, domain, chi));
+        return new GeneratedProblem(ProblemParser.parse(text, List.of(), null), text, chi, cases, label);
     }
 
     /** A product of random factors of total degree exactly {@code order}. */
@@ -129,9 +136,10 @@ public final class RandomProblems {
         return r;
     }
 
-    private List<Condition> conditions(Domain domain, int order, boolean zeroRoot) {
+    /** k conditions; a forced differential equation gets them at t = 0, where its forcing is exact. */
+    private List<Condition> conditions(Domain domain, int order, boolean zeroRoot, boolean forced) {
         List<Condition> conditions = new ArrayList<>();
-        Rational t0 = Rational.of(random.nextInt(5) - 2, 1 + random.nextInt(2));
+        Rational t0 = forced ? Rational.ZERO : Rational.of(random.nextInt(5) - 2, 1 + random.nextInt(2));
         // with λ = 0 a root the first values are free, so conditions must start at the first index
         int first = zeroRoot ? -random.nextInt(4) : random.nextInt(7) - 3;
         for (int j = 0; j < order; j++) {
