@@ -42,11 +42,11 @@ public final class Benchmark {
     }
 
     private static void warm() {
-        RandomProblems warmUp = new RandomProblems(SEED - 1, Forcing.NONE);
+        RandomProblems warmUp = new RandomProblems(SEED - 1, Forcing.MIXED);
         for (int i = 0; i < WARM_UP; i++) {
             solve(warmUp.next(12));
         }
-        RandomProblems corpus = new RandomProblems(SEED, Forcing.NONE);
+        RandomProblems corpus = new RandomProblems(SEED, Forcing.MIXED);
         Timings timings = new Timings();
         int verified = 0;
         for (int i = 0; i < PROBLEMS; i++) {
@@ -89,7 +89,7 @@ public final class Benchmark {
 
     private static void sideBySide() {
         SymjaBaseline symja = SymjaBaseline.start();
-        RandomProblems corpus = new RandomProblems(SEED + 10, Forcing.NONE);
+        RandomProblems corpus = new RandomProblems(SEED + 10, Forcing.MIXED);
         int[] solved = new int[2];
         Map<Domain, Map<SymjaBaseline.Outcome, Integer>> outcomes = new EnumMap<>(Domain.class);
         int[] total = new int[2];

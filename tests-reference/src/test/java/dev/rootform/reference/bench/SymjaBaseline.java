@@ -3,6 +3,7 @@ package dev.rootform.reference.bench;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import java.util.ArrayList;
@@ -98,12 +99,27 @@ final class SymjaBaseline {
                 lhs.append("+(").append(a).append(")*").append(difference ? "a(" + v + "+" + j + ")" : derivative(j, v));
             }
         }
-        parts.add(lhs + "==0");
+        parts.add(lhs + "==" + rightSide(eq));
         for (Condition c : problem.conditions()) {
             parts.add((difference ? "a(" + c.at() + ")" : derivative(c.derivative(), "(" + c.at() + ")")) + "==(" + c.value() + ")");
         }
         String unknown = difference ? "a(" + v + ")" : "y(" + v + ")";
         return (difference ? "RSolve" : "DSolve") + "({" + String.join(",", parts) + "}," + unknown + "," + v + ")";
+    }
+
+    /** The forcing terms in Symja syntax (generated problems have shift 0), or 0. */
+    private static String rightSide(LinearEquation eq) {
+        StringBuilder rhs = new StringBuilder("0");
+        String v = eq.variable();
+        for (ForcingTerm t : eq.forcing()) {
+            rhs.append("+(").append(t.coefficient()).append(")*").append(v).append("^").append(t.power()).append('*')
+                    .append(eq.domain() == Domain.DIFFERENCE ? "(" + t.exponential() + ")^" + v : "E^((" + t.exponential() + ")*" + v + ")");
+            if (t.oscillation() != ForcingTerm.Oscillation.NONE) {
+                rhs.append('*').append(t.oscillation() == ForcingTerm.Oscillation.COS ? "Cos" : "Sin").append("((")
+                        .append(t.frequency()).append(')').append(t.frequencyTimesPi() ? "*Pi" : "").append('*').append(v).append(')');
+            }
+        }
+        return rhs.toString();
     }
 
     private static String derivative(int order, String at) {
