@@ -83,7 +83,8 @@ final class CodeHeader {
      * no comment terminators ({@code *}{@code /}, {@code --}).
      */
     static String sanitize(String text) {
-        String s = text.replace("λ", "lambda").replace("√", "sqrt").replace("π", "pi").replace("·", "*")
+        String s = text.replace("λ", "lambda").replaceAll("√(\\d+)", "sqrt($1)").replace("√", "sqrt")
+                .replaceAll("π(?=[A-Za-z0-9(])", "pi*").replace("π", "pi").replace("·", "*")
                 .replace("Σ", "sum").replace("≥", ">=").replace("−", "-");
         StringBuilder sb = new StringBuilder();
         s.codePoints().forEach(c -> sb.append(c >= 0x20 && c < 0x7f ? (char) c : c == '\t' ? ' ' : '?'));

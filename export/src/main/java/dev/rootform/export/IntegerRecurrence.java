@@ -2,7 +2,6 @@ package dev.rootform.export;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;
-import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.ExactSolution;
 import java.math.BigInteger;
 import java.util.ArrayList;
@@ -13,7 +12,9 @@ import java.util.Optional;
  * A recurrence all of whose values are integers, in the form x[m + k] = Σ_{j&lt;k} step_j·x[m + j]
  * for m &ge; first, with its first k values.
  *
- * <p>Criterion: with the equation Σ a_j x[m + j] = 0, every a_j/a_k is an integer and
+ * <p>Criterion: with the operator μ = Σ a_j E^j that annihilates the solution (the characteristic
+ * polynomial, times the forcing's annihilator for a forced equation, so that Σ a_j x[m + j] = 0
+ * holds even for a forced equation such as x[n] = 2x[n-1] + 1), every a_j/a_k is an integer and
  * x[first], …, x[first + k − 1] are integers; then by induction every later value is an integer.
  * The values are read from the exact solution, and the recurrence is confirmed on the next 2k
  * values before it is used.
@@ -29,17 +30,17 @@ record IntegerRecurrence(List<BigInteger> step, List<BigInteger> start, long fir
         start = List.copyOf(start);
     }
 
-    /** The integer recurrence of a homogeneous sequence solution, if the criterion holds. */
+    /** The integer recurrence of a sequence solution, if the criterion holds. */
     static Optional<IntegerRecurrence> of(ExactSolution s) {
-        LinearEquation eq = s.equation();
-        if (eq.domain() != Domain.DIFFERENCE || !eq.isHomogeneous()) {
+        if (s.equation().domain() != Domain.DIFFERENCE) {
             return Optional.empty();
         }
-        int k = eq.order();
-        Rational lead = eq.coefficients().get(k);
+        List<Rational> a = s.operator().coefficients();
+        int k = a.size() - 1;
+        Rational lead = a.get(k);
         List<BigInteger> step = new ArrayList<>();
         for (int j = 0; j < k; j++) {
-            Rational c = eq.coefficients().get(j).divide(lead).negate();
+            Rational c = a.get(j).divide(lead).negate();
             if (!c.isInteger()) {
                 return Optional.empty();
             }

@@ -8,7 +8,10 @@ import java.util.Optional;
 
 /** Equations for the exporter tests, each solved by the whole pipeline. */
 final class Corpus {
-    /** Difference equations: real, surd, repeated, complex (root of unity and surd modulus), root sums, λ = 0, non-integer. */
+    /**
+     * Difference equations: real, surd, repeated, complex (root of unity and surd modulus), root
+     * sums, λ = 0, non-integer; forced (constant, resonant exponential, polynomial, oscillating).
+     */
     static final List<String> SEQUENCES = List.of(
             "x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1",
             "x[n] = 3x[n-1] - 2x[n-2]; x[0] = 1; x[1] = 5",
@@ -18,14 +21,20 @@ final class Corpus {
             "x[n+3] = x[n+1] + x[n]; x[0] = 3; x[1] = 0; x[2] = 2",
             "x[n+5] = x[n+1] + x[n]; x[0] = 1; x[1] = 2; x[2] = 3; x[3] = 4; x[4] = 5",
             "x[n+3] = 2x[n+1]; x[0] = 1; x[1] = 2; x[2] = 3",
-            "2x[n+1] = x[n]; x[-2] = 3");
-    /** Differential equations: complex, real, repeated, root sum, shifted origin. */
+            "2x[n+1] = x[n]; x[-2] = 3",
+            "x[n] = 2x[n-1] + 1; x[0] = 0",
+            "x[n+1] = 2x[n] + 2^n; x[0] = 1",
+            "x[n+2] - 2x[n+1] + x[n] = 1; x[0] = 0; x[1] = 0",
+            "x[n+1] = x[n]/2 + cos(pi n/3) + 2; x[0] = 1");
+    /** Differential equations: complex, real, repeated, root sum, shifted origin; forced (resonant and not). */
     static final List<String> FUNCTIONS = List.of(
             "y'' + 2y' + 5y = 0; y(0) = 1; y'(0) = 0",
             "y'' - y = 0; y(0) = 2; y'(0) = 1",
             "(D+1)^2 y = 0; y(0) = 1; y'(0) = 2",
             "y''' - y' - y = 0; y(0) = 1; y'(0) = 0; y''(0) = 0",
-            "y'' + 4y = 0; y(3/2) = 1; y'(3/2) = 0");
+            "y'' + 4y = 0; y(3/2) = 1; y'(3/2) = 0",
+            "y'' + 4y = sin(2t); y(0) = 0; y'(0) = 0",
+            "q'' + 3q' + 2q = 5 + t e^(-t); q(0) = 0; q'(0) = 0");
 
     private Corpus() {
     }

@@ -75,8 +75,13 @@ final class Linearizer {
 
     /** The value of a constant expression such as {@code -3/4} or {@code 2^10}. */
     Rational rational(Node node, String role) {
-        return evaluate(node).constantValue()
-                .orElseThrow(() -> error(role + " must be a rational constant: " + text(node), node));
+        Value value;
+        try {
+            value = evaluate(node);
+        } catch (InputException e) {
+            throw error(role + " must be a rational constant: " + text(node), node);
+        }
+        return value.constantValue().orElseThrow(() -> error(role + " must be a rational constant: " + text(node), node));
     }
 
     private Value constant(Rational value) {
