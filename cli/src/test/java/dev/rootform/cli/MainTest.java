@@ -71,6 +71,9 @@ class MainTest {
         "x[n+2] = -x[n]; x[0] = 0; x[2] = 1|every solution has x[0] + x[2] = 0, but the given values make it 1",
         "x[n+2] = -x[n]; x[0] = 0; x[2] = 0|adding any multiple of sin(πn/2) keeps every condition",
         "y'' = 0; y'(0) = 1; y'(1) = 1|singular",
+        "y'' + y = 0; y(0) = 0; y(pi) = 0|adding any multiple of sin(t) keeps every condition",
+        "y'' + y = 0; y(0) = 0; y(pi) = 1|contradict each other",
+        "y'' + y = 0; y(pi) = 1; y'(pi) = 0|give them at a rational point",
     })
     void badInputGetsOneLineAndExitCodeTwo(String input, String fragment) {
         Run r = run("solve", input);

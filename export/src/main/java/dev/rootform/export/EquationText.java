@@ -53,7 +53,7 @@ final class EquationText {
 
     /** {@code y'(0) = 1} or {@code x[3] = -2}. */
     static String condition(LinearEquation eq, Condition c) {
-        String at = Numbers.point(c.at());
+        String at = c.atTimesPi() ? c.point() : Numbers.point(c.at());
         String lhs = eq.domain() == Domain.DIFFERENTIAL ? derivative(eq.function(), c.derivative()) + "(" + at + ")"
                 : eq.function() + "[" + at + "]";
         return lhs + " = " + c.value();

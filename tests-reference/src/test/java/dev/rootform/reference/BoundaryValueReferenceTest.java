@@ -21,6 +21,8 @@ class BoundaryValueReferenceTest {
         return Stream.of(
                 // y'' + y = 0, y(0) = 0, y(1) = 1 → sin t / sin 1 (common practice)
                 Arguments.of("y'' + y = 0; y(0) = 0; y(1) = 1", (DoubleUnaryOperator) t -> Math.sin(t) / Math.sin(1)),
+                // a point that is a multiple of π: y'' + y = 0, y(0) = 1, y(π/2) = 2 → cos t + 2 sin t (common practice)
+                Arguments.of("y'' + y = 0; y(0) = 1; y(pi/2) = 2", (DoubleUnaryOperator) t -> Math.cos(t) + 2 * Math.sin(t)),
                 // y'' = t, y(0) = y(1) = 0 → (t³ - t)/6: a simply supported beam-type problem (common practice)
                 Arguments.of("y'' = t; y(0) = 0; y(1) = 0", (DoubleUnaryOperator) t -> (t * t * t - t) / 6),
                 // y'' - y = 0, y(0) = 1, y(1) = 0 → sinh(1 - t)/sinh 1 (common practice)

@@ -4,13 +4,21 @@ import dev.rootform.numeric.check.ForcingFunction;
 import dev.rootform.numeric.check.OdeReference;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Coefficient;
+import dev.rootform.symbolic.closedform.Surd;
+import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.function.UnaryOperator;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
@@ -66,47 +74,142 @@ final class BoundaryValues {
         Apfloat[][] a = new Apfloat[k][k + 1];
         for (int i = 0; i < k; i++) {
             Condition c = conditions.get(i);
+            Apfloat t = point(c, working);
             for (int j = 0; j < k; j++) {
-                a[i][j] = basis.get(j).derivative(c.derivative(), c.at());
+                a[i][j] = basis.get(j).derivative(c.derivative(), t);
             }
             Apfloat rhs = Decimals.toApfloat(c.value(), working);
-            a[i][k] = particular.isPresent() ? rhs.subtract(particular.get().derivative(c.derivative(), c.at())) : rhs;
+            a[i][k] = particular.isPresent() ? rhs.subtract(particular.get().derivative(c.derivative(), t)) : rhs;
         }
-        return new BoundaryValues(solution, basis, particular, eliminate(a, working), working);
+        return new BoundaryValues(solution, basis, particular, eliminate(a, working, solution), working);
     }
 
-    /** Gaussian elimination with partial pivoting; a pivot below 10^-(working - 10) of the row scale is zero. */
-    private static List<Apfloat> eliminate(Apfloat[][] a, long working) {
+    /** The condition's point at the working precision: at, or at·π. */
+    static Apfloat point(Condition c, long precision) {
+        Apfloat at = Decimals.toApfloat(c.at(), precision);
+        return c.atTimesPi() ? at.multiply(ApfloatMath.pi(precision)) : at;
+    }
+
+    /**
+     * Gauss–Jordan elimination with partial pivoting; an entry below 10^-(working - 10) of its row's
+     * scale counts as zero. A singular system is explained: contradictory conditions, or a free
+     * solution Σ v_j·C_j-basis (the kernel vector, largest entry 1) that can be added.
+     */
+    private static List<Apfloat> eliminate(Apfloat[][] a, long working, Solution solution) {
         int k = a.length;
         Apfloat tiny = new Apfloat("1e-" + (working - 10), working);
+        Apfloat[] scales = new Apfloat[k];
+        for (int r = 0; r < k; r++) {
+            scales[r] = scale(a, r);
+        }
+        int[] pivotRow = new int[k];
+        java.util.Arrays.fill(pivotRow, -1);
+        int rank = 0;
         for (int c = 0; c < k; c++) {
-            int p = c;
-            for (int r = c + 1; r < k; r++) {
-                p = ApfloatMath.abs(a[r][c]).compareTo(ApfloatMath.abs(a[p][c])) > 0 ? r : p;
-            }
-            if (ApfloatMath.abs(a[p][c]).compareTo(tiny.multiply(scale(a, p))) <= 0) {
-                throw new InputException("the boundary conditions do not pick one solution: the system is singular "
-                        + "to " + (working - 10) + " digits (they either leave a solution free or contradict each other)", "", -1);
-            }
-            Apfloat[] tmp = a[p];
-            a[p] = a[c];
-            a[c] = tmp;
-            for (int r = c + 1; r < k; r++) {
-                Apfloat f = a[r][c].divide(a[c][c]);
-                for (int j = c; j <= k; j++) {
-                    a[r][j] = a[r][j].subtract(f.multiply(a[c][j]));
+            int p = -1;
+            for (int r = rank; r < k; r++) {
+                if (ApfloatMath.abs(a[r][c]).compareTo(tiny.multiply(scales[r])) > 0
+                        && (p < 0 || ApfloatMath.abs(a[r][c]).compareTo(ApfloatMath.abs(a[p][c])) > 0)) {
+                    p = r;
                 }
             }
+            if (p < 0) {
+                continue;
+            }
+            swap(a, scales, p, rank);
+            for (int r = 0; r < k; r++) {
+                if (r != rank) {
+                    Apfloat f = a[r][c].divide(a[rank][c]);
+                    for (int j = c; j <= k; j++) {
+                        a[r][j] = a[r][j].subtract(f.multiply(a[rank][j]));
+                    }
+                }
+            }
+            pivotRow[c] = rank++;
+        }
+        if (rank < k) {
+            throw singular(a, pivotRow, rank, tiny, scales, working, solution);
         }
         Apfloat[] x = new Apfloat[k];
-        for (int r = k - 1; r >= 0; r--) {
-            Apfloat s = a[r][k];
-            for (int j = r + 1; j < k; j++) {
-                s = s.subtract(a[r][j].multiply(x[j]));
-            }
-            x[r] = s.divide(a[r][r]);
+        for (int c = 0; c < k; c++) {
+            x[c] = a[pivotRow[c]][k].divide(a[pivotRow[c]][c]);
         }
         return List.of(x);
+    }
+
+    private static void swap(Apfloat[][] a, Apfloat[] scales, int i, int j) {
+        Apfloat[] row = a[i];
+        a[i] = a[j];
+        a[j] = row;
+        Apfloat s = scales[i];
+        scales[i] = scales[j];
+        scales[j] = s;
+    }
+
+    /** Which of the two ways a singular system fails, and why, as one line. */
+    /** A kernel entry within 10^-(working - 10) of a multiple of 1/60 is taken as that rational. */
+    private static final int SMALL_DENOMINATORS = 60;
+
+    private static InputException singular(Apfloat[][] a, int[] pivotRow, int rank, Apfloat tiny, Apfloat[] scales,
+            long working, Solution solution) {
+        int k = a.length;
+        String digits = " (singular to " + (working - 10) + " digits)";
+        for (int r = rank; r < k; r++) {
+            if (ApfloatMath.abs(a[r][k]).compareTo(tiny.multiply(scales[r])) > 0) {
+                return new InputException("the boundary conditions contradict each other: no solution meets them all" + digits, "", -1);
+            }
+        }
+        int free = 0;
+        while (pivotRow[free] >= 0) {
+            free++;
+        }
+        Apfloat[] v = new Apfloat[k];
+        for (int c = 0; c < k; c++) {
+            v[c] = c == free ? new Apfloat(1, working)
+                    : pivotRow[c] < 0 ? Apfloat.ZERO : a[pivotRow[c]][free].negate().divide(a[pivotRow[c]][c]);
+        }
+        Apfloat largest = Apfloat.ONE;
+        for (Apfloat x : v) {
+            largest = ApfloatMath.abs(x).compareTo(largest) > 0 ? ApfloatMath.abs(x) : largest;
+        }
+        List<String> constants = solution.general().freeConstants();
+        Map<String, Rational> exact = new HashMap<>();
+        StringBuilder combination = new StringBuilder();
+        for (int c = 0; c < k; c++) {
+            Apfloat x = v[c].divide(largest);
+            combination.append(c == 0 ? "" : ", ").append(constants.get(c)).append(" ≈ ")
+                    .append(Decimals.toBigDecimal(x, 10).stripTrailingZeros().toPlainString());
+            Rational r = Rational.of(Math.round(x.doubleValue() * SMALL_DENOMINATORS), SMALL_DENOMINATORS);
+            if (ApfloatMath.abs(x.subtract(Decimals.toApfloat(r, working))).compareTo(tiny) <= 0) {
+                exact.put(constants.get(c), r);
+            }
+        }
+        String message = "the boundary conditions leave a solution free" + digits;
+        if (exact.size() == k) {
+            return new ConditionsException(message, withConstants(solution.general(), exact));
+        }
+        return new InputException(message + ": adding any multiple of the homogeneous solution with "
+                + combination + " keeps every condition", "", -1);
+    }
+
+    /** The general solution's homogeneous terms with the free constants replaced by exact values. */
+    private static ClosedForm withConstants(ClosedForm general, Map<String, Rational> values) {
+        UnaryOperator<Coefficient> fill = c -> c instanceof Coefficient.Free f
+                ? new Coefficient.Exact(Surd.of(values.get(f.name()))) : c;
+        List<Term> terms = new ArrayList<>();
+        for (Term t : general.transientTerms()) {
+            if (t instanceof Term.Exponential e) {
+                terms.add(new Term.Exponential(fill.apply(e.coefficient()), e.power(), e.rate()));
+            } else if (t instanceof Term.Oscillating o) {
+                terms.add(new Term.Oscillating(fill.apply(o.cosine()), fill.apply(o.sine()), o.power(), o.growth(), o.angle()));
+            } else if (t instanceof Term.RootSum r) {
+                terms.add(new Term.RootSum(r.factor(), r.coefficients().stream().map(fill).toList(), r.power()));
+            } else {
+                throw new AssertionError(t);
+            }
+        }
+        return new ClosedForm(general.domain(), general.function(), general.variable(), general.origin(),
+                general.validFrom(), general.leadingValues(), terms, List.of());
     }
 
     private static Apfloat scale(Apfloat[][] a, int row) {
@@ -136,6 +239,11 @@ final class BoundaryValues {
 
     /** y^(d)(t) at the working precision. */
     Apfloat derivative(int d, Rational t) {
+        return derivative(d, Decimals.toApfloat(t, precision));
+    }
+
+    /** y^(d)(t) at a point given in the working precision. */
+    Apfloat derivative(int d, Apfloat t) {
         Apfloat sum = particular.map(p -> p.derivative(d, t)).orElse(Apfloat.ZERO);
         for (int j = 0; j < basis.size(); j++) {
             sum = sum.add(constants.get(j).multiply(basis.get(j).derivative(d, t)));
@@ -148,7 +256,7 @@ final class BoundaryValues {
         Apfloat worst = Apfloat.ZERO;
         for (Condition c : solution.problem().conditions()) {
             Apfloat v = Decimals.toApfloat(c.value(), precision);
-            Apfloat error = ApfloatMath.abs(derivative(c.derivative(), c.at()).subtract(v))
+            Apfloat error = ApfloatMath.abs(derivative(c.derivative(), point(c, precision)).subtract(v))
                     .divide(ApfloatMath.abs(v).add(new Apfloat(1, v.precision())));
             worst = error.compareTo(worst) > 0 ? error : worst;
         }
@@ -163,7 +271,8 @@ final class BoundaryValues {
      */
     Check integratorCheck() {
         List<Condition> conditions = solution.problem().conditions();
-        Rational t0 = conditions.get(0).at();
+        // the start, rounded to a rational when it is a multiple of π; the derivatives are taken there
+        Rational t0 = Rational.of(Decimals.toBigDecimal(point(conditions.get(0), precision), 40));
         int k = solution.problem().equation().order();
         List<Rational> initial = new ArrayList<>();
         for (int d = 0; d < k; d++) {
@@ -172,10 +281,10 @@ final class BoundaryValues {
         double worst = 0;
         double scale = 1;
         for (Condition c : conditions) {
-            if (c.derivative() == 0 && !c.at().equals(t0)) {
+            double at = point(c, precision).doubleValue();
+            if (c.derivative() == 0 && at != t0.doubleValue()) {
                 double reference = OdeReference.values(solution.problem().equation().coefficients(),
-                        ForcingFunction.of(solution.problem().equation().forcing()), t0, initial,
-                        new double[] {c.at().doubleValue()})[0];
+                        ForcingFunction.of(solution.problem().equation().forcing()), t0, initial, new double[] {at})[0];
                 worst = Math.max(worst, Math.abs(reference - c.value().doubleValue()));
                 scale = Math.max(scale, Math.abs(c.value().doubleValue()));
             }
@@ -183,6 +292,6 @@ final class BoundaryValues {
         boolean passed = worst <= Analyzer.CHECK_TOLERANCE * scale;
         return new Check("agrees with numerical integration", passed, String.format(
                 "Dormand-Prince 8(5,3) (Commons Math) from t = %s to the other condition points: largest difference "
-                        + "%.2e (tolerance %.0e relative)", t0, worst, Analyzer.CHECK_TOLERANCE));
+                        + "%.2e (tolerance %.0e relative)", conditions.get(0).point(), worst, Analyzer.CHECK_TOLERANCE));
     }
 }

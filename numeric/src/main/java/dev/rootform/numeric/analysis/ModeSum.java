@@ -77,6 +77,11 @@ final class ModeSum {
 
     /** The d-th derivative at t. */
     Apfloat derivative(int d, Rational t) {
+        return derivative(d, Decimals.toApfloat(t, precision));
+    }
+
+    /** The d-th derivative at a point given in the working precision (e.g. a multiple of π). */
+    Apfloat derivative(int d, Apfloat t) {
         Apcomplex sum = Apcomplex.ZERO;
         for (Apcomplex term : terms(d, t)) {
             sum = sum.add(term);
@@ -88,7 +93,7 @@ final class ModeSum {
     Apfloat[] valueAndLargest(Rational t) {
         Apcomplex sum = Apcomplex.ZERO;
         Apfloat largest = Apfloat.ZERO;
-        for (Apcomplex term : terms(0, t)) {
+        for (Apcomplex term : terms(0, Decimals.toApfloat(t, precision))) {
             sum = sum.add(term);
             Apfloat size = org.apfloat.ApcomplexMath.abs(term);
             largest = size.compareTo(largest) > 0 ? size : largest;
@@ -97,8 +102,8 @@ final class ModeSum {
     }
 
     /** w·D^d(u^p e^{zu}) for every mode. */
-    private List<Apcomplex> terms(int d, Rational t) {
-        Apcomplex u = Decimals.toApfloat(t.subtract(origin), precision);
+    private List<Apcomplex> terms(int d, Apfloat t) {
+        Apcomplex u = t.subtract(Decimals.toApfloat(origin, precision));
         List<Apcomplex> terms = new ArrayList<>(modes.size());
         for (Mode m : modes) {
             Apcomplex e = ComplexExp.exp(m.rate().multiply(u), precision);

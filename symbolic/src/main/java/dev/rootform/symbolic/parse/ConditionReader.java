@@ -3,9 +3,16 @@ package dev.rootform.symbolic.parse;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /** Reads one condition such as {@code y'(0) = 1} or {@code x[5] = 8} against an equation already read. */
 final class ConditionReader {
+    /** A point written as a rational multiple of π. */
+    private static final Pattern PI_POINT =
+            Pattern.compile("(-?)\\s*(\\d+(?:\\.\\d+)?)?\\s*\\*?\\s*pi\\s*(?:/\\s*(\\d+))?");
+
     private final Shape shape;
     private final int order;
 
@@ -48,11 +55,28 @@ final class ConditionReader {
             throw new InputException("condition order " + derivative + " >= equation order " + order,
                     source, left.start());
         }
+        Rational value = constants.rational(sides.right(), "condition value");
+        Optional<Rational> piMultiple = shape.domain() == Domain.DIFFERENTIAL
+                ? piMultiple(source.substring(point.start(), point.end())) : Optional.empty();
+        if (piMultiple.isPresent()) {
+            return new Condition(derivative, piMultiple.get(), true, value);
+        }
         Rational at = constants.rational(point, "condition point");
         if (shape.domain() == Domain.DIFFERENCE && !at.isInteger()) {
             throw new InputException("condition " + text + ": index must be an integer", source, point.start());
         }
-        return new Condition(derivative, at, constants.rational(sides.right(), "condition value"));
+        return new Condition(derivative, at, value);
+    }
+
+    /** q for a point written as a rational multiple of π: {@code pi}, {@code -2pi}, {@code 3*pi/4}, {@code pi/2}. */
+    static Optional<Rational> piMultiple(String text) {
+        Matcher m = PI_POINT.matcher(text.trim());
+        if (!m.matches()) {
+            return Optional.empty();
+        }
+        Rational q = m.group(2) == null ? Rational.ONE : Rational.parse(m.group(2));
+        q = m.group(3) == null ? q : q.divide(Rational.parse(m.group(3)));
+        return Optional.of(m.group(1).isEmpty() ? q : q.negate());
     }
 
     private String example() {

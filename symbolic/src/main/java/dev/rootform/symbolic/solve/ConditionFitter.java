@@ -155,8 +155,8 @@ public final class ConditionFitter {
 
     /** The left side of a condition as written: {@code x[5]} or {@code y''(3/2)}. */
     private static String label(LinearEquation eq, Condition c) {
-        return eq.domain() == Domain.DIFFERENCE ? eq.function() + "[" + c.at() + "]"
-                : eq.function() + "'".repeat(c.derivative()) + "(" + c.at() + ")";
+        return eq.domain() == Domain.DIFFERENCE ? eq.function() + "[" + c.point() + "]"
+                : eq.function() + "'".repeat(c.derivative()) + "(" + c.point() + ")";
     }
 
     /**
@@ -172,7 +172,7 @@ public final class ConditionFitter {
         }
         for (int i = 0; i < conditions.size(); i++) {
             Condition c = conditions.get(i);
-            if (conditions.subList(0, i).stream().anyMatch(d -> d.derivative() == c.derivative() && d.at().equals(c.at()))) {
+            if (conditions.subList(0, i).stream().anyMatch(c::samePlace)) {
                 throw new InputException("the condition on " + label(equation, c) + " is given twice", "", -1);
             }
         }

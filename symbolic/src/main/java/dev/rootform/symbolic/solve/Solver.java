@@ -11,6 +11,7 @@ import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
+import dev.rootform.symbolic.parse.InputException;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
@@ -102,9 +103,22 @@ public final class Solver {
         return p;
     }
 
-    /** Conditions of a differential equation at more than one point: a boundary-value problem. */
+    /**
+     * Conditions of a differential equation at more than one point: a boundary-value problem.
+     *
+     * @throws InputException for conditions all at one point that is a multiple of π (the exact
+     *     basis in t - t0 needs a rational t0)
+     */
     private static boolean severalPoints(LinearEquation eq, List<Condition> conditions) {
-        return eq.domain() == Domain.DIFFERENTIAL && conditions.stream().map(Condition::at).distinct().count() > 1;
+        if (eq.domain() != Domain.DIFFERENTIAL) {
+            return false;
+        }
+        boolean several = conditions.stream().map(c -> c.at() + (c.atTimesPi() ? "π" : "")).distinct().count() > 1;
+        if (!several && conditions.stream().anyMatch(Condition::atTimesPi)) {
+            throw new InputException("conditions all at t = " + conditions.get(0).point() + ": give them at a rational "
+                    + "point (a multiple of π is supported for conditions at several points)", "", -1);
+        }
+        return several;
     }
 
     /** x[0..k-1] = 0 or y^(i)(0) = 0: the conditions of a particular solution. */

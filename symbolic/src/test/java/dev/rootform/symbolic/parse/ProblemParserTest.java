@@ -228,6 +228,14 @@ class ProblemParserTest {
     }
 
     @Test
+    void conditionPointsThatAreMultiplesOfPi() {
+        Problem p = ProblemParser.parse("y'' + y = 0; y(pi) = 1; y'(-3*pi/4) = 0", List.of("y(2pi) = 2"), null);
+        assertEquals(List.of(new Condition(0, r("1"), true, r("1")), new Condition(1, r("-3/4"), true, r("0")),
+                new Condition(0, r("2"), true, r("2"))), p.conditions());
+        assertEquals(List.of("π", "-3π/4", "2π"), p.conditions().stream().map(Condition::point).toList());
+    }
+
+    @Test
     void recurrenceConditions() {
         Problem p = ProblemParser.parse("x[n+2] = x[n+1] + x[n]; x[0]=0; x[5]=8", List.of("x[1]=2^10"), null);
         assertEquals(List.of(new Condition(0, r("0"), r("0")), new Condition(0, r("5"), r("8")),
