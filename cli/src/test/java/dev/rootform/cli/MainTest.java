@@ -55,6 +55,26 @@ class MainTest {
         assertTrue(value.replace("-", "").replace("0.", "").length() >= 39, value);
     }
 
+    @Test
+    void jsonOfAForcedStableSystemHasItsPartsAndSteadyState() throws Exception {
+        Run r = run("solve", "y'' + 3y' + 2y = 2sin(3t); y(0) = 0; y'(0) = 0", "--format", "json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode json = new ObjectMapper().readTree(r.out());
+        assertTrue(json.get("solution").get("particular").asText().contains("sin(3t)"), r.out());
+        // gain 1/|χ(3i)| = 1/|-7 + 9i| = 1/√130 (common practice: frequency response)
+        assertEquals(1 / Math.sqrt(130), json.get("steadyState").get(0).get("gain").asDouble(), 1e-15);
+    }
+
+    @Test
+    void jsonOfABoundaryValueProblemHasTheConstants() throws Exception {
+        // y'' + y = 0, y(0) = 1, y(π/2) = 2 → cos t + 2 sin t (common practice)
+        Run r = run("solve", "y'' + y = 0; y(0) = 1; y(pi/2) = 2", "--format", "json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode constants = new ObjectMapper().readTree(r.out()).get("solution").get("constantValues");
+        assertEquals(1, constants.get("C1").asDouble(), 1e-25);
+        assertEquals(2, constants.get("C2").asDouble(), 1e-25);
+    }
+
     @ParameterizedTest(name = "[{index}] {0}")
     @CsvSource(delimiter = '|', value = {
         "y'' + (2y' = 0|unbalanced",

@@ -49,7 +49,7 @@ public final class JsonRenderer {
             factors.addObject().put("polynomial", f.polynomial().toString(EquationText.LAMBDA)).put("multiplicity", f.multiplicity());
         }
         roots(root.putArray("roots"), s.roots(), r.roots(), r.digits());
-        solution(root.putObject("solution"), s.closedForm());
+        solution(root.putObject("solution"), s.closedForm(), r);
         ArrayNode constants = root.putArray("constants");
         BasisCoefficient.of(s.closedForm()).forEach(c -> constants.addObject()
                 .put("coefficient", r.numeric() ? c.decimal(r.digits()) : c.coefficient()).put("basis", c.basis()));
@@ -61,6 +61,10 @@ public final class JsonRenderer {
             values.addObject().put("at", v.at().toString()).put("value", Numbers.decimal(v.value(), r.digits()))
                     .put("exact", v.exact().map(Rational::toString).orElse(null));
         }
+        ArrayNode steady = root.putArray("steadyState");
+        r.steadyStates().forEach(st -> steady.addObject().put("input", EquationText.forcingTerm(eq, st.input()))
+                .put("amplitude", Numbers.decimal(st.amplitude(), r.digits())).put("gain", Numbers.decimal(st.gain(), r.digits()))
+                .put("phaseDegrees", Numbers.decimal(st.phaseDegrees(), r.digits())));
         ArrayNode warnings = root.putArray("warnings");
         r.warnings().forEach(warnings::add);
         try {
@@ -82,9 +86,13 @@ public final class JsonRenderer {
         }
     }
 
-    private static void solution(ObjectNode out, ClosedForm f) {
+    private static void solution(ObjectNode out, ClosedForm f, Report r) {
         out.put("text", EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f));
         out.put("latex", Formulas.latex(f));
+        if (!f.particularTerms().isEmpty()) {
+            out.put("homogeneous", Formulas.plain(f.withTerms(f.transientTerms())));
+            out.put("particular", Formulas.plain(f.withTerms(f.particularTerms())));
+        }
         out.put("origin", f.origin().toString());
         if (f.domain() == Domain.DIFFERENCE) {
             out.put("validFrom", f.validFrom());
@@ -94,6 +102,12 @@ public final class JsonRenderer {
         out.put("general", !f.freeConstants().isEmpty());
         ArrayNode free = out.putArray("freeConstants");
         f.freeConstants().forEach(free::add);
+        if (!r.analysis().constantValues().isEmpty()) {
+            ObjectNode values = out.putObject("constantValues");
+            for (int i = 0; i < f.freeConstants().size(); i++) {
+                values.put(f.freeConstants().get(i), Numbers.decimal(r.analysis().constantValues().get(i), r.digits()));
+            }
+        }
     }
 
     private static void verification(ObjectNode out, Report r) {
