@@ -1,0 +1,95 @@
+package dev.rootform.numeric.analysis;
+
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Coefficient;
+import dev.rootform.symbolic.closedform.Surd;
+import dev.rootform.symbolic.closedform.Term;
+import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.solve.ConditionsException;
+import dev.rootform.symbolic.solve.Solution;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.UnaryOperator;
+import org.apfloat.Apfloat;
+import org.apfloat.ApfloatMath;
+
+/**
+ * Explains a boundary-value system that is singular at the working precision, as one line: either
+ * the conditions contradict each other (a zero row with a nonzero right side), or they leave a
+ * solution free, given by the kernel vector of the reduced matrix; when its entries (scaled so
+ * the largest is 1) are small rationals to the working precision, that free solution is returned
+ * exactly as a closed form, e.g. sin(t) for y'' + y = 0, y(0) = 0, y(π) = 0.
+ */
+final class BoundarySingularity {
+    private BoundarySingularity() {
+    }
+
+    /** A kernel entry within 10^-(working - 10) of a multiple of 1/60 is taken as that rational. */
+    private static final int SMALL_DENOMINATORS = 60;
+
+    static InputException explain(Apfloat[][] a, int[] pivotRow, int rank, Apfloat tiny, Apfloat[] scales,
+            long working, Solution solution) {
+        int k = a.length;
+        String digits = " (singular to " + (working - 10) + " digits)";
+        for (int r = rank; r < k; r++) {
+            if (ApfloatMath.abs(a[r][k]).compareTo(tiny.multiply(scales[r])) > 0) {
+                return new InputException("the boundary conditions contradict each other: no solution meets them all" + digits, "", -1);
+            }
+        }
+        int free = 0;
+        while (pivotRow[free] >= 0) {
+            free++;
+        }
+        Apfloat[] v = new Apfloat[k];
+        for (int c = 0; c < k; c++) {
+            v[c] = c == free ? new Apfloat(1, working)
+                    : pivotRow[c] < 0 ? Apfloat.ZERO : a[pivotRow[c]][free].negate().divide(a[pivotRow[c]][c]);
+        }
+        Apfloat largest = Apfloat.ONE;
+        for (Apfloat x : v) {
+            largest = ApfloatMath.abs(x).compareTo(largest) > 0 ? ApfloatMath.abs(x) : largest;
+        }
+        List<String> constants = solution.general().freeConstants();
+        Map<String, Rational> exact = new HashMap<>();
+        StringBuilder combination = new StringBuilder();
+        for (int c = 0; c < k; c++) {
+            Apfloat x = v[c].divide(largest);
+            combination.append(c == 0 ? "" : ", ").append(constants.get(c)).append(" ≈ ")
+                    .append(Decimals.toBigDecimal(x, 10).stripTrailingZeros().toPlainString());
+            Rational r = Rational.of(Math.round(x.doubleValue() * SMALL_DENOMINATORS), SMALL_DENOMINATORS);
+            if (ApfloatMath.abs(x.subtract(Decimals.toApfloat(r, working))).compareTo(tiny) <= 0) {
+                exact.put(constants.get(c), r);
+            }
+        }
+        String message = "the boundary conditions leave a solution free" + digits;
+        if (exact.size() == k) {
+            return new ConditionsException(message, withConstants(solution.general(), exact));
+        }
+        return new InputException(message + ": adding any multiple of the homogeneous solution with "
+                + combination + " keeps every condition", "", -1);
+    }
+
+    /** The general solution's homogeneous terms with the free constants replaced by exact values. */
+    private static ClosedForm withConstants(ClosedForm general, Map<String, Rational> values) {
+        UnaryOperator<Coefficient> fill = c -> c instanceof Coefficient.Free f
+                ? new Coefficient.Exact(Surd.of(values.get(f.name()))) : c;
+        List<Term> terms = new ArrayList<>();
+        for (Term t : general.transientTerms()) {
+            if (t instanceof Term.Exponential e) {
+                terms.add(new Term.Exponential(fill.apply(e.coefficient()), e.power(), e.rate()));
+            } else if (t instanceof Term.Oscillating o) {
+                terms.add(new Term.Oscillating(fill.apply(o.cosine()), fill.apply(o.sine()), o.power(), o.growth(), o.angle()));
+            } else if (t instanceof Term.RootSum r) {
+                terms.add(new Term.RootSum(r.factor(), r.coefficients().stream().map(fill).toList(), r.power()));
+            } else {
+                throw new AssertionError(t);
+            }
+        }
+        return new ClosedForm(general.domain(), general.function(), general.variable(), general.origin(),
+                general.validFrom(), general.leadingValues(), terms, List.of());
+    }
+
+}
