@@ -39,6 +39,15 @@ public final class LatexRenderer {
         FormulaWriter writer = new FormulaWriter(LatexNotation.INSTANCE, f);
         rows.add(row("characteristic", writer.polynomial(s.characteristic(), LatexNotation.INSTANCE.lambda()) + " = 0"));
         rows.add(row("solution", math(EquationText.unknownAt(f, f.variable())) + " = " + Formulas.latex(f)));
+        List<java.math.BigDecimal> values = r.analysis().constantValues();
+        if (!values.isEmpty()) {
+            List<String> constants = new ArrayList<>();
+            for (int i = 0; i < values.size(); i++) {
+                constants.add(LatexNotation.INSTANCE.constant(f.freeConstants().get(i)) + " \\approx "
+                        + Numbers.decimal(values.get(i), r.digits()));
+            }
+            rows.add(row("constants", String.join(",\\; ", constants)));
+        }
         rows.add(row("valid for", validity(f)));
         return out.append("\\begin{aligned}\n").append(String.join(" \\\\\n", rows)).append("\n\\end{aligned}\n").toString();
     }
