@@ -110,7 +110,7 @@ public final class TextRenderer {
         }
         List<BigDecimal> values = r.analysis().constantValues();
         if (!values.isEmpty()) {
-            lines.add("constants from the boundary conditions (not exact rationals; solved to " + r.digits() + " digits):");
+            lines.add("constants fixed by the conditions (not exact rationals; solved to " + r.digits() + " digits):");
             for (int i = 0; i < values.size(); i++) {
                 lines.add("  " + f.freeConstants().get(i) + " ≈ " + Numbers.decimal(values.get(i), r.digits()));
             }

@@ -68,11 +68,11 @@ public final class Analyzer {
         }
         List<PointValue> values = new ArrayList<>();
         List<Check> checks = new ArrayList<>();
-        if (!points.isEmpty() && solution.exact().isEmpty() && !solution.isBoundaryValueProblem()) {
+        if (!points.isEmpty() && solution.exact().isEmpty() && !solution.hasNumericConstants()) {
             throw new InputException("values need conditions: the general solution has free constants", "", -1);
         }
         List<BigDecimal> constants = new ArrayList<>();
-        if (solution.isBoundaryValueProblem()) {
+        if (solution.hasNumericConstants()) {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
             constants.addAll(bvp.constants(digits));
             for (Rational p : points) {

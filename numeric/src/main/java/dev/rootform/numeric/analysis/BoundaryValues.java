@@ -15,8 +15,9 @@ import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
 /**
- * The free constants C1..Ck of a differential equation with conditions at several points (a
- * boundary-value problem): y = y_p + Σ C_j φ_j with the exact basis φ_j of the general solution
+ * The free constants C1..Ck of a differential equation whose constants are not exact rationals
+ * (conditions at several points — a boundary-value problem —, at a multiple of π, or transcendental
+ * forcing with conditions away from t = 0): y = y_p + Σ C_j φ_j with the exact basis φ_j of the general solution
  * and the exact particular solution y_p, so that Σ_j C_j φ_j^(d_i)(t_i) = v_i - y_p^(d_i)(t_i).
  * The entries involve e^{α t_i} and are not exact rationals, so the k×k system is solved by
  * Gaussian elimination with partial pivoting in apfloat, at a working precision raised until two
@@ -194,7 +195,8 @@ final class BoundaryValues {
 
     /**
      * Integrates the equation with Dormand–Prince 8(5,3) from the first condition point, starting
-     * from this solution's derivatives there, and compares with the other conditions.
+     * from this solution's derivatives there, and compares with the solution at the other
+     * condition points and at t0 + {@link Analyzer#CHECK_OFFSETS}.
      */
     Check integratorCheck() {
         List<Condition> conditions = solution.problem().conditions();
@@ -205,20 +207,29 @@ final class BoundaryValues {
         for (int d = 0; d < k; d++) {
             initial.add(Rational.of(Decimals.toBigDecimal(derivative(d, t0), 30)));
         }
+        List<Apfloat> points = new ArrayList<>();
+        for (Condition c : conditions) {
+            if (!c.samePoint(conditions.get(0))) {
+                points.add(point(c, precision));
+            }
+        }
+        for (double offset : Analyzer.CHECK_OFFSETS) {
+            points.add(Decimals.toApfloat(t0, precision).add(new Apfloat(offset, precision)));
+        }
+        double[] at = points.stream().mapToDouble(Apfloat::doubleValue).toArray();
+        double[] reference = OdeReference.values(solution.problem().equation().coefficients(),
+                ForcingFunction.of(solution.problem().equation().forcing()), t0, initial, at);
         double worst = 0;
         double scale = 1;
-        for (Condition c : conditions) {
-            double at = point(c, precision).doubleValue();
-            if (c.derivative() == 0 && at != t0.doubleValue()) {
-                double reference = OdeReference.values(solution.problem().equation().coefficients(),
-                        ForcingFunction.of(solution.problem().equation().forcing()), t0, initial, new double[] {at})[0];
-                worst = Math.max(worst, Math.abs(reference - c.value().doubleValue()));
-                scale = Math.max(scale, Math.abs(c.value().doubleValue()));
-            }
+        for (int i = 0; i < at.length; i++) {
+            double closed = derivative(0, points.get(i)).doubleValue();
+            worst = Math.max(worst, Math.abs(reference[i] - closed));
+            scale = Math.max(scale, Math.abs(closed));
         }
         boolean passed = worst <= Analyzer.CHECK_TOLERANCE * scale;
         return new Check("agrees with numerical integration", passed, String.format(
-                "Dormand-Prince 8(5,3) (Commons Math) from t = %s to the other condition points: largest difference "
-                        + "%.2e (tolerance %.0e relative)", conditions.get(0).point(), worst, Analyzer.CHECK_TOLERANCE));
+                "Dormand-Prince 8(5,3) (Commons Math) from t = %s to the other condition points and t0 + %s: "
+                        + "largest difference %.2e (tolerance %.0e relative)", conditions.get(0).point(),
+                java.util.Arrays.toString(Analyzer.CHECK_OFFSETS), worst, Analyzer.CHECK_TOLERANCE));
     }
 }

@@ -35,8 +35,13 @@ public record Condition(int derivative, Rational at, boolean atTimesPi, Rational
         return sign + top + (at.isInteger() ? "" : "/" + at.denominator());
     }
 
+    /** True when both conditions are at the same point. */
+    public boolean samePoint(Condition other) {
+        return atTimesPi == other.atTimesPi && at.equals(other.at);
+    }
+
     /** True when both conditions constrain the same derivative at the same point. */
     public boolean samePlace(Condition other) {
-        return derivative == other.derivative && atTimesPi == other.atTimesPi && at.equals(other.at);
+        return derivative == other.derivative && samePoint(other);
     }
 }

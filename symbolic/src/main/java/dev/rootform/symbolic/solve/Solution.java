@@ -41,10 +41,11 @@ public record Solution(Problem problem, RationalPolynomial characteristic, List<
     }
 
     /**
-     * True for a differential equation with conditions at several points: the constants of
-     * {@link #closedForm} are then fixed numerically by the numeric layer.
+     * True when conditions were given but the constants of {@link #closedForm} are not exact
+     * rationals (a boundary-value problem, a point that is a multiple of π, or transcendental
+     * forcing with conditions away from t = 0): the numeric layer then fixes them.
      */
-    public boolean isBoundaryValueProblem() {
+    public boolean hasNumericConstants() {
         return exact.isEmpty() && !problem.conditions().isEmpty();
     }
 

@@ -9,9 +9,9 @@ import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
-import dev.rootform.symbolic.parse.InputException;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
@@ -46,7 +46,7 @@ public final class Solver {
         RationalPolynomial operator = product(chi.leadingCoefficient(), operatorFactors);
         ClosedForm general = Presenter.general(eq, factors);
         List<ExactRoot> roots = Presenter.roots(factors);
-        if (problem.conditions().isEmpty() || severalPoints(eq, problem.conditions())) {
+        if (problem.conditions().isEmpty() || numericConstants(eq, problem.conditions())) {
             if (!problem.conditions().isEmpty()) {
                 ConditionFitter.validate(eq, problem.conditions());
             }
@@ -104,21 +104,21 @@ public final class Solver {
     }
 
     /**
-     * Conditions of a differential equation at more than one point: a boundary-value problem.
-     *
-     * @throws InputException for conditions all at one point that is a multiple of π (the exact
-     *     basis in t - t0 needs a rational t0)
+     * True when the constants of a differential equation cannot be exact rationals and are fitted
+     * numerically: conditions at several points (a boundary-value problem), at one point that is a
+     * multiple of π (the exact basis in t - t0 needs a rational t0), or at one point t0 ≠ 0 with
+     * exponential or oscillating forcing (the particular solution's values there involve e^{c·t0}
+     * and cos(ω·t0)).
      */
-    private static boolean severalPoints(LinearEquation eq, List<Condition> conditions) {
+    private static boolean numericConstants(LinearEquation eq, List<Condition> conditions) {
         if (eq.domain() != Domain.DIFFERENTIAL) {
             return false;
         }
-        boolean several = conditions.stream().map(c -> c.at() + (c.atTimesPi() ? "π" : "")).distinct().count() > 1;
-        if (!several && conditions.stream().anyMatch(Condition::atTimesPi)) {
-            throw new InputException("conditions all at t = " + conditions.get(0).point() + ": give them at a rational "
-                    + "point (a multiple of π is supported for conditions at several points)", "", -1);
-        }
-        return several;
+        boolean several = conditions.stream().anyMatch(c -> !c.samePoint(conditions.get(0)));
+        boolean awayFromZero = conditions.stream().anyMatch(c -> c.atTimesPi() || !c.at().isZero());
+        boolean transcendentalForcing = eq.forcing().stream()
+                .anyMatch(t -> !t.exponential().isZero() || t.oscillation() != ForcingTerm.Oscillation.NONE);
+        return several || conditions.stream().anyMatch(Condition::atTimesPi) || (awayFromZero && transcendentalForcing);
     }
 
     /** x[0..k-1] = 0 or y^(i)(0) = 0: the conditions of a particular solution. */
