@@ -37,15 +37,19 @@ final class FormulaWriter {
     private final ClosedForm form;
     /** The variable v as written: {@code t}, {@code n} or {@code (t - 3/2)}. */
     private final String v;
+    /** v without its parentheses, for a function argument: {@code t - 3/2}. */
+    private final String bare;
 
     FormulaWriter(Notation notation, ClosedForm form) {
         this.n = notation;
         this.form = form;
         Rational origin = form.origin();
         if (form.domain() == Domain.DIFFERENTIAL && !origin.isZero()) {
-            v = n.parens(sum(List.of(new Signed(false, n.name(form.variable())), new Signed(origin.signum() > 0, number(origin.abs())))));
+            bare = sum(List.of(new Signed(false, n.name(form.variable())), new Signed(origin.signum() > 0, number(origin.abs()))));
+            v = n.parens(bare);
         } else {
-            v = n.name(form.variable());
+            bare = n.name(form.variable());
+            v = bare;
         }
     }
 
@@ -178,8 +182,13 @@ final class FormulaWriter {
         return root ? n.power(n.number(growth.radicand().toString()), scaled(Rational.of(1, 2), v)) : growth(growth);
     }
 
-    /** angle·v as the argument of cos and sin. */
+    /** angle·v as the argument of cos and sin, without doubled parentheses: {@code cos(t - 2)}. */
     private String angle(Angle a) {
+        String argument = scaledAngle(a);
+        return argument.equals(v) ? bare : argument;
+    }
+
+    private String scaledAngle(Angle a) {
         if (a instanceof Angle.PiMultiple p) {
             return scaled(p.multiple(), n.implicit(n.pi(), v));
         }
