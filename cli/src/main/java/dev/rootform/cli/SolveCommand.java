@@ -74,6 +74,10 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--header", paramLabel = "FILE", description = "Write the C header to FILE (the source, on stdout or -o, includes it).")
     Path header;
 
+    @Option(names = "--time-limit", paramLabel = "SECONDS",
+            description = "Give up after this many seconds (default ${DEFAULT-VALUE}); exit code 1.")
+    int timeLimit = 300;
+
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
@@ -82,13 +86,21 @@ final class SolveCommand implements Callable<Integer> {
                 throw new InputException("--digits " + digits + " is out of range 1..10000", "", -1);
             }
             validateNames();
-            Report report = Pipeline.run(input, given, variable, digits, Points.parse(valuesAt), numeric);
+            if (timeLimit < 1) {
+                throw new InputException("--time-limit " + timeLimit + " must be at least 1 second", "", -1);
+            }
+            Report report = Budget.within(timeLimit,
+                    () -> Pipeline.run(input, given, variable, digits, Points.parse(valuesAt), numeric));
             write(output, render(report));
             return report.verified() ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;
         } catch (InputException e) {
             err.println(Diagnostics.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;
+        } catch (Budget.Exhausted e) {
+            err.println("rootform: " + e.getMessage());
+            err.flush();
+            return ExitCode.INTERNAL;
         }
     }
 

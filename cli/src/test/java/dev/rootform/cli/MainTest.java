@@ -147,6 +147,15 @@ class MainTest {
     }
 
     @Test
+    void aJobPastItsTimeLimitExitsWithOne() {
+        // factoring a degree-200 trinomial over Z takes JAS far longer than one second
+        Run r = run("solve", "x[n+200] = x[n+3] + x[n+1] + x[n]", "--time-limit", "1");
+        assertEquals(1, r.code(), r.err());
+        assertTrue(r.err().startsWith("rootform: gave up after 1 s"), r.err());
+        assertEquals("", r.out());
+    }
+
+    @Test
     void unknownOptionIsBadInput() {
         Run r = run("solve", "x[n+1] = x[n]; x[0] = 1", "--frobnicate");
         assertEquals(2, r.code());
