@@ -6,7 +6,6 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.backend.JasFactorizer;
 import dev.rootform.symbolic.closedform.ClosedForm;
-import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
@@ -41,42 +40,61 @@ public final class Solver {
         LinearEquation eq = problem.equation();
         RationalPolynomial chi = eq.characteristicPolynomial();
         List<Factor> factors = JasFactorizer.factor(chi);
-        List<Factor> annihilator = eq.isHomogeneous() ? List.of() : Annihilator.of(eq);
-        List<Factor> operatorFactors = merge(factors, annihilator);
-        RationalPolynomial operator = product(chi.leadingCoefficient(), operatorFactors);
-        ClosedForm general = Presenter.general(eq, factors);
-        List<ExactRoot> roots = Presenter.roots(factors);
+        List<Factor> operatorFactors = merge(factors, eq.isHomogeneous() ? List.of() : Annihilator.of(eq));
+        Operator mu = new Operator(product(chi.leadingCoefficient(), operatorFactors), operatorFactors, factors);
         if (problem.conditions().isEmpty() || numericConstants(eq, problem.conditions())) {
-            if (!problem.conditions().isEmpty()) {
-                ConditionFitter.validate(eq, problem.conditions());
-            }
-            List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
-            if (eq.isHomogeneous()) {
-                return new Solution(problem, chi, factors, roots, general, general, Optional.empty(), Optional.empty(), checks);
-            }
-            ExactSolution any = ExactSolver.solve(eq, operator, operatorFactors,
-                    ConditionFitter.fit(eq, operator, zeroConditions(eq)));
-            ExactSolution particular = any.withComponents(withoutTransient(any.components(), factors));
-            checks.addAll(ExactVerifier.verify(particular, List.of()));
-            return new Solution(problem, chi, factors, roots,
-                    Presenter.withParticular(general, Presenter.fitted(particular, factors)), general,
-                    Optional.empty(), Optional.of(particular), checks);
+            return withFreeConstants(problem, chi, mu);
         }
-        InitialState state = fit(eq, operator, operatorFactors, factors, problem.conditions());
-        ExactSolution exact = ExactSolver.solve(eq, operator, operatorFactors, state);
-        List<Check> checks = ExactVerifier.verify(exact, problem.conditions());
-        return new Solution(problem, chi, factors, roots, Presenter.fitted(exact, factors), general,
-                Optional.of(exact), Optional.empty(), checks);
+        InitialState state = fit(eq, mu, problem.conditions());
+        ExactSolution exact = ExactSolver.solve(eq, mu.polynomial(), mu.factors(), state);
+        return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact, factors),
+                Presenter.general(eq, factors), Optional.of(exact), Optional.empty(),
+                ExactVerifier.verify(exact, problem.conditions()));
+    }
+
+    /**
+     * The operator μ that annihilates the solution: χ, times the forcing's annihilator.
+     *
+     * @param polynomial μ
+     * @param factors the factors of μ
+     * @param characteristic the factors of χ
+     */
+    private record Operator(RationalPolynomial polynomial, List<Factor> factors, List<Factor> characteristic) {
+    }
+
+    /**
+     * The general solution (basis with free constants C1..Ck, plus an exact particular solution
+     * with zero initial values and no transient part for a forced equation); its constants stay
+     * free, or the numeric layer fixes them from conditions that are not exact.
+     */
+    private static Solution withFreeConstants(Problem problem, RationalPolynomial chi, Operator mu) {
+        LinearEquation eq = problem.equation();
+        List<Factor> factors = mu.characteristic();
+        if (!problem.conditions().isEmpty()) {
+            ConditionFitter.validate(eq, problem.conditions());
+        }
+        ClosedForm general = Presenter.general(eq, factors);
+        List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
+        if (eq.isHomogeneous()) {
+            return new Solution(problem, chi, factors, Presenter.roots(factors), general, general, Optional.empty(),
+                    Optional.empty(), checks);
+        }
+        ExactSolution any = ExactSolver.solve(eq, mu.polynomial(), mu.factors(),
+                ConditionFitter.fit(eq, mu.polynomial(), zeroConditions(eq)));
+        ExactSolution particular = any.withComponents(withoutTransient(any.components(), factors));
+        checks.addAll(ExactVerifier.verify(particular, List.of()));
+        return new Solution(problem, chi, factors, Presenter.roots(factors),
+                Presenter.withParticular(general, Presenter.fitted(particular, factors)), general,
+                Optional.empty(), Optional.of(particular), checks);
     }
 
     /** {@link ConditionFitter#fit}, with a free solution attached when the conditions leave one. */
-    private static InitialState fit(LinearEquation eq, RationalPolynomial operator, List<Factor> operatorFactors,
-            List<Factor> characteristic, List<Condition> conditions) {
+    private static InitialState fit(LinearEquation eq, Operator mu, List<Condition> conditions) {
         try {
-            return ConditionFitter.fit(eq, operator, conditions);
+            return ConditionFitter.fit(eq, mu.polynomial(), conditions);
         } catch (UnderdeterminedConditions e) {
-            ExactSolution free = ExactSolver.solve(eq.homogeneous(), operator, operatorFactors, e.freeState());
-            throw new ConditionsException(e.getMessage(), Presenter.fitted(free, characteristic));
+            ExactSolution free = ExactSolver.solve(eq.homogeneous(), mu.polynomial(), mu.factors(), e.freeState());
+            throw new ConditionsException(e.getMessage(), Presenter.fitted(free, mu.characteristic()));
         }
     }
 
