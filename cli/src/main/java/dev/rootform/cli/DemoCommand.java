@@ -33,7 +33,9 @@ final class DemoCommand implements Callable<Integer> {
             new Example("Bench heater temperature under a sinusoidal daily load, from rest (forced, stable)",
                     "y'' + 3y' + 2y = 2sin(t); y(0) = 0; y'(0) = 0", "1,10"),
             new Example("Greenhouse roof loan: monthly balance at 0.4 % interest with payments of 900",
-                    "b[n] = 1.004 b[n-1] - 900; b[0] = 60000", "12,60"));
+                    "b[n] = 1.004 b[n-1] - 900; b[0] = 60000", "12,60"),
+            new Example("Shade-net ridge wire between two posts 4 m apart, small-sag model (boundary values)",
+                    "y''(x) - 0.01y(x) = 0.05; y(0) = 0; y(4) = 0", "2"));
 
     @Spec
     CommandSpec spec;
