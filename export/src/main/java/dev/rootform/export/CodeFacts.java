@@ -3,6 +3,7 @@ package dev.rootform.export;
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.parse.InputException;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
@@ -45,7 +46,8 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
 
     /** Measures {@code form}, the emitted formula of {@code solution}'s closed form. */
     static CodeFacts measure(Solution solution, NumericForm form) {
-        ExactSolution s = solution.exact().orElseThrow(() -> new IllegalArgumentException("general solution"));
+        ExactSolution s = solution.exact().orElseThrow(() -> new InputException("code output needs an exactly "
+                + "fitted solution with rational values; this one is not (forcing with values in Q(√r))", "", -1));
         double start = form.differential() ? 0 : form.validFrom();
         double high = edge(form, start, 1);
         double low = form.differential() ? edge(form, start, -1) : form.first();

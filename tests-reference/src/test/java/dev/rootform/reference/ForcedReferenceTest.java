@@ -9,6 +9,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
+import java.util.function.IntToDoubleFunction;
 import java.util.function.LongFunction;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
@@ -55,6 +56,54 @@ class ForcedReferenceTest {
         for (int i = 0; i < points.size(); i++) {
             long n = points.get(i).toBigInteger().longValueExact();
             assertEquals(known.apply(n), report.values().get(i).exact().orElseThrow(), input + " at n = " + n);
+        }
+    }
+
+    static Stream<Arguments> irrationalForcing() {
+        return Stream.of(
+                // sampled sinusoid at fs/8 into a first-order low-pass: x[n+1] = x[n]/2 + cos(πn/4), x[0] = 1;
+                // cos(πn/4) takes the values ±√2/2 (handbook value), so the answer lies in Q(√2)
+                Arguments.of("x[n+1] = x[n]/2 + cos(pi n/4); x[0] = 1", (IntToDoubleFunction) n -> Math.cos(Math.PI * n / 4),
+                        new double[] {-0.5, 1}),
+                // sin(πn/3) = ±√3/2 (handbook value): answer in Q(√3)
+                Arguments.of("x[n+1] = x[n]/2 + sin(pi n/3); x[0] = 0", (IntToDoubleFunction) n -> Math.sin(Math.PI * n / 3),
+                        new double[] {-0.5, 1}),
+                // cos(2πn/5) ∈ {1, (√5-1)/4, -(√5+1)/4} (handbook values): answer in Q(√5), resonance-free second order
+                Arguments.of("x[n+2] = x[n] + cos(2 pi n/5); x[0] = 0; x[1] = 0",
+                        (IntToDoubleFunction) n -> Math.cos(2 * Math.PI * n / 5), new double[] {-1, 0, 1}),
+                // resonance with a root of unity of order 8: x[n+4] = -x[n] + cos(πn/4) (Φ_8 divides χ)
+                Arguments.of("x[n+4] = -x[n] + cos(pi n/4); x[0] = 0; x[1] = 0; x[2] = 0; x[3] = 0",
+                        (IntToDoubleFunction) n -> Math.cos(Math.PI * n / 4), new double[] {1, 0, 0, 0, 1}));
+    }
+
+    /**
+     * Forcing whose values are irrational but lie in Q(√2), Q(√3) or Q(√5): the exact answer's
+     * values are compared with plain double iteration of the recurrence (an independent reference;
+     * agreement to 1e-9 relative over 60 steps).
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("irrationalForcing")
+    void irrationalForcingMatchesIteration(String input, IntToDoubleFunction forcing, double[] a) {
+        int k = a.length - 1;
+        List<Rational> points = new ArrayList<>();
+        for (int n = 0; n <= 60; n++) {
+            points.add(Rational.of(n));
+        }
+        Report report = Pipeline.run(input, List.of(), null, 30, points);
+        assertTrue(report.verified(), input + ": " + report.solution().checks());
+        double[] x = new double[61];
+        for (int n = 0; n <= 60; n++) {
+            if (n < k) {
+                x[n] = report.solution().problem().conditions().get(n).value().doubleValue();
+            } else {
+                double sum = forcing.applyAsDouble(n - k);
+                for (int j = 0; j < k; j++) {
+                    sum -= a[j] * x[n - k + j];
+                }
+                x[n] = sum / a[k];
+            }
+            double actual = report.values().get(n).value().doubleValue();
+            assertEquals(x[n], actual, 1e-9 * Math.max(1, Math.abs(x[n])), input + " at n = " + n);
         }
     }
 

@@ -12,6 +12,8 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.parse.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
+import dev.rootform.symbolic.solve.RadicalSolution;
+import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -68,7 +70,7 @@ public final class Analyzer {
         }
         List<PointValue> values = new ArrayList<>();
         List<Check> checks = new ArrayList<>();
-        if (!points.isEmpty() && solution.exact().isEmpty() && !solution.hasNumericConstants()) {
+        if (!points.isEmpty() && solution.exact().isEmpty() && solution.radical().isEmpty() && !solution.hasNumericConstants()) {
             throw new InputException("values need conditions: the general solution has free constants", "", -1);
         }
         List<BigDecimal> constants = new ArrayList<>();
@@ -81,6 +83,7 @@ public final class Analyzer {
             checks.add(bvp.conditionsCheck(digits));
             checks.add(bvp.integratorCheck());
         }
+        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p))));
         Optional<ExactSolution> exact = solution.exact();
         if (exact.isPresent()) {
             ExactSolution s = exact.get();
@@ -126,6 +129,13 @@ public final class Analyzer {
             return new RootApproximation(root, z.re().round(mc), z.im().round(mc), z.radius());
         }
         throw new AssertionError(root);
+    }
+
+    /** x[n] = a + b·√r exactly; shown exact when b = 0. */
+    private PointValue radicalValue(RadicalSolution r, Rational at) {
+        Surd v = r.valueAt(at.toBigInteger().longValueExact());
+        return new PointValue(at, v.toBigDecimal(new MathContext(digits)),
+                v.isRational() ? Optional.of(v.rational()) : Optional.empty());
     }
 
     private PointValue sequenceValue(ExactSolution s, Rational at) {

@@ -32,11 +32,13 @@ public final class ConditionFitter {
 
     /**
      * @param operator μ, a multiple of the characteristic polynomial that annihilates the forcing
+     * @param part which part of a forcing with values in Q(√r) the solution answers
      * @throws InputException if the number of conditions is not the order, the conditions are at
      *     several points of a differential equation, or they are inconsistent or do not determine
      *     the solution
      */
-    public static InitialState fit(LinearEquation equation, RationalPolynomial operator, List<Condition> conditions) {
+    public static InitialState fit(LinearEquation equation, RationalPolynomial operator, List<Condition> conditions,
+            ForcingPart part) {
         int k = equation.order();
         validate(equation, conditions);
         Rational origin = origin(equation.domain(), conditions);
@@ -49,7 +51,7 @@ public final class ConditionFitter {
             }
             rows.add(row(applied, operator.degree()));
             rhs.add(equation.domain() == Domain.DIFFERENCE
-                    ? ForcingValues.at(equation, origin.toBigInteger().longValueExact() + j)
+                    ? ForcingValues.at(equation, origin.toBigInteger().longValueExact() + j, part)
                     : ForcingValues.derivative(equation, origin, j));
         }
         LinearSystem.Result result = LinearSystem.solve(rows, rhs);

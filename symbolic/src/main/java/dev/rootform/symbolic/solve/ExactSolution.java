@@ -11,7 +11,8 @@ import java.util.Objects;
 /**
  * A fitted solution in exact form: a sum of {@link Component}s, one per irreducible factor with
  * nonzero roots of the operator polynomial μ that annihilates it (the characteristic polynomial χ,
- * times the forcing's annihilator for a forced equation).
+ * times the forcing's annihilator for a forced equation). For a forcing with values in Q(√r) it
+ * answers one {@link ForcingPart} of it.
  *
  * <p>Difference equations: the formula holds for n &ge; {@code validFrom}; the values
  * x[origin .. validFrom-1] (present when λ = 0 is a root of multiplicity m, then
@@ -20,11 +21,12 @@ import java.util.Objects;
  *
  * @since 0.1
  */
-public record ExactSolution(LinearEquation equation, RationalPolynomial operator, Rational origin, long validFrom,
-        List<Rational> leadingValues, List<Component> components) {
+public record ExactSolution(LinearEquation equation, ForcingPart forcingPart, RationalPolynomial operator,
+        Rational origin, long validFrom, List<Rational> leadingValues, List<Component> components) {
 
     public ExactSolution {
         Objects.requireNonNull(equation, "equation");
+        Objects.requireNonNull(forcingPart, "forcingPart");
         Objects.requireNonNull(operator, "operator");
         Objects.requireNonNull(origin, "origin");
         leadingValues = List.copyOf(leadingValues);
@@ -92,6 +94,6 @@ public record ExactSolution(LinearEquation equation, RationalPolynomial operator
 
     /** The same solution with other components (e.g. without its transient part). */
     public ExactSolution withComponents(List<Component> replacement) {
-        return new ExactSolution(equation, operator, origin, validFrom, leadingValues, replacement);
+        return new ExactSolution(equation, forcingPart, operator, origin, validFrom, leadingValues, replacement);
     }
 }

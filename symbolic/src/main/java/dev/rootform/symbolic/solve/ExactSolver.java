@@ -32,8 +32,8 @@ public final class ExactSolver {
      * The solution in the kernel of the operator μ with the given initial state (deg μ values);
      * {@code factors} is the factorisation of μ.
      */
-    public static ExactSolution solve(LinearEquation equation, RationalPolynomial operator, List<Factor> factors,
-            InitialState state) {
+    public static ExactSolution solve(LinearEquation equation, ForcingPart part, RationalPolynomial operator,
+            List<Factor> factors, InitialState state) {
         RationalPolynomial p = transformNumerator(operator.coefficients(), state.values());
         boolean difference = equation.domain() == Domain.DIFFERENCE;
         int zeroMultiplicity = difference ? operator.zeroRootMultiplicity() : 0;
@@ -48,7 +48,7 @@ public final class ExactSolver {
             components.add(new Component(f, c));
         }
         long origin = difference ? state.origin().toBigInteger().longValueExact() : 0;
-        return new ExactSolution(equation, operator, state.origin(), origin + zeroMultiplicity,
+        return new ExactSolution(equation, part, operator, state.origin(), origin + zeroMultiplicity,
                 state.values().subList(0, zeroMultiplicity), components);
     }
 

@@ -87,7 +87,7 @@ public final class ExactVerifier {
         if (eq.isHomogeneous()) {
             return n -> Rational.ZERO;
         }
-        return s.domain() == Domain.DIFFERENCE ? n -> ForcingValues.at(eq, n)
+        return s.domain() == Domain.DIFFERENCE ? n -> ForcingValues.at(eq, n, s.forcingPart())
                 : n -> ForcingValues.derivative(eq, s.origin(), Math.toIntExact(n));
     }
 

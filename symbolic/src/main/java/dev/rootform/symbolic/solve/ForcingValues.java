@@ -7,37 +7,68 @@ import dev.rootform.symbolic.parse.InputException;
 
 /**
  * Exact values of the right-hand side g of the normalised equation Σ a_j L^j y = g:
- * g(m) = f(m - shift) at integer m (difference), and the derivatives g^(j)(t0) (differential).
- * Values must be rational: cos(qπn) is rational only when it is 0, ±1/2 or ±1 (Niven's theorem:
- * I. Niven, Irrational Numbers, 1956, Corollary 3.12 — corollary number from memory); other values
- * and exponential or oscillating forcing with conditions away from t = 0 are out of exact scope.
+ * g(m) = f(m - shift) at integer m (difference), split into its rational part and its √r part when
+ * cos(qπn) lies in a real quadratic field ({@link CosineTable}; by Niven's theorem — I. Niven,
+ * Irrational Numbers, 1956, Corollary 3.12, number from memory — the rational values are only 0,
+ * ±1/2, ±1), and the derivatives g^(j)(t0) (differential), rational for t0 = 0; exponential or
+ * oscillating forcing with conditions away from t = 0 is out of exact scope.
  *
  * @since 0.1
  */
 final class ForcingValues {
-    /** cos(πr) for r = k/6, k = 0..11, where it is rational; null where it is not. */
-    private static final Rational[] COS_PI_SIXTHS = {
-        Rational.ONE, null, Rational.of(1, 2), Rational.ZERO, Rational.of(-1, 2), null,
-        Rational.MINUS_ONE, null, Rational.of(-1, 2), Rational.ZERO, Rational.of(1, 2), null,
-    };
-
     private ForcingValues() {
     }
 
-    /** g(m) = f(m - shift) for a difference equation. */
-    static Rational at(LinearEquation eq, long m) {
+    /**
+     * The r with every value of the forcing in Q(√r): 1 when all are rational, else 2, 3 or 5.
+     *
+     * @throws InputException if a cos/sin value lies in none of these fields, or two are mixed
+     */
+    static int radicand(LinearEquation eq) {
+        int radicand = 1;
+        for (ForcingTerm t : eq.forcing()) {
+            if (t.oscillation() == ForcingTerm.Oscillation.NONE || !t.frequencyTimesPi()) {
+                continue;
+            }
+            // one period of the angle qπn, reduced mod 2π, covers every value the term takes
+            int period = 2 * t.frequency().denominator().intValueExact();
+            for (int n = 0; n < period; n++) {
+                int s = trig(t, Rational.of(n)).radicand();
+                if (s != 1 && radicand != 1 && s != radicand) {
+                    throw new InputException("the forcing mixes values in Q(√" + radicand + ") and Q(√" + s
+                            + "); only one square root is supported", "", -1);
+                }
+                radicand = s == 1 ? radicand : s;
+            }
+        }
+        return radicand;
+    }
+
+    /** One part of g(m) = f(m - shift) for a difference equation. */
+    static Rational at(LinearEquation eq, long m, ForcingPart part) {
         Rational n = Rational.of(m - eq.shift());
         Rational sum = Rational.ZERO;
         for (ForcingTerm t : eq.forcing()) {
-            Rational v = t.coefficient().multiply(n.pow(t.power())).multiply(t.exponential().pow(Math.toIntExact(n.toBigInteger().longValueExact())));
+            Rational v = t.coefficient().multiply(n.pow(t.power()))
+                    .multiply(t.exponential().pow(Math.toIntExact(n.toBigInteger().longValueExact())));
             if (t.oscillation() != ForcingTerm.Oscillation.NONE) {
-                Rational turns = t.frequency().multiply(n);
-                v = v.multiply(t.oscillation() == ForcingTerm.Oscillation.COS
-                        ? cosPi(turns) : cosPi(Rational.of(1, 2).subtract(turns)));
+                CosineTable.Value trig = trig(t, n);
+                v = v.multiply(part == ForcingPart.RATIONAL ? trig.rational() : trig.radical());
+            } else if (part == ForcingPart.RADICAL) {
+                v = Rational.ZERO;
             }
             sum = sum.add(v);
         }
         return sum;
+    }
+
+    /** cos(qπn) or sin(qπn) = cos(π/2 - qπn). @throws InputException outside the supported fields */
+    private static CosineTable.Value trig(ForcingTerm t, Rational n) {
+        Rational turns = t.frequency().multiply(n);
+        Rational angle = t.oscillation() == ForcingTerm.Oscillation.COS ? turns : Rational.of(1, 2).subtract(turns);
+        return CosineTable.cosPi(angle).orElseThrow(() -> new InputException("the forcing takes the value cos("
+                + angle + "·π) at an integer index, which lies in no quadratic field; frequencies that are multiples "
+                + "of π/4, π/5 and π/6 are solved exactly", "", -1));
     }
 
     /** g^(j)(t0) for a differential equation. */
@@ -90,17 +121,4 @@ final class ForcingValues {
         return falling.multiply(t0.pow(p - j));
     }
 
-    /** cos(πr) when rational. @throws InputException otherwise */
-    private static Rational cosPi(Rational r) {
-        Rational sixths = r.multiply(6);
-        if (sixths.isInteger()) {
-            int k = Math.floorMod(sixths.toBigInteger().intValue(), 12);
-            if (COS_PI_SIXTHS[k] != null) {
-                return COS_PI_SIXTHS[k];
-            }
-        }
-        throw new InputException("the forcing takes the irrational value cos(" + r + "·π) at an integer index; "
-                + "only frequencies whose cos/sin values are rational (multiples of π/3 and π/2) are solved exactly",
-                "", -1);
-    }
 }

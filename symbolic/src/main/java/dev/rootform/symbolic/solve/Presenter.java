@@ -14,6 +14,7 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.Supplier;
 
 /**
@@ -34,13 +35,29 @@ final class Presenter {
      * transient (power below the factor's multiplicity in χ) and which are particular.
      */
     static ClosedForm fitted(ExactSolution s, List<Factor> characteristic) {
+        return fitted(s, Optional.empty(), characteristic);
+    }
+
+    /**
+     * The fitted solution x = s + √r·radical (for a forcing with values in Q(√r)); a coefficient
+     * with a √r part is written as a surd a + b√r on an exponential, or as a root sum with surd
+     * coefficients for a factor of degree &ge; 2 (whose own surds would otherwise mix with √r).
+     */
+    static ClosedForm fitted(ExactSolution s, Optional<RadicalSolution> radical, List<Factor> characteristic) {
         LinearEquation eq = s.equation();
         List<Term> transients = new ArrayList<>();
         List<Term> particular = new ArrayList<>();
-        for (Component c : s.components()) {
+        for (int k = 0; k < s.components().size(); k++) {
+            Component c = s.components().get(k);
             int homogeneous = multiplicity(characteristic, c.factor().polynomial());
             for (int i = 0; i < c.coefficients().size(); i++) {
-                List<Term> terms = terms(eq.domain(), c.factor().polynomial(), i, c.coefficients().get(i));
+                RationalPolynomial ci = c.coefficients().get(i);
+                int index = k;
+                int power = i;
+                RationalPolynomial root = radical.map(r -> r.radical().components().get(index).coefficients().get(power))
+                        .orElse(RationalPolynomial.ZERO);
+                List<Term> terms = root.isZero() ? terms(eq.domain(), c.factor().polynomial(), i, ci)
+                        : List.of(radicalTerm(c.factor().polynomial(), i, ci, root, radical.get().radicand()));
                 (i < homogeneous ? transients : particular).addAll(terms);
             }
         }
@@ -50,6 +67,20 @@ final class Presenter {
         all.addAll(particular);
         return new ClosedForm(eq.domain(), eq.function(), eq.variable(), s.origin(), s.validFrom(),
                 s.leadingValues(), all, List.of(), transients.size());
+    }
+
+    /** (c(α) + √r·d(α))·v^i·α^v as an exponential (linear f) or a root sum with surd coefficients. */
+    private static Term radicalTerm(RationalPolynomial f, int i, RationalPolynomial c, RationalPolynomial d, int r) {
+        Rational radicand = Rational.of(r);
+        if (f.degree() == 1) {
+            return new Term.Exponential(exact(Surd.of(c.coefficient(0), d.coefficient(0), radicand)), i,
+                    Surd.of(f.coefficient(0).negate()));
+        }
+        List<Coefficient> cs = new ArrayList<>();
+        for (int j = 0; j < f.degree(); j++) {
+            cs.add(exact(Surd.of(c.coefficient(j), d.coefficient(j), radicand)));
+        }
+        return new Term.RootSum(f, cs, i);
     }
 
     /** The general solution: basis terms with free constants, followed by a particular solution's terms. */

@@ -22,12 +22,14 @@ import java.util.Optional;
  *     boundary-value problem, whose constants are not exact)
  * @param particular a particular solution of a forced equation with no transient part, in
  *     number-field form, when {@code exact} is empty (general solution or boundary-value problem)
+ * @param radical the fitted solution as rational + √r·radical parts when the forcing takes values
+ *     in Q(√r) (then {@code exact} is empty)
  * @param checks the exact verification steps, all run
  * @since 0.1
  */
 public record Solution(Problem problem, RationalPolynomial characteristic, List<Factor> factors,
         List<ExactRoot> roots, ClosedForm closedForm, ClosedForm general, Optional<ExactSolution> exact,
-        Optional<ExactSolution> particular, List<Check> checks) {
+        Optional<ExactSolution> particular, Optional<RadicalSolution> radical, List<Check> checks) {
     public Solution {
         Objects.requireNonNull(problem, "problem");
         Objects.requireNonNull(characteristic, "characteristic");
@@ -37,6 +39,7 @@ public record Solution(Problem problem, RationalPolynomial characteristic, List<
         Objects.requireNonNull(general, "general");
         Objects.requireNonNull(exact, "exact");
         Objects.requireNonNull(particular, "particular");
+        Objects.requireNonNull(radical, "radical");
         checks = List.copyOf(checks);
     }
 
@@ -46,7 +49,7 @@ public record Solution(Problem problem, RationalPolynomial characteristic, List<
      * forcing with conditions away from t = 0): the numeric layer then fixes them.
      */
     public boolean hasNumericConstants() {
-        return exact.isEmpty() && !problem.conditions().isEmpty();
+        return exact.isEmpty() && radical.isEmpty() && !problem.conditions().isEmpty();
     }
 
     /** True when every check ran and held. */

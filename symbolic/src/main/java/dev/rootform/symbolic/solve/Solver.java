@@ -41,15 +41,39 @@ public final class Solver {
         RationalPolynomial chi = eq.characteristicPolynomial();
         List<Factor> factors = JasFactorizer.factor(chi);
         List<Factor> operatorFactors = merge(factors, eq.isHomogeneous() ? List.of() : Annihilator.of(eq));
-        Operator mu = new Operator(product(chi.leadingCoefficient(), operatorFactors), operatorFactors, factors);
+        int radicand = eq.domain() == Domain.DIFFERENCE && !eq.isHomogeneous() ? ForcingValues.radicand(eq) : 1;
+        Operator mu = new Operator(product(chi.leadingCoefficient(), operatorFactors), operatorFactors, factors, radicand);
         if (problem.conditions().isEmpty() || numericConstants(eq, problem.conditions())) {
             return withFreeConstants(problem, chi, mu);
         }
-        InitialState state = fit(eq, mu, problem.conditions());
-        ExactSolution exact = ExactSolver.solve(eq, mu.polynomial(), mu.factors(), state);
-        return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact, factors),
-                Presenter.general(eq, factors), Optional.of(exact), Optional.empty(),
-                ExactVerifier.verify(exact, problem.conditions()));
+        ExactSolution exact = fitted(eq, mu, problem.conditions(), ForcingPart.RATIONAL);
+        List<Check> checks = new ArrayList<>(ExactVerifier.verify(exact, problem.conditions()));
+        ClosedForm general = Presenter.general(eq, factors);
+        if (radicand == 1) {
+            return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact, factors),
+                    general, Optional.of(exact), Optional.empty(), Optional.empty(), checks);
+        }
+        List<Condition> zero = zeroed(problem.conditions());
+        RadicalSolution both = new RadicalSolution(radicand, exact, fitted(eq, mu, zero, ForcingPart.RADICAL));
+        checks.addAll(radicalChecks(both.radical(), zero, radicand));
+        return new Solution(problem, chi, factors, Presenter.roots(factors),
+                Presenter.fitted(exact, Optional.of(both), factors), general, Optional.empty(), Optional.empty(),
+                Optional.of(both), checks);
+    }
+
+    private static ExactSolution fitted(LinearEquation eq, Operator mu, List<Condition> conditions, ForcingPart part) {
+        return ExactSolver.solve(eq, part, mu.polynomial(), mu.factors(), fit(eq, mu, conditions, part));
+    }
+
+    /** The same points with value 0: the conditions of the √r part. */
+    private static List<Condition> zeroed(List<Condition> conditions) {
+        return conditions.stream().map(c -> new Condition(c.derivative(), c.at(), c.atTimesPi(), Rational.ZERO)).toList();
+    }
+
+    /** The checks of the √r part, named as such. */
+    private static List<Check> radicalChecks(ExactSolution radical, List<Condition> zero, int radicand) {
+        return ExactVerifier.verify(radical, zero).stream()
+                .map(c -> new Check(c.name() + " (√" + radicand + " part)", c.passed(), c.detail())).toList();
     }
 
     /**
@@ -58,8 +82,10 @@ public final class Solver {
      * @param polynomial μ
      * @param factors the factors of μ
      * @param characteristic the factors of χ
+     * @param radicand r when the forcing's values lie in Q(√r), else 1
      */
-    private record Operator(RationalPolynomial polynomial, List<Factor> factors, List<Factor> characteristic) {
+    private record Operator(RationalPolynomial polynomial, List<Factor> factors, List<Factor> characteristic,
+            int radicand) {
     }
 
     /**
@@ -77,23 +103,29 @@ public final class Solver {
         List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
         if (eq.isHomogeneous()) {
             return new Solution(problem, chi, factors, Presenter.roots(factors), general, general, Optional.empty(),
-                    Optional.empty(), checks);
+                    Optional.empty(), Optional.empty(), checks);
         }
-        ExactSolution any = ExactSolver.solve(eq, mu.polynomial(), mu.factors(),
-                ConditionFitter.fit(eq, mu.polynomial(), zeroConditions(eq)));
-        ExactSolution particular = any.withComponents(withoutTransient(any.components(), factors));
+        List<Condition> zero = zeroConditions(eq);
+        ExactSolution particular = withoutTransient(fitted(eq, mu, zero, ForcingPart.RATIONAL), factors);
         checks.addAll(ExactVerifier.verify(particular, List.of()));
+        Optional<RadicalSolution> both = Optional.empty();
+        if (mu.radicand() > 1) {
+            ExactSolution radical = withoutTransient(fitted(eq, mu, zero, ForcingPart.RADICAL), factors);
+            checks.addAll(radicalChecks(radical, List.of(), mu.radicand()));
+            both = Optional.of(new RadicalSolution(mu.radicand(), particular, radical));
+        }
         return new Solution(problem, chi, factors, Presenter.roots(factors),
-                Presenter.withParticular(general, Presenter.fitted(particular, factors)), general,
-                Optional.empty(), Optional.of(particular), checks);
+                Presenter.withParticular(general, Presenter.fitted(particular, both, factors)), general,
+                Optional.empty(), Optional.of(particular), Optional.empty(), checks);
     }
 
     /** {@link ConditionFitter#fit}, with a free solution attached when the conditions leave one. */
-    private static InitialState fit(LinearEquation eq, Operator mu, List<Condition> conditions) {
+    private static InitialState fit(LinearEquation eq, Operator mu, List<Condition> conditions, ForcingPart part) {
         try {
-            return ConditionFitter.fit(eq, mu.polynomial(), conditions);
+            return ConditionFitter.fit(eq, mu.polynomial(), conditions, part);
         } catch (UnderdeterminedConditions e) {
-            ExactSolution free = ExactSolver.solve(eq.homogeneous(), mu.polynomial(), mu.factors(), e.freeState());
+            ExactSolution free = ExactSolver.solve(eq.homogeneous(), ForcingPart.RATIONAL, mu.polynomial(), mu.factors(),
+                    e.freeState());
             throw new ConditionsException(e.getMessage(), Presenter.fitted(free, mu.characteristic()));
         }
     }
@@ -150,10 +182,10 @@ public final class Solver {
         return zero;
     }
 
-    /** The components with the homogeneous powers (below the multiplicity in χ) set to zero. */
-    private static List<Component> withoutTransient(List<Component> components, List<Factor> characteristic) {
+    /** The solution with the homogeneous powers (below the multiplicity in χ) set to zero. */
+    private static ExactSolution withoutTransient(ExactSolution s, List<Factor> characteristic) {
         List<Component> result = new ArrayList<>();
-        for (Component c : components) {
+        for (Component c : s.components()) {
             int homogeneous = Presenter.multiplicity(characteristic, c.factor().polynomial());
             List<RationalPolynomial> kept = new ArrayList<>(c.coefficients());
             for (int i = 0; i < Math.min(homogeneous, kept.size()); i++) {
@@ -161,7 +193,7 @@ public final class Solver {
             }
             result.add(new Component(c.factor(), kept));
         }
-        return result;
+        return s.withComponents(result);
     }
 
     /** Every basis function v^i·α^j·(e^{αv} or α^v) of every factor is annihilated, in Q(α). */

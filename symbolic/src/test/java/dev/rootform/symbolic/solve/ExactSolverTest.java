@@ -24,8 +24,8 @@ class ExactSolverTest {
 
     private static ExactSolution solve(LinearEquation eq, List<Condition> conditions) {
         RationalPolynomial chi = eq.characteristicPolynomial();
-        InitialState state = ConditionFitter.fit(eq, chi, conditions);
-        ExactSolution s = ExactSolver.solve(eq, chi, JasFactorizer.factor(chi), state);
+        InitialState state = ConditionFitter.fit(eq, chi, conditions, ForcingPart.RATIONAL);
+        ExactSolution s = ExactSolver.solve(eq, ForcingPart.RATIONAL, chi, JasFactorizer.factor(chi), state);
         for (Check c : ExactVerifier.verify(s, conditions)) {
             assertTrue(c.passed(), c.name() + ": " + c.detail());
         }
