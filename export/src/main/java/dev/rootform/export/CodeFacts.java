@@ -10,6 +10,7 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.LongFunction;
 import java.util.TreeSet;
 
 /**
@@ -46,8 +47,14 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
 
     /** Measures {@code form}, the emitted formula of {@code solution}'s closed form. */
     static CodeFacts measure(Solution solution, NumericForm form) {
-        ExactSolution s = solution.exact().orElseThrow(() -> new InputException("code output needs an exactly "
-                + "fitted solution with rational values; this one is not (forcing with values in Q(√r))", "", -1));
+        MathContext mc = new MathContext(EXACT_DIGITS);
+        Rational origin = solution.exact().map(ExactSolution::origin).orElse(Rational.ZERO);
+        LongFunction<BigDecimal> sequence = solution.radical().<LongFunction<BigDecimal>>map(r -> n -> r.valueAt(n).toBigDecimal(mc))
+                .orElseGet(() -> {
+                    ExactSolution s = solution.exact().orElseThrow(
+                            () -> new InputException("code output needs an exactly fitted solution", "", -1));
+                    return n -> s.valueAt(n).toBigDecimal(mc);
+                });
         double start = form.differential() ? 0 : form.validFrom();
         double high = edge(form, start, 1);
         double low = form.differential() ? edge(form, start, -1) : form.first();
@@ -56,7 +63,7 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
             for (double sign : form.differential() ? new double[] {1, -1} : new double[] {1}) {
                 double v = start + sign * d;
                 if (v <= high && v >= low && (form.differential() || d == Math.rint(d))) {
-                    sample.add(Rational.of(BigDecimal.valueOf(v)).add(form.differential() ? s.origin() : Rational.ZERO));
+                    sample.add(Rational.of(BigDecimal.valueOf(v)).add(form.differential() ? origin : Rational.ZERO));
                 }
             }
         }
@@ -68,7 +75,7 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
         if (form.differential()) {
             new Analyzer(EXACT_DIGITS).analyze(solution, points).values().stream().map(PointValue::value).forEach(exact::add);
         } else {
-            points.forEach(p -> exact.add(s.valueAt(p.toBigInteger().longValueExact()).toBigDecimal(new MathContext(EXACT_DIGITS))));
+            points.forEach(p -> exact.add(sequence.apply(p.toBigInteger().longValueExact())));
         }
         double worst = 0;
         for (int i = 0; i < points.size(); i++) {

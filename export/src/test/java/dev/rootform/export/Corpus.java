@@ -10,7 +10,8 @@ import java.util.Optional;
 final class Corpus {
     /**
      * Difference equations: real, surd, repeated, complex (root of unity and surd modulus), root
-     * sums, λ = 0, non-integer; forced (constant, resonant exponential, polynomial, oscillating).
+     * sums, λ = 0, non-integer; forced (constant, resonant exponential, polynomial, oscillating, and
+     * oscillating with values in Q(√2)).
      */
     static final List<String> SEQUENCES = List.of(
             "x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1",
@@ -25,7 +26,8 @@ final class Corpus {
             "x[n] = 2x[n-1] + 1; x[0] = 0",
             "x[n+1] = 2x[n] + 2^n; x[0] = 1",
             "x[n+2] - 2x[n+1] + x[n] = 1; x[0] = 0; x[1] = 0",
-            "x[n+1] = x[n]/2 + cos(pi n/3) + 2; x[0] = 1");
+            "x[n+1] = x[n]/2 + cos(pi n/3) + 2; x[0] = 1",
+            "x[n+1] = x[n]/2 + cos(pi n/4) + 2; x[0] = 1");
     /** Differential equations: complex, real, repeated, root sum, shifted origin; forced (resonant and not). */
     static final List<String> FUNCTIONS = List.of(
             "y'' + 2y' + 5y = 0; y(0) = 1; y'(0) = 0",
