@@ -104,9 +104,7 @@ public final class JsonRenderer {
         f.freeConstants().forEach(free::add);
         if (!r.analysis().constantValues().isEmpty()) {
             ObjectNode values = out.putObject("constantValues");
-            for (int i = 0; i < f.freeConstants().size(); i++) {
-                values.put(f.freeConstants().get(i), Numbers.decimal(r.analysis().constantValues().get(i), r.digits()));
-            }
+            r.analysis().constantValues().forEach((name, value) -> values.put(name, Numbers.decimal(value, r.digits())));
         }
     }
 

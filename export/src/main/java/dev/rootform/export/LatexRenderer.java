@@ -39,13 +39,10 @@ public final class LatexRenderer {
         FormulaWriter writer = new FormulaWriter(LatexNotation.INSTANCE, f);
         rows.add(row("characteristic", writer.polynomial(s.characteristic(), LatexNotation.INSTANCE.lambda()) + " = 0"));
         rows.add(row("solution", math(EquationText.unknownAt(f, f.variable())) + " = " + Formulas.latex(f)));
-        List<java.math.BigDecimal> values = r.analysis().constantValues();
-        if (!values.isEmpty()) {
+        if (!r.analysis().constantValues().isEmpty()) {
             List<String> constants = new ArrayList<>();
-            for (int i = 0; i < values.size(); i++) {
-                constants.add(LatexNotation.INSTANCE.constant(f.freeConstants().get(i)) + " \\approx "
-                        + Numbers.decimal(values.get(i), r.digits()));
-            }
+            r.analysis().constantValues().forEach((name, value) -> constants.add(
+                    LatexNotation.INSTANCE.constant(name) + " \\approx " + Numbers.decimal(value, r.digits())));
             rows.add(row("constants", String.join(",\\; ", constants)));
         }
         rows.add(row("valid for", validity(f)));

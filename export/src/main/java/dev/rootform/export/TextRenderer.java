@@ -13,6 +13,7 @@ import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
@@ -108,15 +109,14 @@ public final class TextRenderer {
         } else {
             lines.add("for all " + f.variable());
         }
-        List<BigDecimal> values = r.analysis().constantValues();
+        Map<String, BigDecimal> values = r.analysis().constantValues();
         if (!values.isEmpty()) {
-            lines.add("constants fixed by the conditions (not exact rationals; solved to " + r.digits() + " digits):");
-            for (int i = 0; i < values.size(); i++) {
-                lines.add("  " + f.freeConstants().get(i) + " ≈ " + Numbers.decimal(values.get(i), r.digits()));
-            }
-        } else if (!f.freeConstants().isEmpty()) {
-            int k = f.freeConstants().size();
-            lines.add("general solution: " + String.join(", ", f.freeConstants()) + (k == 1 ? " is a free constant" : " are free constants"));
+            lines.add("constants fixed numerically (not exact rationals; solved to " + r.digits() + " digits):");
+            values.forEach((name, value) -> lines.add("  " + name + " ≈ " + Numbers.decimal(value, r.digits())));
+        }
+        List<String> free = f.freeConstants().stream().filter(n -> !values.containsKey(n)).toList();
+        if (!free.isEmpty()) {
+            lines.add("general solution: " + String.join(", ", free) + (free.size() == 1 ? " is a free constant" : " are free constants"));
         }
         return lines;
     }

@@ -43,6 +43,6 @@ final class Corpus {
 
     static Report report(String input) {
         return new Report(Solver.solve(ProblemParser.parse(input, List.of(), null)),
-                new Analysis(List.of(), List.of(), List.of(), List.of(), List.of(), Optional.empty(), List.of()), 20);
+                new Analysis(List.of(), List.of(), List.of(), java.util.Map.of(), List.of(), Optional.empty(), List.of()), 20);
     }
 }

@@ -64,7 +64,7 @@ final class Fixtures {
         for (ExactRoot r : s.roots()) {
             roots.add(approximate(r));
         }
-        return new Report(s, new Analysis(roots, values, numericChecks, List.of(), List.of(), Optional.empty(), warnings), 10);
+        return new Report(s, new Analysis(roots, values, numericChecks, java.util.Map.of(), List.of(), Optional.empty(), warnings), 10);
     }
 
     static PointValue value(long at, long exact) {

@@ -123,6 +123,14 @@ class ForcedReferenceTest {
                         (DoubleUnaryOperator) t -> 2 - Math.exp(-t) * (2 * Math.cos(2 * t) + Math.sin(2 * t))),
                 // ramp into a first-order lag: τy' + y = t, y(0) = 0, τ = 1/2 → t - τ + τe^{-t/τ} (common practice)
                 Arguments.of("0.5y' + y = t; y(0) = 0", (DoubleUnaryOperator) t -> t - 0.5 + 0.5 * Math.exp(-2 * t)),
+                // a frequency π: y'' + y = sin(πt) from rest → (sin πt - π sin t)/(1 - π²); its constants lie in Q(π),
+                // so the trial form's are fitted numerically (worked by hand: undetermined coefficients)
+                Arguments.of("y'' + y = sin(pi t); y(0) = 0; y'(0) = 0",
+                        (DoubleUnaryOperator) t -> (Math.sin(Math.PI * t) - Math.PI * Math.sin(t)) / (1 - Math.PI * Math.PI)),
+                // first-order lag driven at frequency π: y' + y = sin(πt), y(0) = 0 →
+                // (sin πt - π cos πt + π e^{-t})/(1 + π²) (common practice)
+                Arguments.of("y' + y = sin(pi t); y(0) = 0", (DoubleUnaryOperator) t ->
+                        (Math.sin(Math.PI * t) - Math.PI * Math.cos(Math.PI * t) + Math.PI * Math.exp(-t)) / (1 + Math.PI * Math.PI)),
                 // exponential input at a double root: y'' + 2y' + y = e^{-t}, rest → t²e^{-t}/2 (common practice)
                 Arguments.of("y'' + 2y' + y = e^(-t); y(0) = 0; y'(0) = 0", (DoubleUnaryOperator) t -> t * t * Math.exp(-t) / 2));
     }

@@ -4,24 +4,25 @@ import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.symbolic.solve.Check;
 import java.math.BigDecimal;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 
 /**
  * The numeric side of one answer: root values, values at requested points, numeric cross-checks,
- * the values of the free constants when boundary conditions fix them numerically,
+ * the values of the free constants that are fixed numerically (by name, in order),
  * steady-state responses to sinusoidal inputs (stable systems only), diagnostics and warnings (the
  * diagnostics' warnings).
  *
  * @since 0.1
  */
 public record Analysis(List<RootApproximation> roots, List<PointValue> values, List<Check> checks,
-        List<BigDecimal> constantValues, List<SteadyState> steadyStates, Optional<Diagnostics> diagnostics, List<String> warnings) {
+        Map<String, BigDecimal> constantValues, List<SteadyState> steadyStates, Optional<Diagnostics> diagnostics, List<String> warnings) {
     public Analysis {
         roots = List.copyOf(roots);
         values = List.copyOf(values);
         checks = List.copyOf(checks);
-        constantValues = List.copyOf(constantValues);
+        constantValues = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(constantValues));
         steadyStates = List.copyOf(steadyStates);
         Objects.requireNonNull(diagnostics, "diagnostics");
         warnings = List.copyOf(warnings);

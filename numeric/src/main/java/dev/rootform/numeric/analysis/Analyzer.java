@@ -18,7 +18,9 @@ import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -70,18 +72,24 @@ public final class Analyzer {
         }
         List<PointValue> values = new ArrayList<>();
         List<Check> checks = new ArrayList<>();
-        if (!points.isEmpty() && solution.exact().isEmpty() && solution.radical().isEmpty() && !solution.hasNumericConstants()) {
+        if (!points.isEmpty() && solution.exact().isEmpty() && solution.radical().isEmpty()
+                && solution.problem().conditions().isEmpty()) {
             throw new InputException("values need conditions: the general solution has free constants", "", -1);
         }
-        List<BigDecimal> constants = new ArrayList<>();
+        Map<String, BigDecimal> constants = new LinkedHashMap<>();
         if (solution.hasNumericConstants()) {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
-            constants.addAll(bvp.constants(digits));
+            constants.putAll(bvp.constants(digits));
             for (Rational p : points) {
                 values.add(new PointValue(p, Decimals.toBigDecimal(bvp.derivative(0, p), digits), Optional.empty()));
             }
-            checks.add(bvp.conditionsCheck(digits));
-            checks.add(bvp.integratorCheck());
+            if (solution.numericParticular()) {
+                checks.add(bvp.residualCheck(digits));
+            }
+            if (!solution.problem().conditions().isEmpty()) {
+                checks.add(bvp.conditionsCheck(digits));
+                checks.add(bvp.integratorCheck());
+            }
         }
         solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p))));
         Optional<ExactSolution> exact = solution.exact();

@@ -31,7 +31,7 @@ final class BoundarySingularity {
     private static final int SMALL_DENOMINATORS = 60;
 
     static InputException explain(Apfloat[][] a, int[] pivotRow, int rank, Apfloat tiny, Apfloat[] scales,
-            long working, Solution solution) {
+            long working, Solution solution, List<String> constants) {
         int k = a.length;
         String digits = " (singular to " + (working - 10) + " digits)";
         for (int r = rank; r < k; r++) {
@@ -52,7 +52,6 @@ final class BoundarySingularity {
         for (Apfloat x : v) {
             largest = ApfloatMath.abs(x).compareTo(largest) > 0 ? ApfloatMath.abs(x) : largest;
         }
-        List<String> constants = solution.general().freeConstants();
         Map<String, Rational> exact = new HashMap<>();
         StringBuilder combination = new StringBuilder();
         for (int c = 0; c < k; c++) {

@@ -3,14 +3,20 @@ package dev.rootform.numeric.analysis;
 import dev.rootform.numeric.check.ForcingFunction;
 import dev.rootform.numeric.check.OdeReference;
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.model.ForcingTerm;
+import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.parse.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
@@ -26,16 +32,25 @@ import org.apfloat.ApfloatMath;
  * numerically); that is reported, never papered over.
  */
 final class BoundaryValues {
+    /** Generic points where L y = g is imposed on a trial form (as many as it has constants). */
+    private static final String[] COLLOCATION = {"0.3", "0.91803398874989484820", "1.5360679774997896964",
+        "2.1541019662496845446", "2.7721359549995793928", "3.3901699437494742410", "4.0082039324993690892",
+        "4.6262379212492639374"};
+    /** Further points where the residual L y - g of a trial form is checked afterwards. */
+    private static final String[] RESIDUAL_POINTS = {"0.77", "1.9", "3.14159"};
+
     private final Solution solution;
     private final List<ModeSum> basis;
+    private final int first;
     private final Optional<ModeSum> particular;
-    private final List<Apfloat> constants;
+    private final Map<String, Apfloat> constants;
     private final long precision;
 
-    private BoundaryValues(Solution solution, List<ModeSum> basis, Optional<ModeSum> particular, List<Apfloat> constants,
-            long precision) {
+    private BoundaryValues(Solution solution, List<ModeSum> basis, int first, Optional<ModeSum> particular,
+            Map<String, Apfloat> constants, long precision) {
         this.solution = solution;
         this.basis = basis;
+        this.first = first;
         this.particular = particular;
         this.constants = constants;
         this.precision = precision;
@@ -59,22 +74,68 @@ final class BoundaryValues {
                 + Analyzer.MAX_WORKING_DIGITS + " digits");
     }
 
+    /**
+     * The unknown constants: all free constants when conditions are given, else only those of the
+     * trial form (P1..), which L y = g fixes at collocation points; the rows are the conditions, then
+     * one collocation row per remaining unknown.
+     */
     private static BoundaryValues at(Solution solution, int working, RootCache cache) {
-        List<ModeSum> basis = ModeSum.basis(solution.general(), cache, working);
+        ClosedForm form = solution.closedForm();
+        List<ModeSum> basis = ModeSum.basis(form, cache, working);
         Optional<ModeSum> particular = solution.particular().map(p -> ModeSum.of(p, cache, working));
         List<Condition> conditions = solution.problem().conditions();
-        int k = basis.size();
-        Apfloat[][] a = new Apfloat[k][k + 1];
-        for (int i = 0; i < k; i++) {
-            Condition c = conditions.get(i);
-            Apfloat t = point(c, working);
-            for (int j = 0; j < k; j++) {
-                a[i][j] = basis.get(j).derivative(c.derivative(), t);
+        int first = conditions.isEmpty() ? solution.general().freeConstants().size() : 0;
+        int n = basis.size() - first;
+        LinearEquation eq = solution.problem().equation();
+        Apfloat[][] a = new Apfloat[n][n + 1];
+        for (int row = 0; row < n; row++) {
+            boolean condition = row < conditions.size();
+            Condition c = condition ? conditions.get(row) : null;
+            Apfloat t = condition ? point(c, working) : new Apfloat(COLLOCATION[row - conditions.size()], working);
+            for (int j = 0; j < n; j++) {
+                ModeSum f = basis.get(first + j);
+                a[row][j] = condition ? f.derivative(c.derivative(), t) : applied(eq, f, t);
             }
-            Apfloat rhs = Decimals.toApfloat(c.value(), working);
-            a[i][k] = particular.isPresent() ? rhs.subtract(particular.get().derivative(c.derivative(), t)) : rhs;
+            Apfloat known = particular.map(p -> condition ? p.derivative(c.derivative(), t) : applied(eq, p, t))
+                    .orElse(Apfloat.ZERO);
+            a[row][n] = (condition ? Decimals.toApfloat(c.value(), working) : forcing(eq, t, working)).subtract(known);
         }
-        return new BoundaryValues(solution, basis, particular, eliminate(a, working, solution), working);
+        List<String> names = form.freeConstants().subList(first, basis.size());
+        List<Apfloat> x = eliminate(a, working, solution, names);
+        Map<String, Apfloat> constants = new LinkedHashMap<>();
+        for (int j = 0; j < n; j++) {
+            constants.put(names.get(j), x.get(j));
+        }
+        return new BoundaryValues(solution, basis, first, particular, constants, working);
+    }
+
+    /** (L f)(t) = Σ a_l f^(l)(t). */
+    private static Apfloat applied(LinearEquation eq, ModeSum f, Apfloat t) {
+        Apfloat sum = Apfloat.ZERO;
+        for (int l = 0; l <= eq.order(); l++) {
+            Rational a = eq.coefficients().get(l);
+            if (!a.isZero()) {
+                sum = sum.add(Decimals.toApfloat(a, t.precision()).multiply(f.derivative(l, t)));
+            }
+        }
+        return sum;
+    }
+
+    /** The right-hand side g(t) = Σ c·t^p·e^{at}·(1, cos ωt or sin ωt) at the working precision. */
+    private static Apfloat forcing(LinearEquation eq, Apfloat t, long precision) {
+        Apfloat sum = Apfloat.ZERO;
+        for (ForcingTerm term : eq.forcing()) {
+            Apfloat w = Decimals.toApfloat(term.frequency(), precision);
+            w = term.frequencyTimesPi() ? w.multiply(ApfloatMath.pi(precision)) : w;
+            Apcomplex e = ComplexExp.exp(new Apcomplex(Decimals.toApfloat(term.exponential(), precision).multiply(t),
+                    w.multiply(t)), precision);
+            Apfloat wave = switch (term.oscillation()) {
+                case NONE, COS -> e.real();
+                case SIN -> e.imag();
+            };
+            sum = sum.add(Decimals.toApfloat(term.coefficient(), precision).multiply(ApfloatMath.pow(t, term.power())).multiply(wave));
+        }
+        return sum;
     }
 
     /** The condition's point at the working precision: at, or at·π. */
@@ -88,7 +149,7 @@ final class BoundaryValues {
      * scale counts as zero. A singular system is explained: contradictory conditions, or a free
      * solution Σ v_j·C_j-basis (the kernel vector, largest entry 1) that can be added.
      */
-    private static List<Apfloat> eliminate(Apfloat[][] a, long working, Solution solution) {
+    private static List<Apfloat> eliminate(Apfloat[][] a, long working, Solution solution, List<String> names) {
         int k = a.length;
         Apfloat tiny = new Apfloat("1e-" + (working - 10), working);
         Apfloat[] scales = new Apfloat[k];
@@ -121,7 +182,7 @@ final class BoundaryValues {
             pivotRow[c] = rank++;
         }
         if (rank < k) {
-            throw BoundarySingularity.explain(a, pivotRow, rank, tiny, scales, working, solution);
+            throw BoundarySingularity.explain(a, pivotRow, rank, tiny, scales, working, solution, names);
         }
         Apfloat[] x = new Apfloat[k];
         for (int c = 0; c < k; c++) {
@@ -149,20 +210,22 @@ final class BoundaryValues {
         return max;
     }
 
-    private static boolean agree(List<Apfloat> x, List<Apfloat> y, int digits) {
-        for (int i = 0; i < x.size(); i++) {
-            Apfloat d = ApfloatMath.abs(x.get(i).subtract(y.get(i)));
+    private static boolean agree(Map<String, Apfloat> x, Map<String, Apfloat> y, int digits) {
+        for (Map.Entry<String, Apfloat> e : y.entrySet()) {
+            Apfloat d = ApfloatMath.abs(x.get(e.getKey()).subtract(e.getValue()));
             Apfloat unit = new Apfloat("1e-" + digits, digits + Analyzer.GUARD_DIGITS);
-            if (d.compareTo(ApfloatMath.abs(y.get(i)).add(unit).multiply(unit)) > 0) {
+            if (d.compareTo(ApfloatMath.abs(e.getValue()).add(unit).multiply(unit)) > 0) {
                 return false;
             }
         }
         return true;
     }
 
-    /** The constants C1..Ck to {@code digits} significant digits. */
-    List<BigDecimal> constants(int digits) {
-        return constants.stream().map(c -> Decimals.toBigDecimal(c, digits)).toList();
+    /** The constants this problem fixes (C1..Ck and P1.., or only P1.. without conditions), to {@code digits}. */
+    Map<String, BigDecimal> constants(int digits) {
+        Map<String, BigDecimal> out = new LinkedHashMap<>();
+        constants.forEach((name, value) -> out.put(name, Decimals.toBigDecimal(value, digits)));
+        return out;
     }
 
     /** y^(d)(t) at the working precision. */
@@ -173,8 +236,9 @@ final class BoundaryValues {
     /** y^(d)(t) at a point given in the working precision. */
     Apfloat derivative(int d, Apfloat t) {
         Apfloat sum = particular.map(p -> p.derivative(d, t)).orElse(Apfloat.ZERO);
-        for (int j = 0; j < basis.size(); j++) {
-            sum = sum.add(constants.get(j).multiply(basis.get(j).derivative(d, t)));
+        List<Apfloat> values = List.copyOf(constants.values());
+        for (int j = 0; j < values.size(); j++) {
+            sum = sum.add(values.get(j).multiply(basis.get(first + j).derivative(d, t)));
         }
         return sum;
     }
@@ -191,6 +255,27 @@ final class BoundaryValues {
         boolean passed = worst.compareTo(new Apfloat("1e-" + digits, precision)) <= 0;
         return new Check("meets the conditions", passed, "constants solved numerically; largest residual "
                 + Decimals.toBigDecimal(worst, 3) + " (relative, tolerance 1e-" + digits + ")");
+    }
+
+    /** The residual L y - g at points other than the collocation points, relative to max(1, |g|). */
+    Check residualCheck(int digits) {
+        LinearEquation eq = solution.problem().equation();
+        Apfloat worst = Apfloat.ZERO;
+        for (String p : RESIDUAL_POINTS) {
+            Apfloat t = new Apfloat(p, precision);
+            Apfloat g = forcing(eq, t, precision);
+            Apfloat ly = Apfloat.ZERO;
+            for (int l = 0; l <= eq.order(); l++) {
+                ly = ly.add(Decimals.toApfloat(eq.coefficients().get(l), precision).multiply(derivative(l, t)));
+            }
+            Apfloat residual = ApfloatMath.abs(ly.subtract(g));
+            Apfloat relative = residual.divide(ApfloatMath.abs(g).add(new Apfloat(1, precision)));
+            worst = relative.compareTo(worst) > 0 ? relative : worst;
+        }
+        boolean passed = worst.compareTo(new Apfloat("1e-" + digits, precision)) <= 0;
+        return new Check("satisfies the equation", passed, "trial form fitted at collocation points; residual L y - g "
+                + "at t = " + String.join(", ", RESIDUAL_POINTS) + ": largest " + Decimals.toBigDecimal(worst, 3)
+                + " (relative, tolerance 1e-" + digits + ")");
     }
 
     /**

@@ -3,6 +3,7 @@ package dev.rootform.numeric.analysis;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.solve.Component;
@@ -47,32 +48,55 @@ final class ModeSum {
         return new ModeSum(s.origin(), modes, precision);
     }
 
-    /** One function per free constant of a general solution (origin 0), in the order of its constants. */
-    static List<ModeSum> basis(ClosedForm general, RootCache cache, long precision) {
+    /**
+     * One function per free constant of a closed form with origin 0 (general solution, trial form),
+     * in the order of its constants; terms with exact coefficients are skipped.
+     */
+    static List<ModeSum> basis(ClosedForm form, RootCache cache, long precision) {
         Apcomplex one = new Apfloat(1, precision);
+        Apcomplex minusI = new Apcomplex(Apfloat.ZERO, new Apfloat(-1, precision));
         List<ModeSum> basis = new ArrayList<>();
-        for (Term t : general.transientTerms()) {
+        for (Term t : form.terms()) {
             if (t instanceof Term.Exponential e) {
-                basis.add(single(new Mode(one, e.power(), real(e.rate().toBigDecimal(context(precision)), precision))));
+                if (e.coefficient() instanceof Coefficient.Free) {
+                    basis.add(single(new Mode(one, e.power(), real(e.rate().toBigDecimal(context(precision)), precision))));
+                }
             } else if (t instanceof Term.Oscillating o) {
-                Apfloat w = real(((Angle.Value) o.angle()).value().toBigDecimal(context(precision)), precision).real();
-                Apcomplex z = new Apcomplex(real(o.growth().toBigDecimal(context(precision)), precision).real(), w);
-                basis.add(single(new Mode(one, o.power(), z)));
-                basis.add(single(new Mode(new Apcomplex(Apfloat.ZERO, new Apfloat(-1, precision)), o.power(), z)));
+                Apcomplex z = new Apcomplex(real(o.growth().toBigDecimal(context(precision)), precision).real(),
+                        frequency(o.angle(), precision));
+                if (o.cosine() instanceof Coefficient.Free) {
+                    basis.add(single(new Mode(one, o.power(), z)));
+                }
+                if (o.sine() instanceof Coefficient.Free) {
+                    basis.add(single(new Mode(minusI, o.power(), z)));
+                }
             } else if (t instanceof Term.RootSum r) {
                 List<Apcomplex> alphas = roots(r.factor(), cache, precision);
                 for (int j = 0; j < r.coefficients().size(); j++) {
-                    List<Mode> modes = new ArrayList<>();
-                    for (Apcomplex alpha : alphas) {
-                        modes.add(new Mode(org.apfloat.ApcomplexMath.pow(alpha, j), r.power(), alpha));
+                    if (r.coefficients().get(j) instanceof Coefficient.Free) {
+                        List<Mode> modes = new ArrayList<>();
+                        for (Apcomplex alpha : alphas) {
+                            modes.add(new Mode(org.apfloat.ApcomplexMath.pow(alpha, j), r.power(), alpha));
+                        }
+                        basis.add(new ModeSum(Rational.ZERO, modes, precision));
                     }
-                    basis.add(new ModeSum(Rational.ZERO, modes, precision));
                 }
             } else {
                 throw new AssertionError(t);
             }
         }
         return basis;
+    }
+
+    /** The angular frequency ω of an oscillating term of a differential equation: a surd or qπ. */
+    private static Apfloat frequency(Angle angle, long precision) {
+        if (angle instanceof Angle.PiMultiple p) {
+            return Decimals.toApfloat(p.multiple(), precision).multiply(org.apfloat.ApfloatMath.pi(precision));
+        }
+        if (angle instanceof Angle.Value v) {
+            return real(v.value().toBigDecimal(context(precision)), precision).real();
+        }
+        throw new IllegalArgumentException("no angular frequency for " + angle);
     }
 
     /** The d-th derivative at t. */

@@ -24,12 +24,14 @@ import java.util.Optional;
  *     number-field form, when {@code exact} is empty (general solution or boundary-value problem)
  * @param radical the fitted solution as rational + √r·radical parts when the forcing takes values
  *     in Q(√r) (then {@code exact} is empty)
+ * @param numericParticular true when the particular solution is a trial form whose constants P1..
+ *     are transcendental (forcing with a frequency qπ in a differential equation)
  * @param checks the exact verification steps, all run
  * @since 0.1
  */
 public record Solution(Problem problem, RationalPolynomial characteristic, List<Factor> factors,
         List<ExactRoot> roots, ClosedForm closedForm, ClosedForm general, Optional<ExactSolution> exact,
-        Optional<ExactSolution> particular, Optional<RadicalSolution> radical, List<Check> checks) {
+        Optional<ExactSolution> particular, Optional<RadicalSolution> radical, boolean numericParticular, List<Check> checks) {
     public Solution {
         Objects.requireNonNull(problem, "problem");
         Objects.requireNonNull(characteristic, "characteristic");
@@ -44,12 +46,13 @@ public record Solution(Problem problem, RationalPolynomial characteristic, List<
     }
 
     /**
-     * True when conditions were given but the constants of {@link #closedForm} are not exact
-     * rationals (a boundary-value problem, a point that is a multiple of π, or transcendental
-     * forcing with conditions away from t = 0): the numeric layer then fixes them.
+     * True when constants of {@link #closedForm} are not exact rationals (a boundary-value problem,
+     * a point that is a multiple of π, transcendental forcing with conditions away from t = 0, or a
+     * trial form for a frequency qπ): the numeric layer then fixes them (all of them when conditions
+     * are given, else only the trial form's P1..).
      */
     public boolean hasNumericConstants() {
-        return exact.isEmpty() && radical.isEmpty() && !problem.conditions().isEmpty();
+        return exact.isEmpty() && radical.isEmpty() && (!problem.conditions().isEmpty() || numericParticular);
     }
 
     /** True when every check ran and held. */

@@ -40,9 +40,13 @@ public final class Solver {
         LinearEquation eq = problem.equation();
         RationalPolynomial chi = eq.characteristicPolynomial();
         List<Factor> factors = JasFactorizer.factor(chi);
-        List<Factor> operatorFactors = merge(factors, eq.isHomogeneous() ? List.of() : Annihilator.of(eq));
+        boolean trial = eq.domain() == Domain.DIFFERENTIAL && eq.forcing().stream().anyMatch(Solver::transcendentalFrequency);
+        List<Factor> operatorFactors = merge(factors, eq.isHomogeneous() || trial ? List.of() : Annihilator.of(eq));
         int radicand = eq.domain() == Domain.DIFFERENCE && !eq.isHomogeneous() ? ForcingValues.radicand(eq) : 1;
         Operator mu = new Operator(product(chi.leadingCoefficient(), operatorFactors), operatorFactors, factors, radicand);
+        if (trial) {
+            return withTrialForm(problem, chi, factors);
+        }
         if (problem.conditions().isEmpty() || numericConstants(eq, problem.conditions())) {
             return withFreeConstants(problem, chi, mu);
         }
@@ -51,14 +55,33 @@ public final class Solver {
         ClosedForm general = Presenter.general(eq, factors);
         if (radicand == 1) {
             return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact, factors),
-                    general, Optional.of(exact), Optional.empty(), Optional.empty(), checks);
+                    general, Optional.of(exact), Optional.empty(), Optional.empty(), false, checks);
         }
         List<Condition> zero = zeroed(problem.conditions());
         RadicalSolution both = new RadicalSolution(radicand, exact, fitted(eq, mu, zero, ForcingPart.RADICAL));
         checks.addAll(radicalChecks(both.radical(), zero, radicand));
         return new Solution(problem, chi, factors, Presenter.roots(factors),
                 Presenter.fitted(exact, Optional.of(both), factors), general, Optional.empty(), Optional.empty(),
-                Optional.of(both), checks);
+                Optional.of(both), false, checks);
+    }
+
+    /** A forcing frequency qπ ≠ 0 in a differential equation: its annihilator has no rational coefficients. */
+    private static boolean transcendentalFrequency(ForcingTerm t) {
+        return t.oscillation() != ForcingTerm.Oscillation.NONE && t.frequencyTimesPi() && !t.frequency().isZero();
+    }
+
+    /**
+     * The general solution plus the trial form of undetermined coefficients ({@link TrialForm}),
+     * whose constants the numeric layer fixes: P1.. always, C1..Ck from the conditions when given.
+     */
+    private static Solution withTrialForm(Problem problem, RationalPolynomial chi, List<Factor> factors) {
+        LinearEquation eq = problem.equation();
+        if (!problem.conditions().isEmpty()) {
+            ConditionFitter.validate(eq, problem.conditions());
+        }
+        ClosedForm general = Presenter.general(eq, factors);
+        return new Solution(problem, chi, factors, Presenter.roots(factors), TrialForm.of(eq, general, factors), general,
+                Optional.empty(), Optional.empty(), Optional.empty(), true, List.of(basisCheck(eq, factors)));
     }
 
     private static ExactSolution fitted(LinearEquation eq, Operator mu, List<Condition> conditions, ForcingPart part) {
@@ -103,7 +126,7 @@ public final class Solver {
         List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
         if (eq.isHomogeneous()) {
             return new Solution(problem, chi, factors, Presenter.roots(factors), general, general, Optional.empty(),
-                    Optional.empty(), Optional.empty(), checks);
+                    Optional.empty(), Optional.empty(), false, checks);
         }
         List<Condition> zero = zeroConditions(eq);
         ExactSolution particular = withoutTransient(fitted(eq, mu, zero, ForcingPart.RATIONAL), factors);
@@ -116,7 +139,7 @@ public final class Solver {
         }
         return new Solution(problem, chi, factors, Presenter.roots(factors),
                 Presenter.withParticular(general, Presenter.fitted(particular, both, factors)), general,
-                Optional.empty(), Optional.of(particular), Optional.empty(), checks);
+                Optional.empty(), Optional.of(particular), Optional.empty(), false, checks);
     }
 
     /** {@link ConditionFitter#fit}, with a free solution attached when the conditions leave one. */
