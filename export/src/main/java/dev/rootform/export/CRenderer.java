@@ -24,10 +24,10 @@ public final class CRenderer {
         Identifiers.cFunction("--function", function);
         headerFile.ifPresent(Identifiers::cHeader);
         Solution s = r.solution();
-        NumericForm form = NumericForm.of(s.closedForm());
+        NumericForm form = NumericForm.of(CodeHeader.codeForm(r));
         CodeFacts facts = CodeFacts.measure(s, form);
         StringBuilder comment = new StringBuilder("/*\n");
-        CodeHeader.lines(s, form, facts).forEach(l -> comment.append(" * ").append(l).append('\n'));
+        CodeHeader.lines(r, form, facts).forEach(l -> comment.append(" * ").append(l).append('\n'));
         comment.append(" */\n");
         String signature = "double " + function + (form.differential() ? "(double t)" : "(long n)");
         String guard = function.toUpperCase(java.util.Locale.ROOT) + "_H";

@@ -50,11 +50,8 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
         MathContext mc = new MathContext(EXACT_DIGITS);
         Rational origin = solution.exact().map(ExactSolution::origin).orElse(Rational.ZERO);
         LongFunction<BigDecimal> sequence = solution.radical().<LongFunction<BigDecimal>>map(r -> n -> r.valueAt(n).toBigDecimal(mc))
-                .orElseGet(() -> {
-                    ExactSolution s = solution.exact().orElseThrow(
-                            () -> new InputException("code output needs an exactly fitted solution", "", -1));
-                    return n -> s.valueAt(n).toBigDecimal(mc);
-                });
+                .orElse(n -> solution.exact().orElseThrow(
+                        () -> new InputException("code output needs a fitted solution", "", -1)).valueAt(n).toBigDecimal(mc));
         double start = form.differential() ? 0 : form.validFrom();
         double high = edge(form, start, 1);
         double low = form.differential() ? edge(form, start, -1) : form.first();

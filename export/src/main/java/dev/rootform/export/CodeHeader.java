@@ -24,8 +24,10 @@ final class CodeHeader {
     }
 
     /** The header lines for code that evaluates {@code form} (facts measured on it); without numeric lines when facts are absent. */
-    static List<String> lines(Solution s, NumericForm form, CodeFacts facts) {
+    static List<String> lines(Report r, NumericForm form, CodeFacts facts) {
+        Solution s = r.solution();
         List<String> out = new ArrayList<>(validity(s));
+        out.addAll(constants(r));
         ClosedForm f = s.closedForm();
         String v = f.variable();
         if (form.differential()) {
@@ -38,7 +40,8 @@ final class CodeHeader {
                     + (facts.high() >= CodeFacts.CAP ? " (searched to 1e15)" : "") + ".");
         }
         out.add(String.format("Accuracy measured by rootform when it generated this code: max relative error %s against "
-                + "the exact values at %d points (%s), with StrictMath (a C math library may differ in the last bits; "
+                + (r.analysis().constantValues().isEmpty() ? "the exact values" : "values from the closed form at 40 digits")
+                + " at %d points (%s), with StrictMath (a C math library may differ in the last bits; "
                 + "points where the exact value is 0 are left out).", statedError(facts), facts.points().size(),
                 facts.points().stream().map(Numbers::point).collect(Collectors.joining(", "))));
         out.add(CAUTION);
@@ -49,6 +52,27 @@ final class CodeHeader {
     static String statedError(CodeFacts facts) {
         return new java.math.BigDecimal(facts.maxRelativeError()).round(new java.math.MathContext(3, java.math.RoundingMode.UP))
                 .stripTrailingZeros().toString();
+    }
+
+    /**
+     * The closed form that generated code evaluates: the solution's, with any constants fixed
+     * numerically (boundary values, trial forms) put in as their decimals; constants still free
+     * make code impossible ({@link WaveBuilder} says so).
+     */
+    static ClosedForm codeForm(Report r) {
+        java.util.Map<String, dev.rootform.symbolic.algebra.Rational> values = new java.util.LinkedHashMap<>();
+        r.analysis().constantValues().forEach((name, value) -> values.put(name, dev.rootform.symbolic.algebra.Rational.of(value)));
+        return r.solution().closedForm().withConstantValues(values);
+    }
+
+    /** The numeric constants line, when there are any: {@code C1 = 0.5, P1 = -0.11}. */
+    private static List<String> constants(Report r) {
+        if (r.analysis().constantValues().isEmpty()) {
+            return List.of();
+        }
+        return List.of("Constants fixed numerically (not exact rationals), to " + r.digits() + " digits: "
+                + r.analysis().constantValues().entrySet().stream()
+                        .map(e -> e.getKey() + " = " + Numbers.decimal(e.getValue(), r.digits())).collect(Collectors.joining(", ")));
     }
 
     /** Equation, conditions, closed form and where it holds. */

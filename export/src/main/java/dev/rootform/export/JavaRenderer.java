@@ -90,10 +90,10 @@ public final class JavaRenderer {
     public static String render(Report r, String packageName, String className) {
         Identifiers.javaClass(className);
         Solution s = r.solution();
-        NumericForm form = NumericForm.of(s.closedForm());
+        NumericForm form = NumericForm.of(CodeHeader.codeForm(r));
         CodeFacts facts = CodeFacts.measure(s, form);
         Optional<IntegerRecurrence> exact = s.exact().flatMap(IntegerRecurrence::of);
-        List<String> header = new java.util.ArrayList<>(CodeHeader.lines(s, form, facts));
+        List<String> header = new java.util.ArrayList<>(CodeHeader.lines(r, form, facts));
         exact.ifPresent(e -> header.addAll(CodeHeader.wrap(List.of("Exact terms: term(n) and termExact(n) by Fiduccia's "
                 + "method; the values are integers because the recurrence divided by its leading coefficient has integer "
                 + "coefficients and its first values are integers."))));

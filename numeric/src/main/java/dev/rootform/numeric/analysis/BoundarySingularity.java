@@ -1,18 +1,12 @@
 package dev.rootform.numeric.analysis;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.closedform.ClosedForm;
-import dev.rootform.symbolic.closedform.Coefficient;
-import dev.rootform.symbolic.closedform.Surd;
-import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.parse.InputException;
 import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.UnaryOperator;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
@@ -65,30 +59,9 @@ final class BoundarySingularity {
         }
         String message = "the boundary conditions leave a solution free" + digits;
         if (exact.size() == k) {
-            return new ConditionsException(message, withConstants(solution.general(), exact));
+            return new ConditionsException(message, solution.general().withConstantValues(exact));
         }
         return new InputException(message + ": adding any multiple of the homogeneous solution with "
                 + combination + " keeps every condition", "", -1);
     }
-
-    /** The general solution's homogeneous terms with the free constants replaced by exact values. */
-    private static ClosedForm withConstants(ClosedForm general, Map<String, Rational> values) {
-        UnaryOperator<Coefficient> fill = c -> c instanceof Coefficient.Free f
-                ? new Coefficient.Exact(Surd.of(values.get(f.name()))) : c;
-        List<Term> terms = new ArrayList<>();
-        for (Term t : general.transientTerms()) {
-            if (t instanceof Term.Exponential e) {
-                terms.add(new Term.Exponential(fill.apply(e.coefficient()), e.power(), e.rate()));
-            } else if (t instanceof Term.Oscillating o) {
-                terms.add(new Term.Oscillating(fill.apply(o.cosine()), fill.apply(o.sine()), o.power(), o.growth(), o.angle()));
-            } else if (t instanceof Term.RootSum r) {
-                terms.add(new Term.RootSum(r.factor(), r.coefficients().stream().map(fill).toList(), r.power()));
-            } else {
-                throw new AssertionError(t);
-            }
-        }
-        return new ClosedForm(general.domain(), general.function(), general.variable(), general.origin(),
-                general.validFrom(), general.leadingValues(), terms, List.of());
-    }
-
 }
