@@ -41,9 +41,8 @@ final class WaveBuilder {
      */
     static List<Wave> of(ClosedForm form) {
         if (!form.freeConstants().isEmpty()) {
-            throw new InputException("code output needs exactly fitted constants: give conditions for the free constants "
-                    + String.join(", ", form.freeConstants()) + " (at one point for a differential equation; the "
-                    + "constants of a boundary-value problem are numeric and are shown by --format text|json|latex)", "", -1);
+            throw new InputException("code output needs fitted constants: give conditions for the free constants "
+                    + String.join(", ", form.freeConstants()), "", -1);
         }
         boolean differential = form.domain() == Domain.DIFFERENTIAL;
         List<Wave> waves = new ArrayList<>();
