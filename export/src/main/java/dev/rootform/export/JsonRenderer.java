@@ -7,7 +7,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.analysis.RootApproximation;
 import dev.rootform.symbolic.algebra.Factor;
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Domain;
@@ -59,7 +58,7 @@ public final class JsonRenderer {
         ArrayNode values = root.putArray("values");
         for (PointValue v : r.values()) {
             values.addObject().put("at", v.at().toString()).put("value", Numbers.decimal(v.value(), r.digits()))
-                    .put("exact", v.exact().map(Rational::toString).orElse(null));
+                    .put("exact", v.exactText().orElse(null));
         }
         ArrayNode steady = root.putArray("steadyState");
         r.steadyStates().forEach(st -> steady.addObject().put("input", EquationText.forcingTerm(eq, st.input()))

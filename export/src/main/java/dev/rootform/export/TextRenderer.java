@@ -149,7 +149,9 @@ public final class TextRenderer {
 
     /** {@code " = 55"} when the exact value is known and short, else {@code " ≈ 0.2231"}. */
     private static String exactOrDecimal(PointValue v, int digits) {
-        String exact = v.exact().filter(TextRenderer::fitsShort).map(Rational::toString).orElse("");
+        String exact = v.exact().filter(TextRenderer::fitsShort).map(Rational::toString)
+                .or(() -> v.exactSurd().filter(q -> fitsShort(q.rational()) && fitsShort(q.coefficient())).map(Object::toString))
+                .orElse("");
         return !exact.isEmpty() && exact.length() <= EXACT_LIMIT ? " = " + exact : " ≈ " + Numbers.decimal(v.value(), digits);
     }
 

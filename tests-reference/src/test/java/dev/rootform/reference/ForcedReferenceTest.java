@@ -91,6 +91,7 @@ class ForcedReferenceTest {
         }
         Report report = Pipeline.run(input, List.of(), null, 30, points);
         assertTrue(report.verified(), input + ": " + report.solution().checks());
+        assertTrue(report.values().stream().anyMatch(v -> v.exactSurd().isPresent()), "some value is an exact a + b√r");
         double[] x = new double[61];
         for (int n = 0; n <= 60; n++) {
             if (n < k) {

@@ -143,7 +143,7 @@ public final class Analyzer {
     private PointValue radicalValue(RadicalSolution r, Rational at) {
         Surd v = r.valueAt(at.toBigInteger().longValueExact());
         return new PointValue(at, v.toBigDecimal(new MathContext(digits)),
-                v.isRational() ? Optional.of(v.rational()) : Optional.empty());
+                v.isRational() ? Optional.of(v.rational()) : Optional.empty(), v.isRational() ? Optional.empty() : Optional.of(v));
     }
 
     private PointValue sequenceValue(ExactSolution s, Rational at) {
