@@ -36,21 +36,12 @@ record BasisCoefficient(String coefficient, String basis, Coefficient value) {
         FormulaWriter writer = new FormulaWriter(PlainNotation.INSTANCE, f);
         List<BasisCoefficient> out = new ArrayList<>();
         for (Term t : f.terms()) {
-            if (t instanceof Term.Exponential e) {
-                out.add(new BasisCoefficient(writer.coefficient(e.coefficient()),
-                        writer.term(new Term.Exponential(ONE, e.power(), e.rate())), e.coefficient()));
-            } else if (t instanceof Term.Oscillating o) {
-                out.add(new BasisCoefficient(writer.coefficient(o.cosine()),
-                        writer.term(new Term.Oscillating(ONE, ZERO, o.power(), o.growth(), o.angle())), o.cosine()));
-                out.add(new BasisCoefficient(writer.coefficient(o.sine()),
-                        writer.term(new Term.Oscillating(ZERO, ONE, o.power(), o.growth(), o.angle())), o.sine()));
-            } else if (t instanceof Term.RootSum r) {
-                for (int j = 0; j < r.coefficients().size(); j++) {
-                    List<Coefficient> unit = new ArrayList<>(Collections.nCopies(r.coefficients().size(), ZERO));
-                    unit.set(j, ONE);
-                    out.add(new BasisCoefficient(writer.coefficient(r.coefficients().get(j)),
-                            writer.term(new Term.RootSum(r.factor(), unit, r.power())), r.coefficients().get(j)));
-                }
+            List<Coefficient> coefficients = t.coefficients();
+            for (int j = 0; j < coefficients.size(); j++) {
+                List<Coefficient> unit = new ArrayList<>(Collections.nCopies(coefficients.size(), ZERO));
+                unit.set(j, ONE);
+                out.add(new BasisCoefficient(writer.coefficient(coefficients.get(j)), writer.term(t.withCoefficients(unit)),
+                        coefficients.get(j)));
             }
         }
         return out;

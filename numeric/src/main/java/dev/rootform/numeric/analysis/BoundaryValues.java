@@ -16,6 +16,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.IntFunction;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -111,11 +112,16 @@ final class BoundaryValues {
 
     /** (L f)(t) = Σ a_l f^(l)(t). */
     private static Apfloat applied(LinearEquation eq, ModeSum f, Apfloat t) {
+        return applied(eq, l -> f.derivative(l, t), t.precision());
+    }
+
+    /** Σ a_l·derivative(l) for the derivatives of some function at one point. */
+    private static Apfloat applied(LinearEquation eq, IntFunction<Apfloat> derivative, long precision) {
         Apfloat sum = Apfloat.ZERO;
         for (int l = 0; l <= eq.order(); l++) {
             Rational a = eq.coefficients().get(l);
             if (!a.isZero()) {
-                sum = sum.add(Decimals.toApfloat(a, t.precision()).multiply(f.derivative(l, t)));
+                sum = sum.add(Decimals.toApfloat(a, precision).multiply(derivative.apply(l)));
             }
         }
         return sum;
@@ -264,11 +270,7 @@ final class BoundaryValues {
         for (String p : RESIDUAL_POINTS) {
             Apfloat t = new Apfloat(p, precision);
             Apfloat g = forcing(eq, t, precision);
-            Apfloat ly = Apfloat.ZERO;
-            for (int l = 0; l <= eq.order(); l++) {
-                ly = ly.add(Decimals.toApfloat(eq.coefficients().get(l), precision).multiply(derivative(l, t)));
-            }
-            Apfloat residual = ApfloatMath.abs(ly.subtract(g));
+            Apfloat residual = ApfloatMath.abs(applied(eq, l -> derivative(l, t), precision).subtract(g));
             Apfloat relative = residual.divide(ApfloatMath.abs(g).add(new Apfloat(1, precision)));
             worst = relative.compareTo(worst) > 0 ? relative : worst;
         }

@@ -49,4 +49,22 @@ public final class Cyclotomic {
         }
         return m > 1 ? result - result / m : result;
     }
+
+    /** N such that e^{iπq} is a primitive N-th root of unity: q = r/s gives N = 2s/gcd(r, 2s). */
+    public static int orderOfPiMultiple(Rational q) {
+        java.math.BigInteger r = q.numerator().abs();
+        java.math.BigInteger twoS = q.denominator().shiftLeft(1);
+        return twoS.divide(r.gcd(twoS)).intValueExact();
+    }
+
+    /** Φ_N = (x^N - 1)/Π_{d | N, d < N} Φ_d. */
+    public static RationalPolynomial polynomial(int n) {
+        RationalPolynomial p = RationalPolynomial.monomial(Rational.ONE, n).subtract(RationalPolynomial.ONE);
+        for (int d = 1; d < n; d++) {
+            if (n % d == 0) {
+                p = p.divide(polynomial(d));
+            }
+        }
+        return p;
+    }
 }

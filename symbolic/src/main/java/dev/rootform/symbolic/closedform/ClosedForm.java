@@ -58,20 +58,10 @@ public record ClosedForm(Domain domain, String function, String variable, Ration
      * numerically, rounded to rationals for generated code); the others stay free.
      */
     public ClosedForm withConstantValues(java.util.Map<String, Rational> values) {
-        java.util.function.UnaryOperator<Coefficient> fill = c -> c instanceof Coefficient.Free f && values.containsKey(f.name())
-                ? new Coefficient.Exact(Surd.of(values.get(f.name()))) : c;
-        List<Term> filled = new java.util.ArrayList<>();
-        for (Term t : terms) {
-            if (t instanceof Term.Exponential e) {
-                filled.add(new Term.Exponential(fill.apply(e.coefficient()), e.power(), e.rate()));
-            } else if (t instanceof Term.Oscillating o) {
-                filled.add(new Term.Oscillating(fill.apply(o.cosine()), fill.apply(o.sine()), o.power(), o.growth(), o.angle()));
-            } else if (t instanceof Term.RootSum r) {
-                filled.add(new Term.RootSum(r.factor(), r.coefficients().stream().map(fill).toList(), r.power()));
-            } else {
-                throw new AssertionError(t);
-            }
-        }
+        List<Term> filled = terms.stream().map(t -> t.withCoefficients(t.coefficients().stream()
+                .map(c -> c instanceof Coefficient.Free f && values.containsKey(f.name())
+                        ? new Coefficient.Exact(Surd.of(values.get(f.name()))) : c)
+                .toList())).toList();
         List<String> free = freeConstants.stream().filter(n -> !values.containsKey(n)).toList();
         return new ClosedForm(domain, function, variable, origin, validFrom, leadingValues, filled, free, particularFrom);
     }

@@ -14,11 +14,32 @@ public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.Ro
     /** The power i of the factor v^i. */
     int power();
 
+    /** The coefficients of the term, in order (cos before sin; α^0, α^1, … for a root sum). */
+    List<Coefficient> coefficients();
+
+    /** The same term with other coefficients, in the order of {@link #coefficients()}. */
+    Term withCoefficients(List<Coefficient> replacement);
+
+    /** True when every coefficient is an exact zero (the term can be left out). */
+    default boolean vanishes() {
+        return coefficients().stream().allMatch(Coefficient::isZero);
+    }
+
     /** coefficient·v^power·e^{rate·v} (differential) or coefficient·v^power·rate^v (difference). */
     record Exponential(Coefficient coefficient, int power, Surd rate) implements Term {
         public Exponential {
             Objects.requireNonNull(coefficient, "coefficient");
             Objects.requireNonNull(rate, "rate");
+        }
+
+        @Override
+        public List<Coefficient> coefficients() {
+            return List.of(coefficient);
+        }
+
+        @Override
+        public Term withCoefficients(List<Coefficient> replacement) {
+            return new Exponential(replacement.get(0), power, rate);
         }
     }
 
@@ -34,6 +55,16 @@ public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.Ro
             Objects.requireNonNull(growth, "growth");
             Objects.requireNonNull(angle, "angle");
         }
+
+        @Override
+        public List<Coefficient> coefficients() {
+            return List.of(cosine, sine);
+        }
+
+        @Override
+        public Term withCoefficients(List<Coefficient> replacement) {
+            return new Oscillating(replacement.get(0), replacement.get(1), power, growth, angle);
+        }
     }
 
     /**
@@ -44,6 +75,11 @@ public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.Ro
         public RootSum {
             Objects.requireNonNull(factor, "factor");
             coefficients = List.copyOf(coefficients);
+        }
+
+        @Override
+        public Term withCoefficients(List<Coefficient> replacement) {
+            return new RootSum(factor, replacement, power);
         }
     }
 }

@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.solve;
 
+import dev.rootform.symbolic.algebra.Cyclotomic;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
@@ -7,7 +8,6 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.parse.InputException;
-import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
@@ -75,7 +75,7 @@ final class Annihilator {
             throw new InputException("the frequency " + t.frequency() + " of a recurrence's forcing is not a rational "
                     + "multiple of π, so it has no annihilator over the rationals; not supported", "", -1);
         }
-        RationalPolynomial phi = cyclotomic(rootOfUnityOrder(t.frequency()));
+        RationalPolynomial phi = Cyclotomic.polynomial(Cyclotomic.orderOfPiMultiple(t.frequency()));
         // roots a·ζ: Φ_N(λ/a)·a^deg, coefficient j scaled by a^(deg - j)
         int d = phi.degree();
         Rational[] c = new Rational[d + 1];
@@ -83,23 +83,5 @@ final class Annihilator {
             c[j] = phi.coefficient(j).multiply(a.pow(d - j));
         }
         return RationalPolynomial.of(c);
-    }
-
-    /** N such that e^{iπq} is a primitive N-th root of unity: q = r/s gives N = 2s/gcd(r, 2s). */
-    static int rootOfUnityOrder(Rational q) {
-        BigInteger r = q.numerator().abs();
-        BigInteger twoS = q.denominator().shiftLeft(1);
-        return twoS.divide(r.gcd(twoS)).intValueExact();
-    }
-
-    /** Φ_N = (x^N - 1)/Π_{d | N, d < N} Φ_d. */
-    static RationalPolynomial cyclotomic(int n) {
-        RationalPolynomial p = RationalPolynomial.monomial(Rational.ONE, n).subtract(RationalPolynomial.ONE);
-        for (int d = 1; d < n; d++) {
-            if (n % d == 0) {
-                p = p.divide(cyclotomic(d));
-            }
-        }
-        return p;
     }
 }

@@ -61,8 +61,8 @@ final class Presenter {
                 (i < homogeneous ? transients : particular).addAll(terms);
             }
         }
-        transients.removeIf(Presenter::vanishes);
-        particular.removeIf(Presenter::vanishes);
+        transients.removeIf(Term::vanishes);
+        particular.removeIf(Term::vanishes);
         List<Term> all = new ArrayList<>(transients);
         all.addAll(particular);
         return new ClosedForm(eq.domain(), eq.function(), eq.variable(), s.origin(), s.validFrom(),
@@ -243,18 +243,5 @@ final class Presenter {
 
     private static Coefficient exact(Surd s) {
         return new Coefficient.Exact(s);
-    }
-
-    private static boolean vanishes(Term t) {
-        if (t instanceof Term.Exponential e) {
-            return e.coefficient().isZero();
-        }
-        if (t instanceof Term.Oscillating o) {
-            return o.cosine().isZero() && o.sine().isZero();
-        }
-        if (t instanceof Term.RootSum r) {
-            return r.coefficients().stream().allMatch(Coefficient::isZero);
-        }
-        throw new AssertionError(t);
     }
 }
