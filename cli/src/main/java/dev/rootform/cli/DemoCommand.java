@@ -1,8 +1,11 @@
 package dev.rootform.cli;
 
+import dev.rootform.api.Options;
+import dev.rootform.api.Result;
+import dev.rootform.api.Rootform;
+import dev.rootform.api.SolveRequest;
 import dev.rootform.export.Report;
 import dev.rootform.export.TextRenderer;
-import dev.rootform.symbolic.algebra.Rational;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -37,6 +40,9 @@ final class DemoCommand implements Callable<Integer> {
             new Example("Shade-net ridge wire between two posts 4 m apart, small-sag model (boundary values)",
                     "y''(x) - 0.01y(x) = 0.05; y(0) = 0; y(4) = 0", "2"));
 
+    /** Significant digits of the demo's values. */
+    static final int DIGITS = 20;
+
     @Spec
     CommandSpec spec;
 
@@ -45,13 +51,14 @@ final class DemoCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         boolean allVerified = true;
         for (Example e : EXAMPLES) {
-            List<Rational> points = Points.parse(e.valuesAt());
-            Report report = Pipeline.run(e.input(), List.of(), null, 20, points);
+            Options options = Options.builder().digits(DIGITS).points(e.valuesAt().split(",")).build();
+            Result result = Rootform.solve(SolveRequest.of(e.input()).with(options));
+            Report report = result.answer().orElseThrow(() -> new IllegalStateException(e.input() + ": " + result));
             out.println("== " + e.title());
             out.println("   rootform solve \"" + e.input() + "\" --values-at " + e.valuesAt());
             out.println();
             out.println(TextRenderer.render(report));
-            allVerified &= report.verified();
+            allVerified &= result instanceof Result.Solved;
         }
         out.flush();
         return allVerified ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;

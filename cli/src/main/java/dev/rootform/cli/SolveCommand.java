@@ -1,15 +1,15 @@
 package dev.rootform.cli;
 
-import dev.rootform.export.CRenderer;
-import dev.rootform.export.CSource;
+import dev.rootform.api.Exporters;
+import dev.rootform.api.Options;
+import dev.rootform.api.Result;
+import dev.rootform.api.Rootform;
+import dev.rootform.api.SolveRequest;
+import dev.rootform.export.CodeNames;
+import dev.rootform.export.Exporter;
 import dev.rootform.export.Identifiers;
-import dev.rootform.export.JavaRenderer;
-import dev.rootform.export.JsonRenderer;
-import dev.rootform.export.LatexRenderer;
-import dev.rootform.export.MathMlRenderer;
+import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
-import dev.rootform.export.TextRenderer;
-import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.symbolic.parse.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -17,6 +17,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -31,9 +32,6 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "solve", description = "Solve a linear constant-coefficient difference or differential equation exactly.",
         mixinStandardHelpOptions = true, sortOptions = false)
 final class SolveCommand implements Callable<Integer> {
-    /** Formats the command accepts. */
-    enum Format { text, json, latex, mathml, java, c }
-
     @Spec
     CommandSpec spec;
 
@@ -48,7 +46,7 @@ final class SolveCommand implements Callable<Integer> {
     String variable;
 
     @Option(names = "--digits", paramLabel = "N", description = "Significant digits of numeric output (default ${DEFAULT-VALUE}).")
-    int digits = Analyzer.DEFAULT_DIGITS;
+    int digits = Options.DEFAULT_DIGITS;
 
     @Option(names = "--values-at", paramLabel = "LIST", description = "Comma-separated points at which to print the solution's value, e.g. 0,10,1e3.")
     String valuesAt;
@@ -56,8 +54,9 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--numeric", description = "Show the constants and roots as decimals to --digits instead of exact forms.")
     boolean numeric;
 
-    @Option(names = "--format", paramLabel = "FORMAT", description = "Output format: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
-    Format format = Format.text;
+    @Option(names = "--format", paramLabel = "FORMAT", completionCandidates = FormatNames.class,
+            description = "Output format: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
+    String format = "text";
 
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write the answer to FILE instead of standard output.")
     Path output;
@@ -66,10 +65,10 @@ final class SolveCommand implements Callable<Integer> {
     String packageName;
 
     @Option(names = "--class", paramLabel = "NAME", description = "Name of the generated Java class (default ${DEFAULT-VALUE}).")
-    String className = "Solution";
+    String className = CodeNames.DEFAULT_CLASS;
 
     @Option(names = "--function", paramLabel = "NAME", description = "Name of the generated C function (default ${DEFAULT-VALUE}).")
-    String function = "rootform_value";
+    String function = CodeNames.DEFAULT_FUNCTION;
 
     @Option(names = "--header", paramLabel = "FILE", description = "Write the C header to FILE (the source, on stdout or -o, includes it).")
     Path header;
@@ -82,62 +81,59 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
         try {
-            if (digits < 1 || digits > 10_000) {
-                throw new InputException("--digits " + digits + " is out of range 1..10000", "", -1);
+            if (digits < 1 || digits > Options.MAX_DIGITS) {
+                throw new InputException("--digits " + digits + " is out of range 1.." + Options.MAX_DIGITS, "", -1);
             }
-            validateNames();
+            Exporter exporter = Exporters.byName(format).orElseThrow(() -> new InputException(
+                    "--format " + format + " is not one of " + String.join(", ", Exporters.names()), "", -1));
+            CodeNames names = codeNames();
             if (timeLimit < 1) {
                 throw new InputException("--time-limit " + timeLimit + " must be at least 1 second", "", -1);
             }
-            Report report = Budget.within(timeLimit,
-                    () -> Pipeline.run(input, given, variable, digits, Points.parse(valuesAt), numeric));
-            write(output, render(report));
-            return report.verified() ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;
+            Options options = Options.builder().digits(digits).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
+                    .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable).build();
+            Result result = Rootform.solve(SolveRequest.of(input, given).with(options));
+            Optional<Report> answer = result.answer();
+            if (answer.isEmpty()) {
+                err.println(Diagnostics.describe(result));
+                err.flush();
+                return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+            }
+            Rendering rendering = exporter.render(answer.get(), names);
+            if (header != null) {
+                write(header, rendering.header().orElseThrow());
+            }
+            write(output, rendering.text());
+            return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
         } catch (InputException e) {
             err.println(Diagnostics.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;
-        } catch (Budget.Exhausted e) {
-            err.println("rootform: " + e.getMessage());
-            err.flush();
-            return ExitCode.INTERNAL;
         }
     }
 
     /** Checks the code-naming options before any work, so a bad name fails fast. */
-    private void validateNames() {
+    private CodeNames codeNames() {
         Identifiers.javaClass(className);
         if (packageName != null) {
             Identifiers.javaPackage(packageName);
         }
         Identifiers.cFunction("--function", function);
         if (header != null) {
-            if (format != Format.c) {
+            if (!format.equals("c")) {
                 throw new InputException("--header is for --format c", "", -1);
             }
             Identifiers.cHeader(header.getFileName().toString());
         }
+        return new CodeNames(Optional.ofNullable(packageName), className, function,
+                Optional.ofNullable(header).map(h -> h.getFileName().toString()));
     }
 
-    /** The answer in the chosen format; for C with --header, the header is written here. */
-    private String render(Report report) throws IOException {
-        switch (format) {
-            case json:
-                return JsonRenderer.render(report);
-            case latex:
-                return LatexRenderer.render(report);
-            case mathml:
-                return MathMlRenderer.render(report);
-            case java:
-                return JavaRenderer.render(report, packageName, className);
-            case c:
-                CSource c = CRenderer.render(report, function, Optional.ofNullable(header).map(h -> h.getFileName().toString()));
-                if (header != null) {
-                    write(header, c.header().orElseThrow());
-                }
-                return c.source();
-            default:
-                return TextRenderer.render(report);
+    /** The format names, for the help text. */
+    static final class FormatNames implements Iterable<String> {
+        @Override
+        public java.util.Iterator<String> iterator() {
+            return Exporters.names().iterator();
         }
     }
 

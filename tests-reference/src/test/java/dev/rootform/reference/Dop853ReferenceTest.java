@@ -3,7 +3,6 @@ package dev.rootform.reference;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.rootform.cli.Pipeline;
 import dev.rootform.export.Report;
 import dev.rootform.numeric.check.OdeReference;
 import dev.rootform.symbolic.algebra.Rational;
@@ -27,7 +26,7 @@ class Dop853ReferenceTest {
         Problem problem = ProblemParser.parse(input, List.of(), null);
         Rational t0 = problem.conditions().get(0).at();
         List<Rational> points = OFFSETS.stream().map(t0::add).collect(Collectors.toList());
-        Report report = Pipeline.run(input, List.of(), null, 25, points);
+        Report report = Answers.report(input, 25, points);
         assertTrue(report.verified(), input);
         assertTrue(report.solution().roots().stream().anyMatch(r -> r instanceof ExactRoot.Implicit),
                 description + ": an irreducible factor of degree ≥ 3 is expected");

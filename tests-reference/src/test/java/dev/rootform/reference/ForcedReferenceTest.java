@@ -3,7 +3,6 @@ package dev.rootform.reference;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.rootform.cli.Pipeline;
 import dev.rootform.export.Report;
 import dev.rootform.symbolic.algebra.Rational;
 import java.util.ArrayList;
@@ -51,7 +50,7 @@ class ForcedReferenceTest {
         for (long n = 0; n <= 60; n += 3) {
             points.add(Rational.of(n));
         }
-        Report report = Pipeline.run(input, List.of(), null, 30, points);
+        Report report = Answers.report(input, 30, points);
         assertTrue(report.verified(), input + ": " + report.solution().checks());
         for (int i = 0; i < points.size(); i++) {
             long n = points.get(i).toBigInteger().longValueExact();
@@ -89,7 +88,7 @@ class ForcedReferenceTest {
         for (int n = 0; n <= 60; n++) {
             points.add(Rational.of(n));
         }
-        Report report = Pipeline.run(input, List.of(), null, 30, points);
+        Report report = Answers.report(input, 30, points);
         assertTrue(report.verified(), input + ": " + report.solution().checks());
         assertTrue(report.values().stream().anyMatch(v -> v.exactSurd().isPresent()), "some value is an exact a + b√r");
         double[] x = new double[61];
@@ -140,7 +139,7 @@ class ForcedReferenceTest {
     @MethodSource("functions")
     void functionMatchesPublishedFormula(String input, DoubleUnaryOperator known) {
         List<Rational> points = List.of(Rational.of(1, 3), Rational.ONE, Rational.of(5, 2), Rational.of(6));
-        Report report = Pipeline.run(input, List.of(), null, 25, points);
+        Report report = Answers.report(input, 25, points);
         assertTrue(report.verified(), input + ": " + report.solution().checks() + report.numericChecks());
         for (int i = 0; i < points.size(); i++) {
             double t = points.get(i).doubleValue();
@@ -151,7 +150,7 @@ class ForcedReferenceTest {
 
     @Test
     void stepResponseSplitsIntoTransientAndSteadyParts() {
-        Report report = Pipeline.run("q'' + 3q' + 2q = 5; q(0) = 0; q'(0) = 0", List.of(), null, 20, List.of());
+        Report report = Answers.report("q'' + 3q' + 2q = 5; q(0) = 0; q'(0) = 0", 20, List.of());
         var form = report.solution().closedForm();
         assertEquals(2, form.transientTerms().size());
         assertEquals(1, form.particularTerms().size());
@@ -161,7 +160,7 @@ class ForcedReferenceTest {
     void steadyStateGainIsTheFrequencyResponse() {
         // |H(iω)| = 1/|χ(iω)| for y'' + 3y' + 2y = 2 sin 3t: χ(3i) = -7 + 9i, gain 1/√130, phase -arg χ(3i)
         // (common practice: frequency response of a stable LTI system)
-        Report report = Pipeline.run("y'' + 3y' + 2y = 2sin(3t); y(0) = 0; y'(0) = 0", List.of(), null, 20, List.of());
+        Report report = Answers.report("y'' + 3y' + 2y = 2sin(3t); y(0) = 0; y'(0) = 0", 20, List.of());
         assertEquals(1, report.steadyStates().size());
         assertEquals(1 / Math.sqrt(130), report.steadyStates().get(0).gain().doubleValue(), 1e-15);
         assertEquals(-Math.toDegrees(Math.atan2(9, -7)), report.steadyStates().get(0).phaseDegrees().doubleValue(), 1e-12);
@@ -169,7 +168,7 @@ class ForcedReferenceTest {
 
     @Test
     void unstableSystemHasNoSteadyState() {
-        Report report = Pipeline.run("y'' - y = sin(t); y(0) = 0; y'(0) = 0", List.of(), null, 20, List.of());
+        Report report = Answers.report("y'' - y = sin(t); y(0) = 0; y'(0) = 0", 20, List.of());
         assertTrue(report.steadyStates().isEmpty());
     }
 }

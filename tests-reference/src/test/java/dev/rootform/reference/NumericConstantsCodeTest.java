@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.rootform.cli.Pipeline;
 import dev.rootform.export.JavaRenderer;
 import dev.rootform.export.Report;
 import java.lang.reflect.Method;
@@ -42,7 +41,7 @@ class NumericConstantsCodeTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("cases")
     void generatedJavaMatchesTheKnownSolution(String input, DoubleUnaryOperator known) throws Exception {
-        Report report = Pipeline.run(input, List.of(), null, 30, List.of());
+        Report report = Answers.report(input, 30, List.of());
         String source = JavaRenderer.render(report, "gen", "Numeric");
         assertTrue(source.contains("Constants fixed numerically"), source);
         Path gen = Files.createDirectories(dir.resolve("gen"));

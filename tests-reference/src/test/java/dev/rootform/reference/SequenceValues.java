@@ -2,7 +2,6 @@ package dev.rootform.reference;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.rootform.cli.Pipeline;
 import dev.rootform.export.Report;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
@@ -19,7 +18,7 @@ final class SequenceValues {
     /** Solves {@code input}, asserts the answer is verified, and returns its exact values at 0 … count−1. */
     static List<Rational> of(String input, int count) {
         List<Rational> points = IntStream.range(0, count).mapToObj(Rational::of).collect(Collectors.toList());
-        Report report = Pipeline.run(input, List.of(), null, 20, points);
+        Report report = Answers.report(input, 20, points);
         assertTrue(report.verified(), input + ": " + report.solution().checks());
         return report.values().stream().map(PointValue::exact).map(Optional::orElseThrow).collect(Collectors.toList());
     }

@@ -1,7 +1,6 @@
 package dev.rootform.numeric.analysis;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.parse.InputException;
 import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
 import java.util.HashMap;
@@ -24,13 +23,13 @@ final class BoundarySingularity {
     /** A kernel entry within 10^-(working - 10) of a multiple of 1/60 is taken as that rational. */
     private static final int SMALL_DENOMINATORS = 60;
 
-    static InputException explain(Apfloat[][] a, int[] pivotRow, int rank, Apfloat tiny, Apfloat[] scales,
+    static ConditionsException explain(Apfloat[][] a, int[] pivotRow, int rank, Apfloat tiny, Apfloat[] scales,
             long working, Solution solution, List<String> constants) {
         int k = a.length;
         String digits = " (singular to " + (working - 10) + " digits)";
         for (int r = rank; r < k; r++) {
             if (ApfloatMath.abs(a[r][k]).compareTo(tiny.multiply(scales[r])) > 0) {
-                return new InputException("the boundary conditions contradict each other: no solution meets them all" + digits, "", -1);
+                return ConditionsException.contradictory("the boundary conditions contradict each other: no solution meets them all" + digits);
             }
         }
         int free = 0;
@@ -59,9 +58,9 @@ final class BoundarySingularity {
         }
         String message = "the boundary conditions leave a solution free" + digits;
         if (exact.size() == k) {
-            return new ConditionsException(message, solution.general().withConstantValues(exact));
+            return ConditionsException.underdetermined(message, solution.general().withConstantValues(exact));
         }
-        return new InputException(message + ": adding any multiple of the homogeneous solution with "
-                + combination + " keeps every condition", "", -1);
+        return ConditionsException.underdetermined(message + ": adding any multiple of the homogeneous solution with "
+                + combination + " keeps every condition", null);
     }
 }

@@ -56,7 +56,7 @@ public final class ConditionFitter {
         }
         LinearSystem.Result result = LinearSystem.solve(rows, rhs);
         if (result.certificate() != null) {
-            throw new ConditionsException(inconsistency(equation, conditions, rhs, result.certificate()), null);
+            throw ConditionsException.contradictory(inconsistency(equation, conditions, rhs, result.certificate()));
         }
         if (result.kernel() != null) {
             throw new UnderdeterminedConditions("the conditions do not determine the solution: only "

@@ -149,7 +149,7 @@ public final class Solver {
         } catch (UnderdeterminedConditions e) {
             ExactSolution free = ExactSolver.solve(eq.homogeneous(), ForcingPart.RATIONAL, mu.polynomial(), mu.factors(),
                     e.freeState());
-            throw new ConditionsException(e.getMessage(), Presenter.fitted(free, mu.characteristic()));
+            throw ConditionsException.underdetermined(e.getMessage(), Presenter.fitted(free, mu.characteristic()));
         }
     }
 

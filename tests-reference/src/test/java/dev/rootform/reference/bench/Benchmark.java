@@ -1,6 +1,6 @@
 package dev.rootform.reference.bench;
 
-import dev.rootform.cli.Pipeline;
+import dev.rootform.reference.Answers;
 import dev.rootform.export.Report;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;
@@ -127,7 +127,7 @@ public final class Benchmark {
     }
 
     private static Report solve(GeneratedProblem g) {
-        return Pipeline.run(g.text(), List.of(), null, 20, points(g));
+        return Answers.report(g.text(), 20, points(g));
     }
 
     /** Two indices past every condition (sequences) or two times (functions) to evaluate at. */

@@ -1,0 +1,70 @@
+package dev.rootform.api;
+
+import dev.rootform.export.CRenderer;
+import dev.rootform.export.CSource;
+import dev.rootform.export.CodeNames;
+import dev.rootform.export.Exporter;
+import dev.rootform.export.JavaRenderer;
+import dev.rootform.export.JsonRenderer;
+import dev.rootform.export.LatexRenderer;
+import dev.rootform.export.MathMlRenderer;
+import dev.rootform.export.Rendering;
+import dev.rootform.export.Report;
+import dev.rootform.export.TextRenderer;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.function.BiFunction;
+
+/**
+ * The exporters by format name: {@code text}, {@code json}, {@code latex}, {@code mathml},
+ * {@code java}, {@code c}.
+ *
+ * <pre>{@code
+ * String json = Exporters.byName("json").orElseThrow().render(report, CodeNames.defaults()).text();
+ * }</pre>
+ *
+ * @since 0.2
+ */
+public final class Exporters {
+    private static final Map<String, Exporter> BY_NAME = index(List.of(
+            new Named("text", (r, n) -> Rendering.of(TextRenderer.render(r))),
+            new Named("json", (r, n) -> Rendering.of(JsonRenderer.render(r))),
+            new Named("latex", (r, n) -> Rendering.of(LatexRenderer.render(r))),
+            new Named("mathml", (r, n) -> Rendering.of(MathMlRenderer.render(r))),
+            new Named("java", (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
+            new Named("c", Exporters::c)));
+
+    private Exporters() {
+    }
+
+    /** The exporter of {@code format}, or empty for an unknown name. */
+    public static Optional<Exporter> byName(String format) {
+        return Optional.ofNullable(BY_NAME.get(format));
+    }
+
+    /** Every format name, in a fixed order. */
+    public static List<String> names() {
+        return List.copyOf(BY_NAME.keySet());
+    }
+
+    private static Rendering c(Report report, CodeNames names) {
+        CSource c = CRenderer.render(report, names.function(), names.headerFile());
+        return new Rendering(c.source(), c.header());
+    }
+
+    private static Map<String, Exporter> index(List<Exporter> exporters) {
+        Map<String, Exporter> map = new LinkedHashMap<>();
+        exporters.forEach(e -> map.put(e.format(), e));
+        return java.util.Collections.unmodifiableMap(map);
+    }
+
+    /** An exporter that delegates to a renderer. */
+    private record Named(String format, BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
+        @Override
+        public Rendering render(Report report, CodeNames names) {
+            return renderer.apply(report, names);
+        }
+    }
+}
