@@ -47,6 +47,15 @@ final class Parser {
         return new Equality(left, right);
     }
 
+    /** Reads the whole range as one expression (no {@code =}). */
+    Node expressionOnly() {
+        Node node = expression();
+        if (!peek().is(Kind.END)) {
+            throw unexpected(peek());
+        }
+        return node;
+    }
+
     private Node expression() {
         int start = peek().start();
         Node node = term();
