@@ -110,6 +110,15 @@ public final class Analyzer {
         return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings());
     }
 
+    /**
+     * The values of exact roots to this analyzer's digits: exact forms rounded, implicit roots
+     * from certified enclosures; in the order given.
+     */
+    public List<RootApproximation> approximate(List<ExactRoot> roots) {
+        RootCache cache = new RootCache();
+        return roots.stream().map(r -> approximate(r, cache)).toList();
+    }
+
     /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
     private List<PointValue> samples(ExactSolution s, RootCache cache) {
         List<PointValue> samples = new ArrayList<>();

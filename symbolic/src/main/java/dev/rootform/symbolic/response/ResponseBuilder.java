@@ -47,8 +47,8 @@ public final class ResponseBuilder {
         Domain domain = h.domain();
         RationalFunction u = input instanceof Input.Impulse ? RationalFunction.ONE
                 : Transforms.of(input.terms(domain), domain).orElseThrow(() -> new InputException("input " + input.text()
-                        + ": its " + (domain == Domain.DIFFERENTIAL ? "Laplace" : "z-")
-                        + "transform is not rational over Q (a frequency that is a multiple of π in t, or cos θ"
+                        + ": its " + (domain == Domain.DIFFERENTIAL ? "Laplace transform" : "z-transform")
+                        + " is not rational over Q (a frequency that is a multiple of π in t, or cos θ"
                         + " irrational in n): out of scope for the response", input.text(), 0));
         RationalFunction y = h.value().multiply(u);
         return domain == Domain.DIFFERENTIAL ? continuous(h, input, y) : discrete(h, input, y);

@@ -21,8 +21,9 @@ import java.util.Optional;
  * @param zeroRoots their exact roots
  * @param dcGain H(0) for s, H(1) for z; empty when that point is a pole (infinite DC gain)
  * @param relativeDegree deg den − deg num: &gt; 0 strictly proper, 0 biproper, &lt; 0 improper
- * @param stable BIBO stable: every pole strictly in the left half-plane (s) or inside the unit
- *     circle (z), decided exactly ({@link StabilityTest})
+ * @param stable BIBO stable: proper (an improper H(s) differentiates, an improper H(z) is not
+ *     causal) and every pole strictly in the left half-plane (s) or inside the unit circle (z),
+ *     decided exactly ({@link StabilityTest})
  * @param hiddenModes the cancelled pole–zero pairs
  * @since 0.3
  */
@@ -60,7 +61,7 @@ public record TransferFacts(List<Factor> poles, List<ExactRoot> poleRoots, List<
         List<HiddenMode> hidden = h.cancelled().stream()
                 .map(f -> new HiddenMode(f, ExactRoots.of(List.of(f)), stable(h, f.polynomial()))).toList();
         return new TransferFacts(poles, ExactRoots.of(poles), zeros, ExactRoots.of(zeros), dc, h.value().relativeDegree(),
-                stable(h, h.value().denominator()), hidden);
+                h.value().isProper() && stable(h, h.value().denominator()), hidden);
     }
 
     private static boolean stable(TransferFunction h, RationalPolynomial p) {

@@ -1,0 +1,64 @@
+package dev.rootform.export.code;
+
+import dev.rootform.export.CRenderer;
+import dev.rootform.export.CSource;
+import dev.rootform.export.CodeHeader;
+import dev.rootform.export.JavaRenderer;
+import dev.rootform.export.document.ResponseReport;
+import dev.rootform.symbolic.response.Impulse;
+import dev.rootform.symbolic.transfer.TransferFunction;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.stream.Collectors;
+
+/**
+ * Java or C that evaluates a response: the solve answer's generated code for the solved problem,
+ * whose opening comment also names the transfer function and the input and says what the
+ * evaluator leaves out (the time before the input, impulses at t = 0).
+ *
+ * @since 0.3
+ */
+public final class ResponseCode {
+    private ResponseCode() {
+    }
+
+    /** Java source; see {@link JavaRenderer#render}. */
+    public static String java(ResponseReport r, String packageName, String className) {
+        return withLines(JavaRenderer.render(r.response(), packageName, className), lines(r));
+    }
+
+    /** C source and optional header; see {@link CRenderer#render}. */
+    public static CSource c(ResponseReport r, String function, Optional<String> headerFile) {
+        CSource c = CRenderer.render(r.response(), function, headerFile);
+        List<String> lines = lines(r);
+        return new CSource(withLines(c.source(), lines), c.header().map(h -> withLines(h, lines)));
+    }
+
+    private static List<String> lines(ResponseReport r) {
+        TransferFunction h = r.transfer();
+        List<String> lines = new ArrayList<>();
+        lines.add("Response of " + h.signature() + " = " + h.value().toString(h.variable()) + " to the input "
+                + r.plan().input().text() + " from zero initial state; the output is 0 before "
+                + (h.continuous() ? "t = 0" : "n = 0") + ". Solved as: " + r.problem());
+        if (h.continuous()) {
+            lines.add("The evaluator gives y(t) for t > 0" + (r.plan().impulses().isEmpty() ? "."
+                    : "; the impulses " + r.plan().impulses().stream().map(i -> impulse(i)).collect(Collectors.joining(" + "))
+                            + " at t = 0 are not part of it."));
+        }
+        return CodeHeader.wrap(lines);
+    }
+
+    private static String impulse(Impulse i) {
+        return i.coefficient() + "*delta" + (i.order() == 0 ? "" : "^(" + i.order() + ")") + "(t)";
+    }
+
+    /** The code with the lines added at the top of its opening comment. */
+    private static String withLines(String code, List<String> lines) {
+        String opening = "/*\n";
+        if (!code.startsWith(opening)) {
+            throw new IllegalStateException("generated code does not open with a comment");
+        }
+        return opening + lines.stream().map(l -> " * " + l + "\n").collect(Collectors.joining()) + code.substring(opening.length());
+    }
+}
