@@ -4,12 +4,14 @@ import dev.rootform.export.Report;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.Analyzer;
+import dev.rootform.numeric.analysis.RootApproximation;
 import dev.rootform.numeric.response.Frequency;
 import dev.rootform.numeric.response.FrequencySweep;
 import dev.rootform.numeric.response.StepFigureFinder;
 import dev.rootform.numeric.response.StepFigures;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.parse.InputException;
 import dev.rootform.symbolic.parse.TransferParser;
 import dev.rootform.symbolic.response.Input;
@@ -23,7 +25,10 @@ import dev.rootform.symbolic.solve.Solution;
 import dev.rootform.symbolic.solve.Solver;
 import dev.rootform.symbolic.transfer.TransferFunction;
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.Iterator;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Stream;
 
@@ -58,10 +63,9 @@ final class ResponseJob {
             Solution solution = withResponseParts(Solver.solve(plan.problem()), plan);
             Analysis analysis = new Analyzer(o.digits()).analyze(solution, points);
             Report report = new Report(solution, analysis, o.digits(), o.numeric());
-            Analyzer roots = new Analyzer(o.digits());
             Optional<StepFigures> figures = stepFigures(h, input, facts, solution, o.digits());
-            ResponseReport answer = new ResponseReport(request.transfer(), h, facts, roots.approximate(facts.poleRoots()),
-                    roots.approximate(facts.zeroRoots()), plan, report, SolveSyntax.relation(h), SolveSyntax.problem(plan.problem()),
+            ResponseReport answer = new ResponseReport(request.transfer(), h, facts, values(facts.poleRoots(), report),
+                    values(facts.zeroRoots(), report), plan, report, SolveSyntax.relation(h), SolveSyntax.problem(plan.problem()),
                     frequencies.isEmpty() ? List.of() : new FrequencySweep(h.value(), h.continuous(), o.digits()).at(frequencies),
                     figures, warnings(h, input, facts));
             if (answer.verified()) {
@@ -72,6 +76,15 @@ final class ResponseJob {
         } catch (InputException e) {
             return new ResponseResult.Unanswered(new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(), e.position()));
         }
+    }
+
+    /** The values of exact roots: those the solve report already has (the poles, mostly), the others computed. */
+    private static List<RootApproximation> values(List<ExactRoot> roots, Report report) {
+        Map<ExactRoot, RootApproximation> known = new HashMap<>();
+        report.roots().forEach(r -> known.put(r.root(), r));
+        List<ExactRoot> missing = roots.stream().filter(r -> !known.containsKey(r)).toList();
+        Iterator<RootApproximation> computed = new Analyzer(report.digits()).approximate(missing).iterator();
+        return roots.stream().map(r -> known.containsKey(r) ? known.get(r) : computed.next()).toList();
     }
 
     /** The solution with the inverse-transform check added and, when H has no poles, every term marked steady. */

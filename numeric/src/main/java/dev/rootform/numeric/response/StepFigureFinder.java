@@ -64,7 +64,7 @@ public final class StepFigureFinder {
             f[k] = table.value(k * h) / yInf;
             df[k] = table.derivative(k * h) / yInf;
         }
-        Refiner refiner = new Refiner(ModeSum.of(s, digits + GUARD_DIGITS), digits + GUARD_DIGITS);
+        Refiner refiner = new Refiner(ModeSum.of(s, digits + GUARD_DIGITS), digits + GUARD_DIGITS, digits);
         List<String> notes = new ArrayList<>();
         notes.add(String.format("crossings and peaks bracketed on a grid of %d points up to t = %.4g, where the decaying modes"
                 + " are below %.1f %% of the final value, and refined by bracketed Newton steps in %d-digit arithmetic",
@@ -283,21 +283,37 @@ public final class StepFigureFinder {
         private final MathContext mc;
         private final BigDecimal tolerance;
 
-        Refiner(ModeSum sum, int precision) {
+        /**
+         * @param precision working digits of the evaluations
+         * @param digits requested digits: iteration stops once a step is below 10^-(digits + 5)
+         *     relative, when Newton's quadratic convergence leaves an error of about its square
+         */
+        Refiner(ModeSum sum, int precision, int digits) {
             this.sum = sum;
             this.mc = new MathContext(precision);
-            this.tolerance = BigDecimal.ONE.movePointLeft(precision - 5);
+            this.tolerance = BigDecimal.ONE.movePointLeft(digits + 5);
         }
 
         BigDecimal value(int d, BigDecimal t) {
             return sum.derivativeAt(d, t);
         }
 
-        /** The root in [a, b], when y^(d) − target changes sign there at high precision. */
+        /**
+         * The root in [a, b] when y^(d) − target changes sign there at high precision; when the
+         * double scan put the sign change on the wrong side of a grid point (a root within rounding
+         * of it), in the bracket widened by its width on that side.
+         */
         Optional<BigDecimal> root(int d, Rational target, double a0, double b0) {
+            double w = b0 - a0;
+            return root(d, target, new BigDecimal(a0), new BigDecimal(b0))
+                    .or(() -> root(d, target, new BigDecimal(Math.max(0, a0 - w)), new BigDecimal(a0)))
+                    .or(() -> root(d, target, new BigDecimal(b0), new BigDecimal(b0 + w)));
+        }
+
+        private Optional<BigDecimal> root(int d, Rational target, BigDecimal left, BigDecimal right) {
             BigDecimal c = target.toBigDecimal(mc);
-            BigDecimal a = new BigDecimal(a0);
-            BigDecimal b = new BigDecimal(b0);
+            BigDecimal a = left;
+            BigDecimal b = right;
             int sa = value(d, a).subtract(c).signum();
             int sb = value(d, b).subtract(c).signum();
             if (sa == 0) {
