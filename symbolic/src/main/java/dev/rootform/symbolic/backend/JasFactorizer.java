@@ -32,6 +32,22 @@ public final class JasFactorizer {
     private static final GenPolynomialRing<BigInteger> RING =
             new GenPolynomialRing<>(BigInteger.ONE, 1, new String[] {"x"});
 
+    private static final int RECENT_SIZE = 64;
+    /**
+     * The most recently factored monic polynomials (a response factors its denominator for the
+     * transfer function's poles and again as the equation's characteristic polynomial); factoring
+     * runs outside the lock.
+     */
+    private static final Map<RationalPolynomial, List<Factor>> RECENT = java.util.Collections.synchronizedMap(
+            new java.util.LinkedHashMap<>(16, 0.75f, true) {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<RationalPolynomial, List<Factor>> eldest) {
+                    return size() > RECENT_SIZE;
+                }
+            });
+
     private JasFactorizer() {
     }
 
@@ -45,6 +61,17 @@ public final class JasFactorizer {
         if (p.degree() < 1) {
             throw new IllegalArgumentException("degree (" + p.degree() + ") must be >= 1");
         }
+        RationalPolynomial key = p.monic();
+        List<Factor> known = RECENT.get(key);
+        if (known != null) {
+            return known;
+        }
+        List<Factor> factors = factorMonic(key);
+        RECENT.put(key, factors);
+        return factors;
+    }
+
+    private static List<Factor> factorMonic(RationalPolynomial p) {
         List<Factor> factors = scaledBinomial(p).orElseGet(() -> factorsOf(p));
         factors = new ArrayList<>(factors);
         factors.sort(Comparator.comparingInt(Factor::degree).thenComparing(f -> f.polynomial().toString()));
