@@ -2,7 +2,7 @@ package dev.rootform.cli;
 
 import dev.rootform.export.Formulas;
 import dev.rootform.symbolic.closedform.ClosedForm;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.ConditionsException;
 
 /** Formats problems for stderr: one line naming the problem, then the input with a caret under the place. */

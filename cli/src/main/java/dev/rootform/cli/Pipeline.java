@@ -32,7 +32,7 @@ public final class Pipeline {
      * @param digits significant digits of numeric output
      * @param points where to evaluate the solution
      * @param numeric show constants and roots as decimals only
-     * @throws dev.rootform.symbolic.parse.InputException for bad or out-of-scope input
+     * @throws dev.rootform.symbolic.model.InputException for bad or out-of-scope input
      */
     public static Report run(String text, List<String> given, String variable, int digits, List<Rational> points,
             boolean numeric) {

@@ -10,7 +10,7 @@ import dev.rootform.export.MathMlRenderer;
 import dev.rootform.export.Report;
 import dev.rootform.export.TextRenderer;
 import dev.rootform.numeric.analysis.Analyzer;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;

@@ -18,7 +18,7 @@ public final class CRenderer {
     /**
      * @param function the function name (validated by {@link Identifiers#cFunction})
      * @param headerFile the header's file name (validated by {@link Identifiers#cHeader}), or empty for one file
-     * @throws dev.rootform.symbolic.parse.InputException for a general solution or a bad name
+     * @throws dev.rootform.symbolic.model.InputException for a general solution or a bad name
      */
     public static CSource render(Report r, String function, Optional<String> headerFile) {
         Identifiers.cFunction("--function", function);

@@ -3,7 +3,7 @@ package dev.rootform.export;
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;

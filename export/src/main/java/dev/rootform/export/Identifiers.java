@@ -1,6 +1,6 @@
 package dev.rootform.export;
 
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.util.Set;
 import javax.lang.model.SourceVersion;
 

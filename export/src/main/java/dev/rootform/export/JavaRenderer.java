@@ -85,7 +85,7 @@ public final class JavaRenderer {
     /**
      * @param packageName the package, or null/empty for none (validated by {@link Identifiers#javaPackage})
      * @param className the class name (validated by {@link Identifiers#javaClass})
-     * @throws dev.rootform.symbolic.parse.InputException for a general solution or a bad name
+     * @throws dev.rootform.symbolic.model.InputException for a general solution or a bad name
      */
     public static String render(Report r, String packageName, String className) {
         Identifiers.javaClass(className);

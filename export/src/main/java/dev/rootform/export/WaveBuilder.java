@@ -8,7 +8,7 @@ import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Domain;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;

@@ -9,7 +9,7 @@ import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Domain;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.RadicalSolution;

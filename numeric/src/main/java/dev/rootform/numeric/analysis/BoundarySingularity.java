@@ -1,7 +1,7 @@
 package dev.rootform.numeric.analysis;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
 import java.util.HashMap;

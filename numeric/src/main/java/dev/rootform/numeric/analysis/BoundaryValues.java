@@ -7,7 +7,7 @@ import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;

@@ -32,7 +32,7 @@ public final class Solver {
      * Solves a problem exactly: the fitted solution when conditions are given, else the general
      * solution with free constants C1..Ck (plus a particular solution for a forced equation).
      *
-     * @throws dev.rootform.symbolic.parse.InputException if the forcing has no exact annihilator or
+     * @throws dev.rootform.symbolic.model.InputException if the forcing has no exact annihilator or
      *     rational values, or the conditions are wrong in number, inconsistent or do not determine
      *     the solution
      */

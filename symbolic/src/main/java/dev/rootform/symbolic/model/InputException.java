@@ -1,9 +1,12 @@
-package dev.rootform.symbolic.parse;
+package dev.rootform.symbolic.model;
 
 /**
- * Input the tool cannot accept: a syntax error, an unknown name, or an equation outside the scope
- * (nonlinear, variable coefficients, non-integer shifts). Carries the offending text and the
- * 0-based position of the problem in it, so the caller can print a caret under it.
+ * The project's refusal of bad or out-of-scope input: a syntax error, an unknown name, an equation
+ * outside the scope (nonlinear, variable coefficients, non-integer shifts), or conditions the
+ * solver cannot accept. Carries the offending text and the 0-based position of the problem in it,
+ * so the caller can print a caret under it. It lives beside the problem model so that every layer
+ * that reads input (the parser, the solver, the command) can use it; the numeric and export layers
+ * do not throw it but offer precondition checks that return the refusal's message.
  *
  * @since 0.1
  */
