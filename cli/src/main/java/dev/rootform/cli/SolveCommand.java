@@ -94,7 +94,7 @@ final class SolveCommand implements Callable<Integer> {
             write(output, render(report));
             return report.verified() ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;
         } catch (InputException e) {
-            err.println(Diagnostics.describe(e));
+            err.println(ErrorLine.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;
         } catch (Budget.Exhausted e) {

@@ -91,7 +91,7 @@ final class FormulaWriter {
                     List.of(n.function("cos", angle), n.function("sin", angle)),
                     List.of(power(v, o.power()), oscillationGrowth(o.growth())), false);
         }
-        if (t instanceof Term.RootSum r) {
+        if (t instanceof Term.ConjugateSum r) {
             List<String> bases = new ArrayList<>();
             for (int j = 0; j < r.coefficients().size(); j++) {
                 bases.add(power(n.lambda(), j));
@@ -100,7 +100,7 @@ final class FormulaWriter {
                     ? n.power(n.name(EULER), n.implicit(n.lambda(), v))
                     : n.power(n.lambda(), v);
             return combination(r.coefficients(), bases, List.of(power(v, r.power()), root), true)
-                    .map(s -> new Signed(s.negative(), n.rootSum(polynomial(r.factor(), n.lambda()), s.body())));
+                    .map(s -> new Signed(s.negative(), n.conjugateSum(polynomial(r.factor(), n.lambda()), s.body())));
         }
         throw new AssertionError(t);
     }

@@ -66,7 +66,7 @@ final class LatexNotation implements Notation {
     }
 
     @Override
-    public String rootSum(String polynomial, String summand) {
+    public String conjugateSum(String polynomial, String summand) {
         return "\\sum_{" + polynomial + "=0} " + summand;
     }
 

@@ -68,7 +68,7 @@ final class MathMlNotation implements Notation {
     }
 
     @Override
-    public String rootSum(String polynomial, String summand) {
+    public String conjugateSum(String polynomial, String summand) {
         return "<munder><mo>&#x2211;</mo><mrow>" + polynomial + "<mo>=</mo><mn>0</mn></mrow></munder>" + summand;
     }
 

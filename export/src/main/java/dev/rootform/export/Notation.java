@@ -38,8 +38,8 @@ interface Notation {
     /** The joiner for a negative summand after the first. */
     String minus();
 
-    /** The sum of summand over the roots λ of polynomial. */
-    String rootSum(String polynomial, String summand);
+    /** The conjugate sum of summand over the roots λ of polynomial. */
+    String conjugateSum(String polynomial, String summand);
 
     /** The name of a free constant, such as C1. */
     String constant(String name);
@@ -47,7 +47,7 @@ interface Notation {
     /** The constant π. */
     String pi();
 
-    /** The bound variable λ of a root sum. */
+    /** The bound variable λ of a conjugate sum. */
     String lambda();
 
     /** A non-negative integer written in decimal digits; as is, unless the notation marks up numbers. */

@@ -64,7 +64,7 @@ final class PlainNotation implements Notation {
     }
 
     @Override
-    public String rootSum(String polynomial, String summand) {
+    public String conjugateSum(String polynomial, String summand) {
         return "Σ_{" + polynomial + " = 0} " + summand;
     }
 

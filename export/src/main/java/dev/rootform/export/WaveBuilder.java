@@ -21,7 +21,7 @@ import org.apfloat.ApfloatMath;
 /**
  * Turns the terms of a fitted {@link ClosedForm} into {@link Wave}s. Every constant is computed
  * from its exact form at {@link #DIGITS} significant digits and rounded once to the nearest double:
- * a·cos x + b·sin x becomes √(a²+b²)·cos(x − atan2(b, a)); a root sum over an irreducible factor
+ * a·cos x + b·sin x becomes √(a²+b²)·cos(x − atan2(b, a)); a conjugate sum over an irreducible factor
  * uses certified roots ({@link RootFinder}): a real root ρ gives c(ρ)·v^i·ρ^v (or e^{ρv}), a
  * conjugate pair α, ᾱ gives 2|c(α)|·v^i·|α|^v·cos(v·arg α + arg c(α)) (differential:
  * 2|c(α)|·v^i·e^{Re α·v}·cos(Im α·v + arg c(α))).
@@ -53,8 +53,8 @@ final class WaveBuilder {
                 Apcomplex c = new Apcomplex(exact(o.cosine()), exact(o.sine()).negate());
                 waves.add(new Wave(round(ApcomplexMath.abs(c)), o.power(), round(surd(o.growth())),
                         round(angle(o.angle())), round(ApcomplexMath.arg(c))));
-            } else if (t instanceof Term.RootSum r) {
-                rootSum(r, differential, waves);
+            } else if (t instanceof Term.ConjugateSum r) {
+                conjugateSum(r, differential, waves);
             } else {
                 throw new AssertionError(t);
             }
@@ -63,7 +63,7 @@ final class WaveBuilder {
         return waves.isEmpty() ? List.of(Wave.ZERO) : List.copyOf(waves);
     }
 
-    private static void rootSum(Term.RootSum r, boolean differential, List<Wave> out) {
+    private static void conjugateSum(Term.ConjugateSum r, boolean differential, List<Wave> out) {
         for (Enclosure z : new RootFinder(DIGITS).roots(r.factor())) {
             Apcomplex alpha = new Apcomplex(apfloat(z.re()), apfloat(z.im()));
             Apcomplex c = Apcomplex.ZERO;

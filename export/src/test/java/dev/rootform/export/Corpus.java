@@ -28,7 +28,7 @@ final class Corpus {
             "x[n+2] - 2x[n+1] + x[n] = 1; x[0] = 0; x[1] = 0",
             "x[n+1] = x[n]/2 + cos(pi n/3) + 2; x[0] = 1",
             "x[n+1] = x[n]/2 + cos(pi n/4) + 2; x[0] = 1");
-    /** Differential equations: complex, real, repeated, root sum, shifted origin; forced (resonant and not). */
+    /** Differential equations: complex, real, repeated, conjugate sum, shifted origin; forced (resonant and not). */
     static final List<String> FUNCTIONS = List.of(
             "y'' + 2y' + 5y = 0; y(0) = 1; y'(0) = 0",
             "y'' - y = 0; y(0) = 2; y'(0) = 1",

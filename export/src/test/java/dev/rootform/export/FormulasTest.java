@@ -76,7 +76,7 @@ class FormulasTest {
     }
 
     @Test
-    void rootSumOverAnIrreducibleCubic() {
+    void conjugateSumOverAnIrreducibleCubic() {
         ClosedForm f = differential(List.of(at(0, 1), derivativeAt(1, Rational.ZERO, 0), derivativeAt(2, Rational.ZERO, 0)),
                 -1, -1, 0, 1).closedForm();
         String latex = check("Σ_{λ^3 - λ - 1 = 0} (5/23 - 6/23·λ + 4/23·λ^2)·e^(λt)", f);

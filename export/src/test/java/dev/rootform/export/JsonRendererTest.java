@@ -53,7 +53,7 @@ class JsonRendererTest {
     }
 
     @Test
-    void oscillationAndRootSumConstants() throws Exception {
+    void oscillationAndConjugateSumConstants() throws Exception {
         JsonNode osc = parse(Fixtures.report(Fixtures.dampedOscillator(), List.of()));
         assertEquals("e^(-t)·sin(2t)", osc.at("/constants/1/basis").asText());
         assertEquals("1/2", osc.at("/constants/1/coefficient").asText());

@@ -39,7 +39,7 @@ public final class Diagnoser {
      */
     public Diagnostics diagnose(Solution solution, List<RootApproximation> roots, List<PointValue> samples) {
         LinearEquation eq = solution.problem().equation();
-        List<RootEntry> entries = RootEntry.of(solution.factors(), roots);
+        List<FactorRoot> entries = FactorRoot.of(solution.factors(), roots);
         Stability stability = new StabilityJudge(eq.domain(), digits).judge(entries);
         DominantMode dominant = new DominantMode(eq.domain(), solution.closedForm().variable(), digits);
         Growth growth = dominant.of(entries, solution.exact().map(Diagnoser::effectivePowers)

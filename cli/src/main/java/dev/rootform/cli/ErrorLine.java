@@ -6,8 +6,8 @@ import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.ConditionsException;
 
 /** Formats problems for stderr: one line naming the problem, then the input with a caret under the place. */
-final class Diagnostics {
-    private Diagnostics() {
+final class ErrorLine {
+    private ErrorLine() {
     }
 
     static String describe(InputException e) {

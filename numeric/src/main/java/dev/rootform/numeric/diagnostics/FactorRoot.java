@@ -5,8 +5,11 @@ import dev.rootform.symbolic.algebra.Factor;
 import java.util.ArrayList;
 import java.util.List;
 
-/** A root with the irreducible factor it belongs to, and its value in double precision (approximate). */
-record RootEntry(Factor factor, RootApproximation approximation) {
+/**
+ * A root of the characteristic polynomial with the irreducible factor it belongs to (and so its
+ * multiplicity), and its value in double precision (approximate).
+ */
+record FactorRoot(Factor factor, RootApproximation approximation) {
     double re() {
         return approximation.re().doubleValue();
     }
@@ -24,12 +27,12 @@ record RootEntry(Factor factor, RootApproximation approximation) {
     }
 
     /** Pairs each root with its factor; the roots come factor by factor, deg f of them per factor. */
-    static List<RootEntry> of(List<Factor> factors, List<RootApproximation> roots) {
-        List<RootEntry> entries = new ArrayList<>();
+    static List<FactorRoot> of(List<Factor> factors, List<RootApproximation> roots) {
+        List<FactorRoot> entries = new ArrayList<>();
         int next = 0;
         for (Factor f : factors) {
             for (int j = 0; j < f.degree(); j++) {
-                entries.add(new RootEntry(f, roots.get(next++)));
+                entries.add(new FactorRoot(f, roots.get(next++)));
             }
         }
         return entries;

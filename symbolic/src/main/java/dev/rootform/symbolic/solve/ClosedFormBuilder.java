@@ -18,16 +18,18 @@ import java.util.Optional;
 import java.util.function.Supplier;
 
 /**
- * Turns exact components into the real closed-form tree: linear factors give exponentials or
- * powers, quadratic factors give surd roots or (for complex pairs) cos/sin terms with no i, and
- * factors of degree &ge; 3 stay as sums over their roots. For f = x² + bx + c and
+ * Builds the real closed forms of a solve (fitted, general with free constants, general plus a
+ * particular solution) and lists the exact roots. Exact components become the real closed-form
+ * tree: linear factors give exponentials or powers, quadratic factors give surd roots or (for
+ * complex pairs) cos/sin terms with no i, and factors of degree &ge; 3 stay as conjugate sums over
+ * their roots. For f = x² + bx + c and
  * c(α) = p + qα: real roots (-b ± √D)/2 take coefficients p - qb/2 ± (q/2)√D; complex roots a ± iω
  * combine to 2(p + qa)·cos - 2qω·sin.
  *
  * @since 0.1
  */
-final class Presenter {
-    private Presenter() {
+final class ClosedFormBuilder {
+    private ClosedFormBuilder() {
     }
 
     /**
@@ -40,7 +42,7 @@ final class Presenter {
 
     /**
      * The fitted solution x = s + √r·radical (for a forcing with values in Q(√r)); a coefficient
-     * with a √r part is written as a surd a + b√r on an exponential, or as a root sum with surd
+     * with a √r part is written as a surd a + b√r on an exponential, or as a conjugate sum with surd
      * coefficients for a factor of degree &ge; 2 (whose own surds would otherwise mix with √r).
      */
     static ClosedForm fitted(ExactSolution s, Optional<RadicalSolution> radical, List<Factor> characteristic) {
@@ -69,7 +71,7 @@ final class Presenter {
                 s.leadingValues(), all, List.of(), transients.size());
     }
 
-    /** (c(α) + √r·d(α))·v^i·α^v as an exponential (linear f) or a root sum with surd coefficients. */
+    /** (c(α) + √r·d(α))·v^i·α^v as an exponential (linear f) or a conjugate sum with surd coefficients. */
     private static Term radicalTerm(RationalPolynomial f, int i, RationalPolynomial c, RationalPolynomial d, int r) {
         Rational radicand = Rational.of(r);
         if (f.degree() == 1) {
@@ -80,7 +82,7 @@ final class Presenter {
         for (int j = 0; j < f.degree(); j++) {
             cs.add(exact(Surd.of(c.coefficient(j), d.coefficient(j), radicand)));
         }
-        return new Term.RootSum(f, cs, i);
+        return new Term.ConjugateSum(f, cs, i);
     }
 
     /** The general solution: basis terms with free constants, followed by a particular solution's terms. */
@@ -181,7 +183,7 @@ final class Presenter {
             for (int j = 0; j <= c.degree(); j++) {
                 cs.add(exact(Surd.of(c.coefficient(j))));
             }
-            return List.of(new Term.RootSum(f, cs, i));
+            return List.of(new Term.ConjugateSum(f, cs, i));
         }
         Quadratic q = new Quadratic(f);
         Rational half = c.coefficient(1).multiply(Rational.of(1, 2));
@@ -205,7 +207,7 @@ final class Presenter {
             for (int j = 0; j < f.degree(); j++) {
                 cs.add(next.get());
             }
-            return List.of(new Term.RootSum(f, cs, i));
+            return List.of(new Term.ConjugateSum(f, cs, i));
         }
         Quadratic q = new Quadratic(f);
         if (q.real()) {
