@@ -37,7 +37,7 @@ public final class ConditionFitter {
      *     several points of a differential equation, or they are inconsistent or do not determine
      *     the solution
      */
-    public static InitialState fit(LinearEquation equation, RationalPolynomial operator, List<Condition> conditions,
+    static InitialState fit(LinearEquation equation, RationalPolynomial operator, List<Condition> conditions,
             ForcingPart part) {
         int k = equation.order();
         validate(equation, conditions);
@@ -73,7 +73,7 @@ public final class ConditionFitter {
      * @throws InputException if the conditions are at several points of a differential equation or
      *     at a non-integer index of a sequence
      */
-    public static List<List<Rational>> matrix(LinearEquation equation, List<Condition> conditions) {
+    static List<List<Rational>> matrix(LinearEquation equation, List<Condition> conditions) {
         return rows(equation, conditions, origin(equation.domain(), conditions), equation.characteristicPolynomial());
     }
 
