@@ -2,7 +2,7 @@ package dev.rootform.export;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.diagnostics.Mode;
 import dev.rootform.numeric.diagnostics.Stability;

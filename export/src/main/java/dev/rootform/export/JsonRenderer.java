@@ -5,7 +5,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.rootform.numeric.analysis.PointValue;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.ExactRoot;

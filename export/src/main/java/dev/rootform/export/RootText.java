@@ -1,6 +1,6 @@
 package dev.rootform.export;
 
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.closedform.Surd;
 

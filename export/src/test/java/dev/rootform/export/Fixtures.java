@@ -2,7 +2,7 @@ package dev.rootform.export;
 
 import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.PointValue;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Condition;

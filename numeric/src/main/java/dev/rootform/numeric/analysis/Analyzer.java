@@ -4,8 +4,10 @@ import dev.rootform.numeric.check.ForcingFunction;
 import dev.rootform.numeric.check.OdeReference;
 import dev.rootform.numeric.diagnostics.Diagnoser;
 import dev.rootform.numeric.diagnostics.Diagnostics;
+import dev.rootform.numeric.diagnostics.SampleValue;
 import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.numeric.roots.Enclosure;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Domain;
@@ -104,7 +106,8 @@ public final class Analyzer {
         }
         List<PointValue> samples = new ArrayList<>(values);
         exact.ifPresent(s -> samples.addAll(samples(s, cache)));
-        Diagnostics diagnostics = new Diagnoser(digits).diagnose(solution, roots, samples);
+        Diagnostics diagnostics = new Diagnoser(digits).diagnose(solution, roots,
+                samples.stream().map(v -> new SampleValue(v.at(), v.value())).toList());
         List<SteadyState> steady = diagnostics.stability().verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE
                 ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
         return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings());

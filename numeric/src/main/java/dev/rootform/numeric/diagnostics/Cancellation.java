@@ -1,6 +1,5 @@
 package dev.rootform.numeric.diagnostics;
 
-import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
@@ -28,10 +27,10 @@ final class Cancellation {
     }
 
     /** A warning for the worst sample point, when it loses more than {@link #WARN_DIGITS} digits. */
-    static Optional<String> warning(ExactSolution s, List<FactorRoot> roots, List<PointValue> samples) {
+    static Optional<String> warning(ExactSolution s, List<FactorRoot> roots, List<SampleValue> samples) {
         double worst = 0;
-        PointValue where = null;
-        for (PointValue p : samples) {
+        SampleValue where = null;
+        for (SampleValue p : samples) {
             if (p.value().signum() == 0) {
                 continue;
             }

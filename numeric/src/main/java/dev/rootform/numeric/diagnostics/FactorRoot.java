@@ -1,6 +1,6 @@
 package dev.rootform.numeric.diagnostics;
 
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Factor;
 import java.util.ArrayList;
 import java.util.List;

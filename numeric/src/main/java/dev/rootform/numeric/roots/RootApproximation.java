@@ -1,4 +1,4 @@
-package dev.rootform.numeric.analysis;
+package dev.rootform.numeric.roots;
 
 import dev.rootform.symbolic.closedform.ExactRoot;
 import java.math.BigDecimal;
