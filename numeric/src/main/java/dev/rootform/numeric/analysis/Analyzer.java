@@ -9,7 +9,6 @@ import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Domain;
-import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.RadicalSolution;
@@ -53,10 +52,14 @@ public final class Analyzer {
 
     /**
      * @param points where to evaluate the solution
-     * @throws InputException if values are asked of a general solution or a sequence at a
-     *     non-integer index or below its first index
+     * @throws IllegalArgumentException if {@link ValueRequests#refusal} refuses the points (a
+     *     general solution, or a sequence at a non-integer index or below its first index); callers
+     *     check first
      */
     public Analysis analyze(Solution solution, List<Rational> points) {
+        ValueRequests.refusal(solution, points).ifPresent(message -> {
+            throw new IllegalArgumentException(message);
+        });
         RootCache cache = new RootCache();
         List<RootApproximation> roots = new ArrayList<>();
         for (ExactRoot r : solution.roots()) {
@@ -64,10 +67,6 @@ public final class Analyzer {
         }
         List<PointValue> values = new ArrayList<>();
         List<Check> checks = new ArrayList<>();
-        if (!points.isEmpty() && solution.exact().isEmpty() && solution.radical().isEmpty()
-                && solution.problem().conditions().isEmpty()) {
-            throw new InputException("values need conditions: the general solution has free constants", "", -1);
-        }
         Map<String, BigDecimal> constants = new LinkedHashMap<>();
         if (solution.hasNumericConstants()) {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
@@ -139,15 +138,9 @@ public final class Analyzer {
                 v.isRational() ? Optional.of(v.rational()) : Optional.empty(), v.isRational() ? Optional.empty() : Optional.of(v));
     }
 
+    /** x[n] exactly, at an index {@link ValueRequests} accepts. */
     private PointValue sequenceValue(ExactSolution s, Rational at) {
-        if (!at.isInteger()) {
-            throw new InputException("value at " + at + ": a sequence has values only at integer indices", "", -1);
-        }
-        long n = at.toBigInteger().longValueExact();
-        if (n < s.origin().toBigInteger().longValueExact()) {
-            throw new InputException("value at " + n + ": below the first index " + s.origin(), "", -1);
-        }
-        Rational v = s.valueAt(n);
+        Rational v = s.valueAt(at.toBigInteger().longValueExact());
         return new PointValue(at, v.toBigDecimal(new MathContext(digits)), Optional.of(v));
     }
 

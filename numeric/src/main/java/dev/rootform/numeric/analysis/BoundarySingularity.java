@@ -1,7 +1,6 @@
 package dev.rootform.numeric.analysis;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
 import java.util.HashMap;
@@ -11,7 +10,8 @@ import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
 /**
- * Explains a boundary-value system that is singular at the working precision, as one line: either
+ * Explains a boundary-value system that is singular at the working precision, as a
+ * {@link ConditionsException} with a one-line message: either
  * the conditions contradict each other (a zero row with a nonzero right side), or they leave a
  * solution free, given by the kernel vector of the reduced matrix; when its entries (scaled so
  * the largest is 1) are small rationals to the working precision, that free solution is returned
@@ -24,13 +24,14 @@ final class BoundarySingularity {
     /** A kernel entry within 10^-(working - 10) of a multiple of 1/60 is taken as that rational. */
     private static final int SMALL_DENOMINATORS = 60;
 
-    static InputException explain(Apfloat[][] a, int[] pivotRow, int rank, Apfloat tiny, Apfloat[] scales,
+    static ConditionsException explain(Apfloat[][] a, int[] pivotRow, int rank, Apfloat tiny, Apfloat[] scales,
             long working, Solution solution, List<String> constants) {
         int k = a.length;
         String digits = " (singular to " + (working - 10) + " digits)";
         for (int r = rank; r < k; r++) {
             if (ApfloatMath.abs(a[r][k]).compareTo(tiny.multiply(scales[r])) > 0) {
-                return new InputException("the boundary conditions contradict each other: no solution meets them all" + digits, "", -1);
+                return new ConditionsException("the boundary conditions contradict each other: no solution meets them all"
+                        + digits, null);
             }
         }
         int free = 0;
@@ -61,7 +62,7 @@ final class BoundarySingularity {
         if (exact.size() == k) {
             return new ConditionsException(message, solution.general().withConstantValues(exact));
         }
-        return new InputException(message + ": adding any multiple of the homogeneous solution with "
-                + combination + " keeps every condition", "", -1);
+        return new ConditionsException(message + ": adding any multiple of the homogeneous solution with "
+                + combination + " keeps every condition", null);
     }
 }

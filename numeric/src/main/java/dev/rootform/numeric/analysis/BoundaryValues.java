@@ -5,8 +5,8 @@ import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
-import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.Check;
+import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.util.ArrayList;
@@ -56,7 +56,7 @@ final class BoundaryValues {
     }
 
     /**
-     * @throws InputException if the system is singular at the working precision
+     * @throws ConditionsException if the system is singular at the working precision
      * @throws IllegalStateException if the constants do not settle within the precision budget
      */
     static BoundaryValues solve(Solution solution, int digits, RootCache cache) {

@@ -16,6 +16,11 @@ public final class ConditionsException extends InputException {
 
     private final transient ClosedForm freeSolution;
 
+    /**
+     * @param message one line naming the problem
+     * @param freeSolution the free solution, or null when the conditions contradict each other or
+     *     the free solution is not known exactly
+     */
     public ConditionsException(String message, ClosedForm freeSolution) {
         super(message, "", -1);
         this.freeSolution = freeSolution;
