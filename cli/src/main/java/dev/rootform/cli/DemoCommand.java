@@ -1,7 +1,7 @@
 package dev.rootform.cli;
 
 import dev.rootform.export.Report;
-import dev.rootform.export.TextRenderer;
+import dev.rootform.export.document.TextRenderer;
 import dev.rootform.symbolic.algebra.Rational;
 import java.io.PrintWriter;
 import java.util.List;

@@ -1,6 +1,6 @@
 package dev.rootform.cli;
 
-import dev.rootform.export.Formulas;
+import dev.rootform.export.notation.Formulas;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.ConditionsException;

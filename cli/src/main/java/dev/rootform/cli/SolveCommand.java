@@ -1,14 +1,15 @@
 package dev.rootform.cli;
 
-import dev.rootform.export.CRenderer;
-import dev.rootform.export.CSource;
-import dev.rootform.export.Identifiers;
-import dev.rootform.export.JavaRenderer;
-import dev.rootform.export.JsonRenderer;
-import dev.rootform.export.LatexRenderer;
-import dev.rootform.export.MathMlRenderer;
 import dev.rootform.export.Report;
-import dev.rootform.export.TextRenderer;
+import dev.rootform.export.code.CRenderer;
+import dev.rootform.export.code.CSource;
+import dev.rootform.export.code.CodeRequests;
+import dev.rootform.export.code.Identifiers;
+import dev.rootform.export.code.JavaRenderer;
+import dev.rootform.export.document.JsonRenderer;
+import dev.rootform.export.document.LatexRenderer;
+import dev.rootform.export.document.MathMlRenderer;
+import dev.rootform.export.document.TextRenderer;
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
@@ -106,21 +107,31 @@ final class SolveCommand implements Callable<Integer> {
 
     /** Checks the code-naming options before any work, so a bad name fails fast. */
     private void validateNames() {
-        Identifiers.javaClass(className);
+        refuse(Identifiers.javaClassRefusal(className));
         if (packageName != null) {
-            Identifiers.javaPackage(packageName);
+            refuse(Identifiers.javaPackageRefusal(packageName));
         }
-        Identifiers.cFunction("--function", function);
+        refuse(Identifiers.cFunctionRefusal("--function", function));
         if (header != null) {
             if (format != Format.c) {
                 throw new InputException("--header is for --format c", "", -1);
             }
-            Identifiers.cHeader(header.getFileName().toString());
+            refuse(Identifiers.cHeaderRefusal(header.getFileName().toString()));
         }
+    }
+
+    /** @throws InputException with the refusal's message, when there is one */
+    private static void refuse(Optional<String> refusal) {
+        refusal.ifPresent(message -> {
+            throw new InputException(message, "", -1);
+        });
     }
 
     /** The answer in the chosen format; for C with --header, the header is written here. */
     private String render(Report report) throws IOException {
+        if (format == Format.java || format == Format.c) {
+            refuse(CodeRequests.refusal(report));
+        }
         switch (format) {
             case json:
                 return JsonRenderer.render(report);

@@ -1,5 +1,6 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
+import dev.rootform.export.Report;
 import dev.rootform.symbolic.solve.Solution;
 import java.util.Optional;
 import java.util.stream.Collectors;
@@ -16,13 +17,15 @@ public final class CRenderer {
     }
 
     /**
-     * @param function the function name (validated by {@link Identifiers#cFunction})
-     * @param headerFile the header's file name (validated by {@link Identifiers#cHeader}), or empty for one file
-     * @throws dev.rootform.symbolic.model.InputException for a general solution or a bad name
+     * @param function the function name (validated by {@link Identifiers#cFunctionRefusal})
+     * @param headerFile the header's file name (validated by {@link Identifiers#cHeaderRefusal}), or empty for one file
+     * @throws IllegalArgumentException for a bad name, or a report {@link CodeRequests#refusal} refuses
+     *     (callers check first)
      */
     public static CSource render(Report r, String function, Optional<String> headerFile) {
-        Identifiers.cFunction("--function", function);
-        headerFile.ifPresent(Identifiers::cHeader);
+        CodeRequests.require(Identifiers.cFunctionRefusal("--function", function)
+                .or(() -> headerFile.flatMap(Identifiers::cHeaderRefusal))
+                .or(() -> CodeRequests.refusal(r)));
         Solution s = r.solution();
         NumericForm form = NumericForm.of(CodeHeader.codeForm(r));
         CodeFacts facts = CodeFacts.measure(s, form);

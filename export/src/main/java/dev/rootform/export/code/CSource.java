@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
 import java.util.Objects;
 import java.util.Optional;

@@ -1,9 +1,8 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
@@ -45,13 +44,12 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
         exact = List.copyOf(exact);
     }
 
-    /** Measures {@code form}, the emitted formula of {@code solution}'s closed form. */
+    /** Measures {@code form}, the emitted formula of {@code solution}'s closed form (a fitted solution, see {@link CodeRequests}). */
     static CodeFacts measure(Solution solution, NumericForm form) {
         MathContext mc = new MathContext(EXACT_DIGITS);
         Rational origin = solution.exact().map(ExactSolution::origin).orElse(Rational.ZERO);
         LongFunction<BigDecimal> sequence = solution.radical().<LongFunction<BigDecimal>>map(r -> n -> r.valueAt(n).toBigDecimal(mc))
-                .orElse(n -> solution.exact().orElseThrow(
-                        () -> new InputException("code output needs a fitted solution", "", -1)).valueAt(n).toBigDecimal(mc));
+                .orElse(n -> solution.exact().orElseThrow().valueAt(n).toBigDecimal(mc));
         double start = form.differential() ? 0 : form.validFrom();
         double high = edge(form, start, 1);
         double low = form.differential() ? edge(form, start, -1) : form.first();

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;

@@ -1,5 +1,7 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
+import dev.rootform.export.Report;
+import dev.rootform.export.notation.CommentText;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigInteger;
 import java.util.List;
@@ -83,25 +85,29 @@ public final class JavaRenderer {
     }
 
     /**
-     * @param packageName the package, or null/empty for none (validated by {@link Identifiers#javaPackage})
-     * @param className the class name (validated by {@link Identifiers#javaClass})
-     * @throws dev.rootform.symbolic.model.InputException for a general solution or a bad name
+     * @param packageName the package, or null/empty for none (validated by {@link Identifiers#javaPackageRefusal})
+     * @param className the class name (validated by {@link Identifiers#javaClassRefusal})
+     * @throws IllegalArgumentException for a bad name, or a report {@link CodeRequests#refusal} refuses
+     *     (callers check first)
      */
     public static String render(Report r, String packageName, String className) {
-        Identifiers.javaClass(className);
+        boolean hasPackage = packageName != null && !packageName.isEmpty();
+        CodeRequests.require(Identifiers.javaClassRefusal(className)
+                .or(() -> hasPackage ? Identifiers.javaPackageRefusal(packageName) : Optional.empty())
+                .or(() -> CodeRequests.refusal(r)));
         Solution s = r.solution();
         NumericForm form = NumericForm.of(CodeHeader.codeForm(r));
         CodeFacts facts = CodeFacts.measure(s, form);
         Optional<IntegerRecurrence> exact = s.exact().flatMap(IntegerRecurrence::of);
         List<String> header = new java.util.ArrayList<>(CodeHeader.lines(r, form, facts));
-        exact.ifPresent(e -> header.addAll(CodeHeader.wrap(List.of("Exact terms: term(n) and termExact(n) by Fiduccia's "
+        exact.ifPresent(e -> header.addAll(CommentText.wrap(List.of("Exact terms: term(n) and termExact(n) by Fiduccia's "
                 + "method; the values are integers because the recurrence divided by its leading coefficient has integer "
                 + "coefficients and its first values are integers."))));
         StringBuilder out = new StringBuilder("/*\n");
         header.forEach(l -> out.append(" * ").append(l).append('\n'));
         out.append(" */\n");
-        if (packageName != null && !packageName.isEmpty()) {
-            out.append("package ").append(Identifiers.javaPackage(packageName)).append(";\n");
+        if (hasPackage) {
+            out.append("package ").append(packageName).append(";\n");
         }
         out.append("\n/** The closed form evaluated in double precision; see the comment above for range and accuracy. */\n")
                 .append("public final class ").append(className).append(" {\n");

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
@@ -23,7 +23,7 @@ record NumericForm(Domain domain, double origin, long first, long validFrom, Lis
         waves = List.copyOf(waves);
     }
 
-    /** The emitted constants of a fitted closed form. @throws dev.rootform.symbolic.model.InputException for free constants */
+    /** The emitted constants of a fitted closed form (no free constants, see {@link CodeRequests}). */
     static NumericForm of(ClosedForm f) {
         long first = f.domain() == Domain.DIFFERENCE ? f.origin().toBigInteger().longValueExact() : 0;
         double origin = f.domain() == Domain.DIFFERENCE ? first : f.origin().toBigDecimal(new java.math.MathContext(25)).doubleValue();

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
 /**
  * One real term of emitted code, with constants rounded once from their exact values:

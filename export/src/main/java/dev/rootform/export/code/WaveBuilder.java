@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.numeric.roots.RootFinder;
@@ -8,7 +8,6 @@ import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Domain;
-import dev.rootform.symbolic.model.InputException;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -36,14 +35,8 @@ final class WaveBuilder {
     private WaveBuilder() {
     }
 
-    /**
-     * @throws InputException if the form has free constants (code needs fitted constants)
-     */
+    /** The waves of a form without free constants (one that {@link CodeRequests#refusal} accepts). */
     static List<Wave> of(ClosedForm form) {
-        if (!form.freeConstants().isEmpty()) {
-            throw new InputException("code output needs fitted constants: give conditions for the free constants "
-                    + String.join(", ", form.freeConstants()), "", -1);
-        }
         boolean differential = form.domain() == Domain.DIFFERENTIAL;
         List<Wave> waves = new ArrayList<>();
         for (Term t : form.terms()) {

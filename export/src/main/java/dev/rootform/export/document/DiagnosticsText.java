@@ -1,11 +1,14 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dev.rootform.numeric.roots.RootApproximation;
+import dev.rootform.export.Report;
+import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.RootText;
 import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.diagnostics.Mode;
 import dev.rootform.numeric.diagnostics.Stability;
+import dev.rootform.numeric.roots.RootApproximation;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;

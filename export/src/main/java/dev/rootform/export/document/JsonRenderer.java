@@ -1,9 +1,15 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.rootform.export.Report;
+import dev.rootform.export.notation.BasisCoefficient;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.RootText;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Factor;

@@ -1,5 +1,12 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
+import dev.rootform.export.Report;
+import dev.rootform.export.notation.CommentText;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.FormulaWriter;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.export.notation.LatexNotation;
+import dev.rootform.export.notation.Numbers;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -27,9 +34,7 @@ public final class LatexRenderer {
         LinearEquation eq = s.problem().equation();
         ClosedForm f = s.closedForm();
         StringBuilder out = new StringBuilder();
-        List<String> comment = new ArrayList<>(CodeHeader.validity(s));
-        comment.add(CodeHeader.CAUTION);
-        CodeHeader.wrap(comment).forEach(l -> out.append("% ").append(l).append('\n'));
+        CommentText.lines(s).forEach(l -> out.append("% ").append(l).append('\n'));
         List<String> rows = new ArrayList<>();
         rows.add(row("equation", math(EquationText.equation(eq))));
         if (!s.problem().conditions().isEmpty()) {

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
 import java.util.List;
 

@@ -1,5 +1,11 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
+import dev.rootform.export.Report;
+import dev.rootform.export.notation.CommentText;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.FormulaWriter;
+import dev.rootform.export.notation.MathMlNotation;
+import dev.rootform.export.notation.Xml;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.Solution;
@@ -27,10 +33,8 @@ public final class MathMlRenderer {
         Solution s = r.solution();
         LinearEquation eq = s.problem().equation();
         ClosedForm f = s.closedForm();
-        List<String> comment = new ArrayList<>(CodeHeader.validity(s));
-        comment.add(CodeHeader.CAUTION);
         StringBuilder out = new StringBuilder("<!--\n");
-        CodeHeader.wrap(comment).forEach(l -> out.append("  ").append(l).append('\n'));
+        CommentText.lines(s).forEach(l -> out.append("  ").append(l).append('\n'));
         out.append("-->\n<math xmlns=\"").append(NAMESPACE).append("\" display=\"block\">\n<mtable>\n");
         List<String> rows = new ArrayList<>();
         rows.add(text("equation: " + EquationText.equation(eq)));
@@ -42,7 +46,7 @@ public final class MathMlRenderer {
         String unknown = n.name(f.function()) + (f.domain() == dev.rootform.symbolic.model.Domain.DIFFERENTIAL
                 ? n.parens(n.name(f.variable())) : "<mo>[</mo>" + n.name(f.variable()) + "<mo>]</mo>");
         rows.add("<mrow>" + unknown + "<mo>=</mo>" + new FormulaWriter(n, f).formula() + "</mrow>");
-        rows.add(text("valid for " + CodeHeader.range(f).replace(">=", "≥")));
+        rows.add(text("valid for " + CommentText.range(f).replace(">=", "≥")));
         rows.forEach(row -> out.append("<mtr><mtd>").append(row).append("</mtd></mtr>\n"));
         return out.append("</mtable>\n</math>\n").toString();
     }

@@ -1,5 +1,11 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
+import dev.rootform.export.Report;
+import dev.rootform.export.notation.BasisCoefficient;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.RootText;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.analysis.SteadyState;
 import dev.rootform.symbolic.algebra.Rational;

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
@@ -21,18 +21,18 @@ import java.util.List;
  * @param value the coefficient itself
  * @since 0.1
  */
-record BasisCoefficient(String coefficient, String basis, Coefficient value) {
+public record BasisCoefficient(String coefficient, String basis, Coefficient value) {
     private static final Coefficient ONE = new Coefficient.Exact(Surd.of(Rational.ONE));
     private static final Coefficient ZERO = new Coefficient.Exact(Surd.of(Rational.ZERO));
 
     /** The coefficient rounded to {@code digits} significant digits, or its name when it is free. */
-    String decimal(int digits) {
+    public String decimal(int digits) {
         return value instanceof Coefficient.Exact e
                 ? Numbers.decimal(e.value().toBigDecimal(new MathContext(digits + 2)), digits) : coefficient;
     }
 
     /** The entries of every term of {@code f}, in order. */
-    static List<BasisCoefficient> of(ClosedForm f) {
+    public static List<BasisCoefficient> of(ClosedForm f) {
         FormulaWriter writer = new FormulaWriter(PlainNotation.INSTANCE, f);
         List<BasisCoefficient> out = new ArrayList<>();
         for (Term t : f.terms()) {

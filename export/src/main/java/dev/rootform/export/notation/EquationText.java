@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
@@ -21,15 +21,15 @@ import java.util.List;
  *
  * @since 0.1
  */
-final class EquationText {
+public final class EquationText {
     /** The name of the characteristic variable in plain text. */
-    static final String LAMBDA = "λ";
+    public static final String LAMBDA = "λ";
 
     private EquationText() {
     }
 
     /** Σ a_j·(j-th derivative or shift) = right-hand side, highest order first, zero terms left out. */
-    static String equation(LinearEquation eq) {
+    public static String equation(LinearEquation eq) {
         StringBuilder sb = new StringBuilder();
         for (int j = eq.order(); j >= 0; j--) {
             Rational a = eq.coefficients().get(j);
@@ -46,13 +46,13 @@ final class EquationText {
     }
 
     /** e.g. "linear difference equation, order 2". */
-    static String kind(LinearEquation eq) {
+    public static String kind(LinearEquation eq) {
         String domain = eq.domain() == Domain.DIFFERENCE ? "difference" : "differential";
         return "linear " + domain + " equation, order " + eq.order();
     }
 
     /** {@code y'(0) = 1} or {@code x[3] = -2}. */
-    static String condition(LinearEquation eq, Condition c) {
+    public static String condition(LinearEquation eq, Condition c) {
         String at = c.atTimesPi() ? c.point() : Numbers.point(c.at());
         String lhs = eq.domain() == Domain.DIFFERENTIAL ? derivative(eq.function(), c.derivative()) + "(" + at + ")"
                 : eq.function() + "[" + at + "]";
@@ -60,12 +60,12 @@ final class EquationText {
     }
 
     /** The unknown at a point of the closed form's variable: {@code y(t)}, {@code x[n]} or {@code x[3]}. */
-    static String unknownAt(ClosedForm f, String point) {
+    public static String unknownAt(ClosedForm f, String point) {
         return f.domain() == Domain.DIFFERENTIAL ? f.function() + "(" + point + ")" : f.function() + "[" + point + "]";
     }
 
     /** lc·(f1)^m1·(f2)^m2…, e.g. {@code λ·(λ - 2)} or {@code (λ + 1)^2}. */
-    static String factorisation(RationalPolynomial characteristic, List<Factor> factors) {
+    public static String factorisation(RationalPolynomial characteristic, List<Factor> factors) {
         Rational lc = characteristic.leadingCoefficient();
         boolean alone = factors.size() == 1 && factors.get(0).multiplicity() == 1 && lc.isOne();
         List<String> parts = new ArrayList<>();
@@ -95,7 +95,7 @@ final class EquationText {
     }
 
     /** One forcing term as written, e.g. {@code 2·sin(3t)}. */
-    static String forcingTerm(LinearEquation eq, ForcingTerm term) {
+    public static String forcingTerm(LinearEquation eq, ForcingTerm term) {
         return forcing(eq, List.of(term));
     }
 

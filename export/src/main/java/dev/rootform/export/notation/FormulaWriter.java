@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
@@ -21,7 +21,7 @@ import java.util.Optional;
  *
  * @since 0.1
  */
-final class FormulaWriter {
+public final class FormulaWriter {
     /** The base of the exponential, spelled the same in every notation. */
     private static final String EULER = "e";
     private static final Coefficient ONE = new Coefficient.Exact(Surd.of(Rational.ONE));
@@ -40,7 +40,7 @@ final class FormulaWriter {
     /** v without its parentheses, for a function argument: {@code t - 3/2}. */
     private final String bare;
 
-    FormulaWriter(Notation notation, ClosedForm form) {
+    public FormulaWriter(Notation notation, ClosedForm form) {
         this.n = notation;
         this.form = form;
         Rational origin = form.origin();
@@ -54,7 +54,7 @@ final class FormulaWriter {
     }
 
     /** The whole right-hand side; {@code 0} for no terms. */
-    String formula() {
+    public String formula() {
         List<Signed> pieces = new ArrayList<>();
         for (Term t : form.terms()) {
             piece(t).ifPresent(pieces::add);
@@ -73,7 +73,7 @@ final class FormulaWriter {
     }
 
     /** A polynomial in descending powers of {@code variable}. */
-    String polynomial(RationalPolynomial p, String variable) {
+    public String polynomial(RationalPolynomial p, String variable) {
         List<Signed> pieces = new ArrayList<>();
         for (int i = p.degree(); i >= 0; i--) {
             product(new Coefficient.Exact(Surd.of(p.coefficient(i))), List.of(power(variable, i))).ifPresent(pieces::add);

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 import dev.rootform.symbolic.closedform.ClosedForm;
 

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 /**
  * LaTeX math mode: {@code \frac{1}{5}}, {@code \sqrt{5}}, {@code e^{-t}},
@@ -8,8 +8,8 @@ package dev.rootform.export;
  *
  * @since 0.1
  */
-final class LatexNotation implements Notation {
-    static final LatexNotation INSTANCE = new LatexNotation();
+public final class LatexNotation implements Notation {
+    public static final LatexNotation INSTANCE = new LatexNotation();
 
     private LatexNotation() {
     }

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 /**
  * Presentation MathML (the MathML Core elements mrow, mi, mn, mo, msup, msub, mfrac, msqrt,
@@ -7,8 +7,8 @@ package dev.rootform.export;
  *
  * @since 0.2
  */
-final class MathMlNotation implements Notation {
-    static final MathMlNotation INSTANCE = new MathMlNotation();
+public final class MathMlNotation implements Notation {
+    public static final MathMlNotation INSTANCE = new MathMlNotation();
     /** U+2062 INVISIBLE TIMES, for products written by juxtaposition. */
     private static final String INVISIBLE_TIMES = "<mo>&#x2062;</mo>";
     /** U+2061 FUNCTION APPLICATION, between a function name and its argument. */

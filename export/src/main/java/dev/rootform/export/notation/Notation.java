@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 /**
  * The atoms of one written notation for formulas. {@link FormulaWriter} decides the structure
@@ -7,7 +7,7 @@ package dev.rootform.export;
  *
  * @since 0.1
  */
-interface Notation {
+public interface Notation {
     /** The fraction numerator/denominator, both already written. */
     String fraction(String numerator, String denominator);
 

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 /**
  * Plain Unicode text: {@code 1/5·√5}, {@code e^(-t)}, {@code cos(2t)}, {@code Σ_{λ^3 - λ - 1 = 0} ...}.

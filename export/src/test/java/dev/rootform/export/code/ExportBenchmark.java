@@ -1,5 +1,7 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
+import dev.rootform.export.Corpus;
+import dev.rootform.export.Report;
 import java.lang.reflect.Method;
 import java.math.BigInteger;
 import java.net.URLClassLoader;

@@ -1,8 +1,10 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.rootform.export.Corpus;
+import dev.rootform.export.Report;
 import dev.rootform.symbolic.algebra.Rational;
 import java.nio.file.Files;
 import java.nio.file.Path;

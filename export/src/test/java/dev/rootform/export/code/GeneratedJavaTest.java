@@ -1,10 +1,12 @@
-package dev.rootform.export;
+package dev.rootform.export.code;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.rootform.export.Corpus;
+import dev.rootform.export.Report;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.solve.ExactSolution;
 import java.lang.reflect.InvocationTargetException;

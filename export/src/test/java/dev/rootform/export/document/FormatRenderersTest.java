@@ -1,11 +1,9 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.rootform.symbolic.model.InputException;
+import dev.rootform.export.Corpus;
 import java.io.StringReader;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -19,7 +17,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.w3c.dom.Document;
 import org.xml.sax.InputSource;
 
-/** LaTeX (parsed by KaTeX on Node), MathML (parsed by JAXP) and name validation. */
+/** LaTeX (parsed by KaTeX on Node) and MathML (parsed by JAXP). */
 class FormatRenderersTest {
     /** The KaTeX check script and its installed packages (installed by .ci/run: npm ci --prefix export/src/test/node). */
     private static final Path NODE_DIR = Path.of("src/test/node");
@@ -76,32 +74,5 @@ class FormatRenderersTest {
             assertTrue(d.getElementsByTagNameNS(MathMlRenderer.NAMESPACE, "mi").getLength() > 0, input);
             assertTrue(d.getElementsByTagNameNS(MathMlRenderer.NAMESPACE, "mn").getLength() > 0, input);
         }
-    }
-
-    @Test
-    void namesThatCouldInjectCodeAreRefused() {
-        for (String bad : new String[] {"class", "A;B", "a b", "X*/", "1abc", "", "a\nb", "_"}) {
-            assertThrows(InputException.class, () -> Identifiers.javaClass(bad), bad);
-        }
-        assertThrows(InputException.class, () -> Identifiers.javaPackage("com.int.x"));
-        for (String bad : new String[] {"int", "a-b", "f()", "__x", "_Hidden", "pow", "x;y"}) {
-            assertThrows(InputException.class, () -> Identifiers.cFunction("--function", bad), bad);
-        }
-        assertThrows(InputException.class, () -> Identifiers.cHeader("../x.h"));
-        assertEquals("com.example.fib", Identifiers.javaPackage("com.example.fib"));
-        assertEquals("fib_value", Identifiers.cFunction("--function", "fib_value"));
-    }
-
-    @Test
-    void commentTextCannotCloseAComment() {
-        String s = CodeHeader.sanitize("x */ y -- z\nw /* λ");
-        assertFalse(s.contains("*/") || s.contains("--") || s.contains("\n") || s.contains("/*"), s);
-        assertTrue(s.chars().allMatch(c -> c >= 0x20 && c < 0x7f), s);
-    }
-
-    @Test
-    void codeNeedsFittedConstants() {
-        Report general = Corpus.report("x[n+2] = x[n+1] + x[n]");
-        assertThrows(InputException.class, () -> JavaRenderer.render(general, "", "Fib"));
     }
 }

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
 import static dev.rootform.export.Fixtures.at;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -7,6 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.rootform.export.Fixtures;
+import dev.rootform.export.Report;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 

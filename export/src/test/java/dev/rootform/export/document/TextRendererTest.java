@@ -1,9 +1,10 @@
-package dev.rootform.export;
+package dev.rootform.export.document;
 
 import static dev.rootform.export.Fixtures.at;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.rootform.export.Fixtures;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.solve.Check;

@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 

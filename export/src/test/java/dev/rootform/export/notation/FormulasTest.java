@@ -1,4 +1,4 @@
-package dev.rootform.export;
+package dev.rootform.export.notation;
 
 import static dev.rootform.export.Fixtures.at;
 import static dev.rootform.export.Fixtures.derivativeAt;
@@ -7,6 +7,7 @@ import static dev.rootform.export.Fixtures.differential;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.rootform.export.Fixtures;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.closedform.ClosedForm;
