@@ -5,9 +5,10 @@ import java.util.function.IntFunction;
 /**
  * The working-precision policy of the analysis: {@link #GUARD_DIGITS} digits above the requested
  * ones, at most {@link #MAX_DIGITS}, and the one loop that raises the precision until two
- * evaluations agree. Each round evaluates the quantity at p + GUARD_DIGITS and at p digits (the
- * more precise first, so that the roots certified for it are reused by the other); when the two
- * agree, the more precise one is the answer, else p grows by the caller's step.
+ * evaluations agree. Each round evaluates the quantity at p and at p + GUARD_DIGITS digits (the
+ * cheaper first, so that a failure the evaluation reports, such as a singular system, is reported
+ * at the lower precision); when the two agree, the more precise one is the answer, else p grows by
+ * the caller's step.
  */
 final class WorkingPrecision {
     /** Guard digits above the requested ones. */
@@ -38,8 +39,8 @@ final class WorkingPrecision {
     static <T> T settle(int wanted, IntFunction<T> evaluate, Agreement<T> agree, Step<T> step, String what) {
         int working = wanted + GUARD_DIGITS;
         while (working <= MAX_DIGITS) {
-            T high = evaluate.apply(working + GUARD_DIGITS);
             T low = evaluate.apply(working);
+            T high = evaluate.apply(working + GUARD_DIGITS);
             if (agree.test(low, high, working)) {
                 return high;
             }
