@@ -5,8 +5,10 @@ package dev.rootform.symbolic.model;
  * outside the scope (nonlinear, variable coefficients, non-integer shifts), or conditions the
  * solver cannot accept. Carries the offending text and the 0-based position of the problem in it,
  * so the caller can print a caret under it. It lives beside the problem model so that every layer
- * that reads input (the parser, the solver, the command) can use it; the numeric and export layers
- * do not throw it but offer precondition checks that return the refusal's message.
+ * that reads input (the parser, the solver, the command) can use it. The numeric and export layers
+ * offer precondition checks that return a refusal's message instead; of this type they throw only
+ * the solver's {@code ConditionsException} (conditions that pick no single solution, found when
+ * boundary values are solved numerically).
  *
  * @since 0.1
  */
