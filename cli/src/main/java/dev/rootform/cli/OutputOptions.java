@@ -2,10 +2,12 @@ package dev.rootform.cli;
 
 import dev.rootform.api.Exporters;
 import dev.rootform.api.Options;
+import dev.rootform.api.Result;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Exporter;
 import dev.rootform.export.Identifiers;
 import dev.rootform.export.Rendering;
+import dev.rootform.export.Report;
 import dev.rootform.symbolic.parse.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -16,6 +18,8 @@ import java.nio.file.StandardCopyOption;
 import java.time.Duration;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.UnaryOperator;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 
 /**
@@ -55,8 +59,34 @@ final class OutputOptions {
             description = "Give up after this many seconds (default ${DEFAULT-VALUE}); exit code 1.")
     int timeLimit = 300;
 
+    /**
+     * Checks the format and the code names before any work.
+     *
+     * @throws InputException for an unknown format or a bad name
+     */
+    void check() {
+        exporter();
+        codeNames();
+    }
+
+    /**
+     * Prints the answer of {@code result}, passed through {@code decorate}, to -o or standard output,
+     * or the one-line error of a result without one to standard error; returns the exit code.
+     */
+    int print(Result result, UnaryOperator<Rendering> decorate, CommandSpec spec) throws IOException {
+        Optional<Report> answer = result.answer();
+        if (answer.isEmpty()) {
+            PrintWriter err = spec.commandLine().getErr();
+            err.println(Diagnostics.describe(result));
+            err.flush();
+            return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+        }
+        write(decorate.apply(exporter().render(answer.get(), codeNames())), spec.commandLine().getOut());
+        return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
+    }
+
     /** @throws InputException for an unknown format */
-    Exporter exporter() {
+    private Exporter exporter() {
         return Exporters.byName(format).orElseThrow(() -> new InputException(
                 "--format " + format + " is not one of " + String.join(", ", Exporters.names()), "", -1));
     }
@@ -78,7 +108,7 @@ final class OutputOptions {
     }
 
     /** @throws InputException for a bad class, package, function or header name */
-    CodeNames codeNames() {
+    private CodeNames codeNames() {
         Identifiers.javaClass(className);
         if (packageName != null) {
             Identifiers.javaPackage(packageName);
@@ -95,7 +125,7 @@ final class OutputOptions {
     }
 
     /** Writes the rendering: its text to -o or {@code out}, a C header to --header. */
-    void write(Rendering rendering, PrintWriter out) throws IOException {
+    private void write(Rendering rendering, PrintWriter out) throws IOException {
         if (header != null) {
             write(header, rendering.header().orElseThrow(), out);
         }

@@ -4,8 +4,6 @@ import dev.rootform.api.RecoverRequest;
 import dev.rootform.api.Recovery;
 import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
-import dev.rootform.export.CodeNames;
-import dev.rootform.export.Exporter;
 import dev.rootform.export.document.RecoveryDocument;
 import dev.rootform.symbolic.parse.InputException;
 import java.io.IOException;
@@ -49,8 +47,7 @@ final class RecoverCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
         try {
-            Exporter exporter = out.exporter();
-            CodeNames names = out.codeNames();
+            out.check();
             Recovery recovery = Rootform.recover(new RecoverRequest(terms(), start, out.options(null)));
             if (recovery instanceof Recovery.TooFewTerms few) {
                 return fail(err, "rootform: " + few.message(), ExitCode.BAD_INPUT);
@@ -59,14 +56,7 @@ final class RecoverCommand implements Callable<Integer> {
                 return fail(err, Diagnostics.describe(not.result()), not.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
             }
             Recovery.Recovered recovered = (Recovery.Recovered) recovery;
-            Result result = recovered.result();
-            if (result.answer().isEmpty()) {
-                // only the points can be refused here; anything else means the recovered text did not solve
-                return fail(err, Diagnostics.describe(result), result instanceof Result.Refused ? ExitCode.BAD_INPUT : ExitCode.INTERNAL);
-            }
-            out.write(RecoveryDocument.render(out.format, recovered.recurrence(), exporter.render(result.answer().get(), names)),
-                    spec.commandLine().getOut());
-            return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
+            return out.print(recovered.result(), answer -> RecoveryDocument.render(out.format, recovered.recurrence(), answer), spec);
         } catch (InputException e) {
             return fail(err, Diagnostics.describe(e), ExitCode.BAD_INPUT);
         }

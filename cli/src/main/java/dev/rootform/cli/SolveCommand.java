@@ -1,18 +1,14 @@
 package dev.rootform.cli;
 
-import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
-import dev.rootform.export.CodeNames;
-import dev.rootform.export.Exporter;
-import dev.rootform.export.Report;
 import dev.rootform.symbolic.parse.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.Callable;
+import java.util.function.UnaryOperator;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -42,20 +38,11 @@ final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        PrintWriter err = spec.commandLine().getErr();
         try {
-            Exporter exporter = out.exporter();
-            CodeNames names = out.codeNames();
-            Result result = Rootform.solve(SolveRequest.of(input, given).with(out.options(variable)));
-            Optional<Report> answer = result.answer();
-            if (answer.isEmpty()) {
-                err.println(Diagnostics.describe(result));
-                err.flush();
-                return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
-            }
-            out.write(exporter.render(answer.get(), names), spec.commandLine().getOut());
-            return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
+            out.check();
+            return out.print(Rootform.solve(SolveRequest.of(input, given).with(out.options(variable))), UnaryOperator.identity(), spec);
         } catch (InputException e) {
+            PrintWriter err = spec.commandLine().getErr();
             err.println(Diagnostics.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;
