@@ -19,6 +19,7 @@ final class RecoverJob {
 
     private static Recovery recover(RecoverRequest request) {
         try {
+            Points.parse(request.options().points());
             List<Rational> terms = TermsReader.read(request.terms());
             RecoveredRecurrence recurrence = Recoverer.recover(terms, request.start());
             if (!recurrence.confirmed()) {

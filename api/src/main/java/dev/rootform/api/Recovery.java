@@ -20,8 +20,9 @@ public sealed interface Recovery permits Recovery.Recovered, Recovery.TooFewTerm
 
     /**
      * The shortest recurrence was found and confirmed, then solved: {@code result} is what
-     * {@link Rootform#solve} gives for {@link #equation()} (solved and verified, or a check failed,
-     * or out of time).
+     * {@link Rootform#solve} gives for {@link #equation()}: solved and verified, a check failed, or
+     * out of time (the points of the options are checked before, so bad points are
+     * {@link NotRecovered}).
      *
      * @param recurrence the recurrence with its terms, order and confirming terms
      * @param result the solve answer for {@code recurrence.text()}
@@ -66,7 +67,10 @@ public sealed interface Recovery permits Recovery.Recovered, Recovery.TooFewTerm
         }
     }
 
-    /** No recurrence: the terms were refused ({@link Result.Refused}) or the time ran out ({@link Result.OutOfTime}). */
+    /**
+     * No recurrence: the terms, their start index or the options' points were refused
+     * ({@link Result.Refused}), or the time ran out ({@link Result.OutOfTime}).
+     */
     record NotRecovered(Result result) implements Recovery {
         public NotRecovered {
             Objects.requireNonNull(result, "result");

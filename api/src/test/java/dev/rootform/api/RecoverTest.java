@@ -68,6 +68,12 @@ class RecoverTest {
     }
 
     @Test
+    void badPointsAreRefusedBeforeRecovery() {
+        Recovery r = Rootform.recover(RecoverRequest.of("1 2 4 8 16").with(Options.builder().points("ten").build()));
+        assertInstanceOf(Result.Refused.class, assertInstanceOf(Recovery.NotRecovered.class, r).result());
+    }
+
+    @Test
     void allZeroTermsAreRefused() {
         Recovery r = Rootform.recover(RecoverRequest.of("0 0 0 0 0"));
         assertInstanceOf(Result.Refused.class, assertInstanceOf(Recovery.NotRecovered.class, r).result());

@@ -2,7 +2,6 @@ package dev.rootform.cli;
 
 import dev.rootform.api.RecoverRequest;
 import dev.rootform.api.Recovery;
-import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.export.document.RecoveryDocument;
 import dev.rootform.symbolic.parse.InputException;
@@ -12,6 +11,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import java.util.function.UnaryOperator;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -53,7 +53,7 @@ final class RecoverCommand implements Callable<Integer> {
                 return fail(err, "rootform: " + few.message(), ExitCode.BAD_INPUT);
             }
             if (recovery instanceof Recovery.NotRecovered not) {
-                return fail(err, Diagnostics.describe(not.result()), not.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
+                return out.print(not.result(), UnaryOperator.identity(), spec);
             }
             Recovery.Recovered recovered = (Recovery.Recovered) recovery;
             return out.print(recovered.result(), answer -> RecoveryDocument.render(out.format, recovered.recurrence(), answer), spec);

@@ -17,6 +17,9 @@ import java.util.List;
  * @since 0.2
  */
 public final class Recoverer {
+    /** The largest |index| of a term: indices stay far from int overflow. */
+    public static final int MAX_INDEX = 1_000_000_000;
+
     private Recoverer() {
     }
 
@@ -26,10 +29,14 @@ public final class Recoverer {
      *
      * @param terms x[start], x[start+1], …; at least one
      * @param start the index of the first term
-     * @throws InputException if every term is 0 (order 0: there is no recurrence to solve)
+     * @throws InputException if every term is 0 (order 0: there is no recurrence to solve), or an
+     *     index is beyond ±{@link #MAX_INDEX}
      * @throws java.util.concurrent.CancellationException if the thread is interrupted
      */
     public static RecoveredRecurrence recover(List<Rational> terms, int start) {
+        if (Math.abs((long) start) + terms.size() > MAX_INDEX) {
+            throw new InputException("the terms' indices from " + start + " on go beyond ±" + MAX_INDEX, "", -1);
+        }
         if (terms.stream().allMatch(Rational::isZero)) {
             throw new InputException("all " + terms.size() + " terms are 0: x[n] = 0 has no recurrence to recover", "", -1);
         }
