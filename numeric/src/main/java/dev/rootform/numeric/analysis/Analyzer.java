@@ -71,9 +71,7 @@ public final class Analyzer {
         if (solution.hasNumericConstants()) {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
             constants.putAll(bvp.constants(digits));
-            for (Rational p : points) {
-                values.add(new PointValue(p, Decimals.toBigDecimal(bvp.derivative(0, p), digits), Optional.empty()));
-            }
+            points.forEach(p -> values.add(boundaryValue(bvp, p)));
             if (solution.numericParticular()) {
                 checks.add(bvp.residualCheck(digits));
             }
@@ -86,9 +84,7 @@ public final class Analyzer {
         Optional<ExactSolution> exact = solution.exact();
         if (exact.isPresent()) {
             ExactSolution s = exact.get();
-            for (Rational p : points) {
-                values.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p, digits, cache));
-            }
+            points.forEach(p -> values.add(exactValue(s, p, cache)));
             if (s.domain() == Domain.DIFFERENTIAL) {
                 checks.add(integratorCheck(s, cache));
             }
@@ -100,6 +96,35 @@ public final class Analyzer {
         List<SteadyState> steady = diagnostics.stability().verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE
                 ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
         return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings());
+    }
+
+    /**
+     * The solution's values at {@code points}, and nothing else: exact for sequences, to the
+     * digits of this analyzer for functions (boundary-value constants are solved again).
+     *
+     * @throws IllegalArgumentException if {@link ValueRequests#refusal} refuses the points
+     */
+    public List<PointValue> values(Solution solution, List<Rational> points) {
+        ValueRequests.refusal(solution, points).ifPresent(message -> {
+            throw new IllegalArgumentException(message);
+        });
+        RootCache cache = new RootCache();
+        List<PointValue> values = new ArrayList<>();
+        if (solution.hasNumericConstants()) {
+            BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
+            points.forEach(p -> values.add(boundaryValue(bvp, p)));
+        }
+        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p))));
+        solution.exact().ifPresent(s -> points.forEach(p -> values.add(exactValue(s, p, cache))));
+        return values;
+    }
+
+    private PointValue boundaryValue(BoundaryValues bvp, Rational p) {
+        return new PointValue(p, Decimals.toBigDecimal(bvp.derivative(0, p), digits), Optional.empty());
+    }
+
+    private PointValue exactValue(ExactSolution s, Rational p, RootCache cache) {
+        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p, digits, cache);
     }
 
     /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
