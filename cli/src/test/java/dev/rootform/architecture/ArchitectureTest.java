@@ -1,0 +1,75 @@
+package dev.rootform.architecture;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
+
+import com.tngtech.archunit.core.importer.ImportOption;
+import com.tngtech.archunit.junit.AnalyzeClasses;
+import com.tngtech.archunit.junit.ArchTest;
+import com.tngtech.archunit.lang.ArchRule;
+import com.tngtech.archunit.library.freeze.FreezingArchRule;
+
+/**
+ * The module and package structure of rootform, checked on the compiled main classes of every
+ * module (this test lives in {@code cli}, the one module whose classpath holds all of them).
+ *
+ * <p>Modules form layers, {@code cli → api → export → numeric → symbolic}: a module may use any
+ * module below it, never one above it. Packages form no cycles, neither between modules nor
+ * between the subpackages of the project. The API module's public signatures name no
+ * third-party type, and JAS is reached only through {@code symbolic.backend}.
+ */
+@AnalyzeClasses(packages = "dev.rootform", importOptions = ImportOption.DoNotIncludeTests.class)
+class ArchitectureTest {
+    private static final String CLI = "dev.rootform.cli..";
+    private static final String API = "dev.rootform.api..";
+    private static final String EXPORT = "dev.rootform.export..";
+    private static final String NUMERIC = "dev.rootform.numeric..";
+    private static final String SYMBOLIC = "dev.rootform.symbolic..";
+
+    @ArchTest
+    static final ArchRule modulesAreLayered = layeredArchitecture().consideringOnlyDependenciesInLayers()
+            .layer("cli").definedBy(CLI)
+            .layer("api").definedBy(API)
+            .layer("export").definedBy(EXPORT)
+            .layer("numeric").definedBy(NUMERIC)
+            .layer("symbolic").definedBy(SYMBOLIC)
+            .whereLayer("cli").mayNotBeAccessedByAnyLayer()
+            .whereLayer("api").mayOnlyBeAccessedByLayers("cli")
+            .whereLayer("export").mayOnlyBeAccessedByLayers("api", "cli")
+            .whereLayer("numeric").mayOnlyBeAccessedByLayers("export", "api", "cli")
+            .whereLayer("symbolic").mayOnlyBeAccessedByLayers("numeric", "export", "api", "cli")
+            .because("data flows one way, from the command through the API down to the exact layer");
+
+    @ArchTest
+    static final ArchRule everyClassBelongsToAModule = classes().that().resideInAPackage("dev.rootform..")
+            .should().resideInAnyPackage(CLI, API, EXPORT, NUMERIC, SYMBOLIC)
+            .because("a class outside the known modules would escape the layering rule");
+
+    @ArchTest
+    static final ArchRule modulesAreFreeOfCycles = slices().matching("dev.rootform.(*)..").should().beFreeOfCycles();
+
+    /**
+     * Frozen: the one cycle of today, {@code numeric.analysis ↔ numeric.diagnostics} (issue 9, item 4,
+     * broken on its own branch), is recorded in {@code cli/src/test/archunit-store}; any other cycle
+     * fails. A frozen cycle is recognised by its slices ({@link SameCycle}). Once the cycle is gone,
+     * the next run empties the store: then drop {@code freeze} and the store.
+     */
+    @ArchTest
+    static final ArchRule packagesAreFreeOfCycles = FreezingArchRule.freeze(
+            slices().assignedFrom(new Subpackages()).should().beFreeOfCycles())
+            .associateViolationLinesVia(new SameCycle());
+
+    @ArchTest
+    static final ArchRule apiSignaturesNameNoThirdPartyType = classes().that().resideInAPackage(API)
+            .and(PublicSignatures.ARE_VISIBLE_OUTSIDE_THE_MODULE)
+            .should(PublicSignatures.nameOnlyTypesFrom("java..", "dev.rootform.."))
+            .because("library users must not depend on JAS, Symja, apfloat, Commons Math, Hipparchus, "
+                    + "Jackson or picocli through the API");
+
+    @ArchTest
+    static final ArchRule onlyTheBackendUsesJas = noClasses().that().resideOutsideOfPackage("dev.rootform.symbolic.backend..")
+            .should().dependOnClassesThat().resideInAPackage("edu.jas..")
+            .because("JAS is converted to rootform's own types in one place");
+}
