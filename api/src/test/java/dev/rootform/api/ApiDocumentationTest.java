@@ -82,7 +82,7 @@ class ApiDocumentationTest {
     @Test
     void javadocPassesTheChecker() {
         ByteArrayOutputStream diagnostics = new ByteArrayOutputStream();
-        List<String> args = new ArrayList<>(List.of("-proc:none", "-Xdoclint:all,-missing/protected", "-Werror",
+        List<String> args = new ArrayList<>(List.of("-proc:none", "-Xdoclint:all/protected,-missing", "-Werror",
                 "-classpath", classpath(), "-d", work.toString()));
         sources().forEach(f -> args.add(f.toString()));
         int status = ToolProvider.getSystemJavaCompiler().run(null, diagnostics, diagnostics, args.toArray(String[]::new));
