@@ -21,8 +21,9 @@ import java.util.function.BiFunction;
 /**
  * The exporters by format name: {@code text}, {@code json}, {@code latex}, {@code mathml},
  * {@code java}, {@code c}. Each exporter only formats a finished {@link Report}; all of them are
- * stateless and thread-safe. The code formats ({@code java}, {@code c}) refuse, by an exception, an
- * answer without fitted constants (a general solution).
+ * stateless and thread-safe. The code formats ({@code java}, {@code c}) cannot write every answer
+ * (a general solution has free constants): {@link Exporter#refusal(Report)} says why, and
+ * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report.
  *
  * <p>The sum of the first n odd numbers, solved and written as LaTeX:
  *

@@ -9,7 +9,6 @@ import com.tngtech.archunit.core.importer.ImportOption;
 import com.tngtech.archunit.junit.AnalyzeClasses;
 import com.tngtech.archunit.junit.ArchTest;
 import com.tngtech.archunit.lang.ArchRule;
-import com.tngtech.archunit.library.freeze.FreezingArchRule;
 
 /**
  * The module and package structure of rootform, checked on the compiled main classes of every
@@ -51,16 +50,8 @@ class ArchitectureTest {
     @ArchTest
     static final ArchRule modulesAreFreeOfCycles = slices().matching("dev.rootform.(*)..").should().beFreeOfCycles();
 
-    /**
-     * Frozen: the one cycle of today, {@code numeric.analysis ↔ numeric.diagnostics} (issue 9, item 4,
-     * broken on its own branch), is recorded in {@code cli/src/test/archunit-store}; any other cycle
-     * fails. A frozen cycle is recognised by its slices ({@link SameCycle}). Once the cycle is gone,
-     * the next run empties the store: then drop {@code freeze} and the store.
-     */
     @ArchTest
-    static final ArchRule packagesAreFreeOfCycles = FreezingArchRule.freeze(
-            slices().assignedFrom(new Subpackages()).should().beFreeOfCycles())
-            .associateViolationLinesVia(new SameCycle());
+    static final ArchRule packagesAreFreeOfCycles = slices().assignedFrom(new Subpackages()).should().beFreeOfCycles();
 
     /**
      * The API module, and the modules below it, whose public types the API hands out ({@code Report},
