@@ -1,7 +1,7 @@
 package dev.rootform.api;
 
-import dev.rootform.export.CSource;
 import dev.rootform.export.CodeNames;
+import dev.rootform.export.Exporter;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.code.ResponseCode;
 import dev.rootform.export.document.ResponseJson;
@@ -13,20 +13,34 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Function;
 
 /**
  * The renderers of a {@link ResponseReport} by format name, the same names as {@link Exporters}:
- * {@code text}, {@code json}, {@code latex}, {@code mathml}, {@code java}, {@code c} (the code
- * evaluates the response).
+ * {@code text}, {@code json}, {@code latex}, {@code mathml}, and {@code java}, {@code c}, which
+ * write the code of the solved problem (the response's evaluator) with the transfer function named
+ * in its header; they need the answer's code model ({@link Options#code()}).
+ *
+ * <pre>{@code
+ * ResponseReport report = Rootform.response(ResponseRequest.of("H(s) = 1/(s + 1)").to("step")).answer().orElseThrow();
+ * System.out.println(ResponseExporters.byName("json").orElseThrow().render(report, CodeNames.defaults()).text());
+ * }</pre>
  *
  * @since 0.3
  */
 public final class ResponseExporters {
-    /** Renders one report with the given code names. */
-    @FunctionalInterface
+    /** Renders one response report; stateless and thread-safe. */
     public interface Renderer {
+        /** Why {@code report} cannot be written in this format, or empty when it can. */
+        default Optional<String> refusal(ResponseReport report) {
+            return Optional.empty();
+        }
+
         /**
-         * @throws dev.rootform.symbolic.parse.InputException for a bad code name
+         * The answer in this format.
+         *
+         * @param names names for generated code; ignored by the document formats
+         * @throws IllegalArgumentException if {@link #refusal} is not empty
          */
         Rendering render(ResponseReport report, CodeNames names);
     }
@@ -41,22 +55,38 @@ public final class ResponseExporters {
         return Optional.ofNullable(BY_NAME.get(format));
     }
 
-    /** Every format name, in a fixed order. */
+    /** Every format name, in the order of {@link Exporters#names()}. */
     public static List<String> names() {
         return List.copyOf(BY_NAME.keySet());
     }
 
     private static Map<String, Renderer> index() {
         Map<String, Renderer> map = new LinkedHashMap<>();
-        map.put("text", (r, n) -> Rendering.of(ResponseText.render(r)));
-        map.put("json", (r, n) -> Rendering.of(ResponseJson.render(r)));
-        map.put("latex", (r, n) -> Rendering.of(ResponseLatex.render(r)));
-        map.put("mathml", (r, n) -> Rendering.of(ResponseMathMl.render(r)));
-        map.put("java", (r, n) -> Rendering.of(ResponseCode.java(r, n.packageName().orElse(null), n.className())));
-        map.put("c", (r, n) -> {
-            CSource c = ResponseCode.c(r, n.function(), n.headerFile());
-            return new Rendering(c.source(), c.header());
-        });
+        map.put("text", document(ResponseText::render));
+        map.put("json", document(ResponseJson::render));
+        map.put("latex", document(ResponseLatex::render));
+        map.put("mathml", document(ResponseMathMl::render));
+        map.put("java", code(Exporters.byName("java").orElseThrow()));
+        map.put("c", code(Exporters.byName("c").orElseThrow()));
         return java.util.Collections.unmodifiableMap(map);
+    }
+
+    private static Renderer document(Function<ResponseReport, String> writer) {
+        return (r, n) -> Rendering.of(writer.apply(r));
+    }
+
+    /** The solve exporter on the solved problem, its header naming the transfer function. */
+    private static Renderer code(Exporter exporter) {
+        return new Renderer() {
+            @Override
+            public Optional<String> refusal(ResponseReport report) {
+                return exporter.refusal(report.response());
+            }
+
+            @Override
+            public Rendering render(ResponseReport report, CodeNames names) {
+                return ResponseCode.decorate(report, exporter.render(report.response(), names));
+            }
+        };
     }
 }

@@ -1,10 +1,13 @@
 package dev.rootform.api;
 
 import dev.rootform.export.Report;
+import dev.rootform.export.code.CodeModels;
+import dev.rootform.export.code.CodeRequests;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.Analyzer;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.analysis.ValueRequests;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.numeric.response.Frequency;
 import dev.rootform.numeric.response.FrequencySweep;
 import dev.rootform.numeric.response.StepFigureFinder;
@@ -12,7 +15,7 @@ import dev.rootform.numeric.response.StepFigures;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.ExactRoot;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.parse.TransferParser;
 import dev.rootform.symbolic.response.Input;
 import dev.rootform.symbolic.response.ResponseBuilder;
@@ -43,8 +46,7 @@ final class ResponseJob {
 
     static ResponseResult run(ResponseRequest request) {
         Options o = request.options();
-        return TimeLimit.within(o.timeLimit(), () -> respond(request),
-                () -> new ResponseResult.Unanswered(new Result.OutOfTime(o.timeLimit())));
+        return TimeLimit.within(o.timeLimit(), () -> respond(request), new ResponseResult.Unanswered(new Result.OutOfTime(o.timeLimit())));
     }
 
     private static ResponseResult respond(ResponseRequest request) {
@@ -61,8 +63,13 @@ final class ResponseJob {
             TransferFacts facts = TransferFacts.of(h);
             ResponsePlan plan = ResponseBuilder.plan(h, input);
             Solution solution = withResponseParts(Solver.solve(plan.problem()), plan);
+            Optional<String> refusal = ValueRequests.refusal(solution, points);
+            if (refusal.isPresent()) {
+                return new ResponseResult.Unanswered(new Result.Refused(refusal.get(), "", -1));
+            }
             Analysis analysis = new Analyzer(o.digits()).analyze(solution, points);
-            Report report = new Report(solution, analysis, o.digits(), o.numeric());
+            Report analysed = new Report(solution, analysis, o.digits(), o.numeric());
+            Report report = o.code() && CodeRequests.fitted(analysed).isEmpty() ? analysed.withCode(CodeModels.of(analysed)) : analysed;
             Optional<StepFigures> figures = stepFigures(h, input, facts, solution, o.digits());
             ResponseReport answer = new ResponseReport(request.transfer(), h, facts, values(facts.poleRoots(), report),
                     values(facts.zeroRoots(), report), plan, report, SolveSyntax.relation(h), SolveSyntax.problem(plan.problem()),

@@ -11,7 +11,7 @@ import java.util.function.Supplier;
 
 /**
  * Runs one job with a wall-clock limit on a daemon thread; past the limit the caller gets
- * {@link Result.OutOfTime} (or the job kind's value for it).
+ * {@link Result.OutOfTime} (or the value it names) and the job's thread is interrupted.
  */
 final class TimeLimit {
     private TimeLimit() {
@@ -19,11 +19,11 @@ final class TimeLimit {
 
     /** The job's result, or {@link Result.OutOfTime}; the job's unchecked exceptions pass through. */
     static Result within(Duration limit, Supplier<Result> job) {
-        return within(limit, job, () -> new Result.OutOfTime(limit));
+        return within(limit, job, new Result.OutOfTime(limit));
     }
 
-    /** The job's result, or {@code outOfTime}'s past the limit; the job's unchecked exceptions pass through. */
-    static <T> T within(Duration limit, Supplier<T> job, Supplier<T> outOfTime) {
+    /** The job's result, or {@code late} past the limit; the job's unchecked exceptions pass through. */
+    static <T> T within(Duration limit, Supplier<T> job, T late) {
         ExecutorService executor = Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, "rootform-job");
             t.setDaemon(true);
@@ -33,7 +33,7 @@ final class TimeLimit {
             Future<T> future = executor.submit(job::get);
             return future.get(limit.toMillis(), TimeUnit.MILLISECONDS);
         } catch (TimeoutException e) {
-            return outOfTime.get();
+            return late;
         } catch (ExecutionException e) {
             if (e.getCause() instanceof RuntimeException r) {
                 throw r;
@@ -41,7 +41,7 @@ final class TimeLimit {
             throw new IllegalStateException(e.getCause());
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-            return outOfTime.get();
+            return late;
         } finally {
             executor.shutdownNow();
         }

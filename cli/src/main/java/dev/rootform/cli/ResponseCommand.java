@@ -5,9 +5,8 @@ import dev.rootform.api.ResponseRequest;
 import dev.rootform.api.ResponseResult;
 import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
-import dev.rootform.export.CodeNames;
-import dev.rootform.export.Rendering;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.export.document.ResponseReport;
+import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.List;
@@ -19,7 +18,10 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code rootform response}: a transfer function in, its exact facts and its response out. */
+/**
+ * {@code rootform response}: a transfer function in, its exact facts and its response out. Exit 0
+ * verified, 2 bad input or out of scope, 3 a check failed, 1 out of time or internal.
+ */
 @Command(name = "response", description = "Analyse a transfer function H(s) or H(z) and give its response in closed form.",
         mixinStandardHelpOptions = true, sortOptions = false)
 final class ResponseCommand implements Callable<Integer> {
@@ -40,34 +42,27 @@ final class ResponseCommand implements Callable<Integer> {
     String frequencies;
 
     @Mixin
-    AnswerOptions answer;
-
-    @Mixin
-    CodeOptions code;
+    OutputOptions out;
 
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
         try {
-            ResponseExporters.Renderer renderer = ResponseExporters.byName(answer.format)
-                    .orElseThrow(() -> answer.unknownFormat(ResponseExporters.names()));
-            CodeNames names = code.names(answer.format);
+            out.check();
+            ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format).orElseThrow();
             List<String> list = frequencies == null ? List.of() : List.of(frequencies.split(",", -1));
-            ResponseResult result = Rootform.response(ResponseRequest.of(transfer).to(to).frequencies(list)
-                    .with(answer.options().build()));
+            ResponseResult result = Rootform.response(ResponseRequest.of(transfer).to(to).frequencies(list).with(out.options(null)));
             if (result instanceof ResponseResult.Unanswered u) {
-                err.println(Diagnostics.describe(u.result()));
+                err.println(ErrorLine.describe(u.result()));
                 err.flush();
                 return u.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
             }
-            Rendering rendering = renderer.render(result.answer().orElseThrow(), names);
-            if (code.header != null) {
-                Output.write(spec.commandLine().getOut(), code.header, rendering.header().orElseThrow());
-            }
-            Output.write(spec.commandLine().getOut(), answer.output, rendering.text());
+            ResponseReport report = result.answer().orElseThrow();
+            OutputOptions.refuse(renderer.refusal(report));
+            out.write(renderer.render(report, out.codeNames()), spec.commandLine().getOut());
             return result instanceof ResponseResult.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
         } catch (InputException e) {
-            err.println(Diagnostics.describe(e));
+            err.println(ErrorLine.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;
         }

@@ -1,21 +1,14 @@
 package dev.rootform.cli;
 
-import dev.rootform.api.Exporters;
-import dev.rootform.api.Options;
-import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
-import dev.rootform.export.CodeNames;
-import dev.rootform.export.Exporter;
-import dev.rootform.export.Rendering;
-import dev.rootform.export.Report;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.Callable;
+import java.util.function.UnaryOperator;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -41,33 +34,16 @@ final class SolveCommand implements Callable<Integer> {
     String variable;
 
     @Mixin
-    AnswerOptions answer;
-
-    @Mixin
-    CodeOptions code;
+    OutputOptions out;
 
     @Override
     public Integer call() throws IOException {
-        PrintWriter err = spec.commandLine().getErr();
         try {
-            Exporter exporter = Exporters.byName(answer.format).orElseThrow(() -> answer.unknownFormat(Exporters.names()));
-            CodeNames names = code.names(answer.format);
-            Options options = answer.options().variable(variable).build();
-            Result result = Rootform.solve(SolveRequest.of(input, given).with(options));
-            Optional<Report> report = result.answer();
-            if (report.isEmpty()) {
-                err.println(Diagnostics.describe(result));
-                err.flush();
-                return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
-            }
-            Rendering rendering = exporter.render(report.get(), names);
-            if (code.header != null) {
-                Output.write(spec.commandLine().getOut(), code.header, rendering.header().orElseThrow());
-            }
-            Output.write(spec.commandLine().getOut(), answer.output, rendering.text());
-            return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
+            out.check();
+            return out.print(Rootform.solve(SolveRequest.of(input, given).with(out.options(variable))), UnaryOperator.identity(), spec);
         } catch (InputException e) {
-            err.println(Diagnostics.describe(e));
+            PrintWriter err = spec.commandLine().getErr();
+            err.println(ErrorLine.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;
         }

@@ -1,21 +1,18 @@
 package dev.rootform.export.code;
 
-import dev.rootform.export.CRenderer;
-import dev.rootform.export.CSource;
-import dev.rootform.export.CodeHeader;
-import dev.rootform.export.JavaRenderer;
+import dev.rootform.export.Rendering;
 import dev.rootform.export.document.ResponseReport;
+import dev.rootform.export.notation.CommentText;
 import dev.rootform.symbolic.response.Impulse;
 import dev.rootform.symbolic.transfer.TransferFunction;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.stream.Collectors;
 
 /**
- * Java or C that evaluates a response: the solve answer's generated code for the solved problem,
- * whose opening comment also names the transfer function and the input and says what the
- * evaluator leaves out (the time before the input, impulses at t = 0).
+ * The generated code of a response: the solve answer's Java or C for the solved problem, whose
+ * opening comment also names the transfer function and the input and says what the evaluator
+ * leaves out (the time before the input, impulses at t = 0).
  *
  * @since 0.3
  */
@@ -23,16 +20,10 @@ public final class ResponseCode {
     private ResponseCode() {
     }
 
-    /** Java source; see {@link JavaRenderer#render}. */
-    public static String java(ResponseReport r, String packageName, String className) {
-        return withLines(JavaRenderer.render(r.response(), packageName, className), lines(r));
-    }
-
-    /** C source and optional header; see {@link CRenderer#render}. */
-    public static CSource c(ResponseReport r, String function, Optional<String> headerFile) {
-        CSource c = CRenderer.render(r.response(), function, headerFile);
+    /** {@code code} (a rendering of {@code r.response()}) with the response lines at the top of its comments. */
+    public static Rendering decorate(ResponseReport r, Rendering code) {
         List<String> lines = lines(r);
-        return new CSource(withLines(c.source(), lines), c.header().map(h -> withLines(h, lines)));
+        return new Rendering(withLines(code.text(), lines), code.header().map(h -> withLines(h, lines)));
     }
 
     private static List<String> lines(ResponseReport r) {
@@ -43,10 +34,10 @@ public final class ResponseCode {
                 + (h.continuous() ? "t = 0" : "n = 0") + ". Solved as: " + r.problem());
         if (h.continuous()) {
             lines.add("The evaluator gives y(t) for t > 0" + (r.plan().impulses().isEmpty() ? "."
-                    : "; the impulses " + r.plan().impulses().stream().map(i -> impulse(i)).collect(Collectors.joining(" + "))
+                    : "; the impulses " + r.plan().impulses().stream().map(ResponseCode::impulse).collect(Collectors.joining(" + "))
                             + " at t = 0 are not part of it."));
         }
-        return CodeHeader.wrap(lines);
+        return CommentText.wrap(lines);
     }
 
     private static String impulse(Impulse i) {

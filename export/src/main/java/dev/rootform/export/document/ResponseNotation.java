@@ -1,7 +1,7 @@
 package dev.rootform.export.document;
 
-import dev.rootform.export.Formulas;
-import dev.rootform.export.LatexRenderer;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.export.document.LatexRenderer;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.ClosedForm;

@@ -1,7 +1,7 @@
 package dev.rootform.export.document;
 
 import dev.rootform.export.Report;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.numeric.response.FrequencyPoint;
 import dev.rootform.numeric.response.StepFigures;
 import dev.rootform.symbolic.response.ResponsePlan;

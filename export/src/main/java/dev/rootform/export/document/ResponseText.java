@@ -1,11 +1,11 @@
 package dev.rootform.export.document;
 
-import dev.rootform.export.Formulas;
-import dev.rootform.export.Layout;
-import dev.rootform.export.Numbers;
-import dev.rootform.export.RootText;
-import dev.rootform.export.TextRenderer;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.export.document.Layout;
+import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.RootText;
+import dev.rootform.export.document.TextRenderer;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.numeric.response.FrequencyPoint;
 import dev.rootform.numeric.response.StepFigures;
 import dev.rootform.symbolic.algebra.Factor;

@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.parse;
 
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import java.util.Map;

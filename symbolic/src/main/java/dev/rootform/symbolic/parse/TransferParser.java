@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.parse;
 
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.transfer.LowestTerms;
 import dev.rootform.symbolic.transfer.TransferFunction;

@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.parse;
 
+import dev.rootform.symbolic.model.InputException;
 import java.util.List;
 
 /** Which transform variable a transfer-function text uses: s or z, never both. */

@@ -86,7 +86,7 @@ public sealed interface Input permits Input.Impulse, Input.Step, Input.Ramp, Inp
     /**
      * {@code impulse}, {@code step}, {@code ramp}, or a forcing in t (continuous) or n (discrete).
      *
-     * @throws dev.rootform.symbolic.parse.InputException if the forcing cannot be read or is zero
+     * @throws dev.rootform.symbolic.model.InputException if the forcing cannot be read or is zero
      */
     static Input parse(String text, Domain domain) {
         String t = text == null ? "" : text.strip();
@@ -100,7 +100,7 @@ public sealed interface Input permits Input.Impulse, Input.Step, Input.Ramp, Inp
             default:
                 List<ForcingTerm> terms = ProblemParser.forcing(text, domain);
                 if (terms.isEmpty()) {
-                    throw new dev.rootform.symbolic.parse.InputException("the input is zero: its response is zero", text, 0);
+                    throw new dev.rootform.symbolic.model.InputException("the input is zero: its response is zero", text, 0);
                 }
                 return new Forcing(t, domain, terms);
         }

@@ -17,6 +17,6 @@ public final class ExactRoots {
 
     /** The roots of each factor, in factor order, each with its factor's multiplicity. */
     public static List<ExactRoot> of(List<Factor> factors) {
-        return Presenter.roots(factors);
+        return ClosedFormBuilder.roots(factors);
     }
 }

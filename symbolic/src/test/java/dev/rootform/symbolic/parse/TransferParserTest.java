@@ -8,6 +8,7 @@ import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.transfer.RationalFunction;
 import dev.rootform.symbolic.transfer.TransferFunction;
