@@ -17,7 +17,7 @@ class ResponseTest {
     @Test
     void answersWithTheReport() {
         ResponseResult r = Rootform.response(ResponseRequest.of("H(s) = 1/(s + 1)").to("step")
-                .with(Options.builder().digits(12).points("1").build()));
+                .with(Options.builder().digits(12).points("1").code(true).build()));
         ResponseReport report = assertInstanceOf(ResponseResult.Answered.class, r).report();
         // 1 − e^(−1) (the step response of a first-order lag, common practice)
         assertEquals(1 - Math.exp(-1), report.response().values().get(0).value().doubleValue(), 1e-12);
@@ -25,6 +25,13 @@ class ResponseTest {
         for (String format : ResponseExporters.names()) {
             assertTrue(!ResponseExporters.byName(format).orElseThrow().render(report, CodeNames.defaults()).text().isEmpty(), format);
         }
+    }
+
+    @Test
+    void codeNeedsTheCodeModel() {
+        ResponseReport report = Rootform.response(ResponseRequest.of("H(s) = 1/(s + 1)")).answer().orElseThrow();
+        assertTrue(ResponseExporters.byName("java").orElseThrow().refusal(report).isPresent());
+        assertTrue(ResponseExporters.byName("text").orElseThrow().refusal(report).isEmpty());
     }
 
     @Test

@@ -7,7 +7,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.rootform.export.notation.Formulas;
 import dev.rootform.export.document.JsonRenderer;
 import dev.rootform.export.notation.Numbers;
-import dev.rootform.export.notation.RootText;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.numeric.response.FrequencyPoint;
 import dev.rootform.numeric.response.StepFigures;
@@ -50,8 +49,8 @@ public final class ResponseJson {
                     .put("text", ResponseNotation.transfer(h)).put("latex", ResponseNotation.transferLatex(h))
                     .put("numerator", h.value().numerator().toString(h.variable()))
                     .put("denominator", h.value().denominator().toString(h.variable()));
-            roots(out.putArray("poles"), f.poleRoots(), r.poleValues(), r.digits());
-            roots(out.putArray("zeros"), f.zeroRoots(), r.zeroValues(), r.digits());
+            roots(out.putArray("poles"), h, f.poleRoots(), r.poleValues(), r.digits());
+            roots(out.putArray("zeros"), h, f.zeroRoots(), r.zeroValues(), r.digits());
             ObjectNode dc = out.putObject("dcGain");
             dc.put("at", h.continuous() ? "0" : "1").put("finite", f.dcGain().isPresent())
                     .put("exact", f.dcGain().map(Object::toString).orElse(null));
@@ -62,7 +61,7 @@ public final class ResponseJson {
                 Factor factor = m.factor();
                 ArrayNode at = hidden.addObject().put("factor", factor.polynomial().toString(h.variable()))
                         .put("multiplicity", factor.multiplicity()).put("stable", m.stable()).putArray("roots");
-                m.roots().forEach(x -> at.add(RootText.exact(x)));
+                m.roots().forEach(x -> at.add(ResponseNotation.root(h, x)));
             }
             out.put("input", r.plan().input().text());
             ClosedForm form = r.response().solution().closedForm();
@@ -93,10 +92,10 @@ public final class ResponseJson {
         }
     }
 
-    private static void roots(ArrayNode out, List<ExactRoot> exact, List<RootApproximation> values, int digits) {
+    private static void roots(ArrayNode out, TransferFunction h, List<ExactRoot> exact, List<RootApproximation> values, int digits) {
         for (int i = 0; i < exact.size(); i++) {
             RootApproximation a = values.get(i);
-            out.addObject().put("exact", RootText.exact(exact.get(i))).put("re", Numbers.decimal(a.re(), digits))
+            out.addObject().put("exact", ResponseNotation.root(h, exact.get(i))).put("re", Numbers.decimal(a.re(), digits))
                     .put("im", Numbers.decimal(a.im(), digits)).put("radius", a.radius().toString())
                     .put("multiplicity", exact.get(i).multiplicity());
         }

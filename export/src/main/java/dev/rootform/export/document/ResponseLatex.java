@@ -1,7 +1,6 @@
 package dev.rootform.export.document;
 
 import dev.rootform.export.notation.CommentText;
-import dev.rootform.export.document.LatexRenderer;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.transfer.TransferFunction;
 import java.util.ArrayList;

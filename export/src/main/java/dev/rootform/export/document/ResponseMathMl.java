@@ -2,7 +2,6 @@ package dev.rootform.export.document;
 
 import dev.rootform.export.notation.CommentText;
 import dev.rootform.export.notation.Formulas;
-import dev.rootform.export.document.MathMlRenderer;
 import dev.rootform.export.notation.Xml;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;

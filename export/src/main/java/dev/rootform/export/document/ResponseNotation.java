@@ -1,10 +1,11 @@
 package dev.rootform.export.document;
 
 import dev.rootform.export.notation.Formulas;
-import dev.rootform.export.document.LatexRenderer;
+import dev.rootform.export.notation.RootText;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.response.Impulse;
 import dev.rootform.symbolic.transfer.TransferFunction;
 import java.util.ArrayList;
@@ -69,6 +70,11 @@ final class ResponseNotation {
     static String responseLatex(TransferFunction h, List<Impulse> impulses, ClosedForm f) {
         return unknown(h) + " = " + join(impulses.stream().map(i -> impulse(h, i, true)).toList(),
                 f.terms().isEmpty() && !impulses.isEmpty() ? "" : Formulas.latex(f));
+    }
+
+    /** An exact pole or zero as solve writes roots, with an implicit root's factor in the transfer variable. */
+    static String root(TransferFunction h, ExactRoot root) {
+        return RootText.exact(root).replace("λ", h.variable());
     }
 
     /** {@code y(t)} or {@code y[n]}. */

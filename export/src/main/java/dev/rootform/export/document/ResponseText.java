@@ -41,8 +41,8 @@ public final class ResponseText {
         if (!f.hiddenModes().isEmpty()) {
             out.section("cancelled", f.hiddenModes().stream().map(m -> hidden(h, m)).toList());
         }
-        out.section("poles", roots(f.poleRoots(), r.poleValues(), r.digits()))
-                .section("zeros", roots(f.zeroRoots(), r.zeroValues(), r.digits()))
+        out.section("poles", roots(h, f.poleRoots(), r.poleValues(), r.digits()))
+                .section("zeros", roots(h, f.zeroRoots(), r.zeroValues(), r.digits()))
                 .line("DC gain", dcGain(h, f))
                 .line("properness", properness(f.relativeDegree()))
                 .line("stability", stability(h, f))
@@ -84,19 +84,19 @@ public final class ResponseText {
 
     static String hidden(TransferFunction h, TransferFacts.HiddenMode m) {
         Factor f = m.factor();
-        String roots = m.roots().stream().map(RootText::exact).collect(Collectors.joining(", "));
+        String roots = m.roots().stream().map(x -> ResponseNotation.root(h, x)).collect(Collectors.joining(", "));
         return f.polynomial().toString(h.variable()) + (f.multiplicity() > 1 ? " (multiplicity " + f.multiplicity() + ")" : "")
                 + ": pole–zero pair at " + h.variable() + " = " + roots + (m.stable() ? " (stable)"
                         : " (NOT stable: the mode is hidden from the input–output behaviour, not gone)");
     }
 
-    private static List<String> roots(List<ExactRoot> exact, List<RootApproximation> values, int digits) {
+    private static List<String> roots(TransferFunction h, List<ExactRoot> exact, List<RootApproximation> values, int digits) {
         if (exact.isEmpty()) {
             return List.of("none");
         }
         List<String> lines = new ArrayList<>();
         for (int i = 0; i < exact.size(); i++) {
-            lines.add(RootText.exact(exact.get(i)) + "  ≈ " + RootText.decimal(values.get(i), digits)
+            lines.add(ResponseNotation.root(h, exact.get(i)) + "  ≈ " + RootText.decimal(values.get(i), digits)
                     + "  multiplicity " + exact.get(i).multiplicity());
         }
         return lines;
