@@ -13,7 +13,8 @@ import java.util.stream.Collectors;
  * {@code uint64_t}) that stores x[n] and returns 0, returns 1 when x[n] or a product or partial sum
  * on the way would leave the type (nothing wraps), and 2 below the first index; and its header
  * lines (method, cost, reach). Portable C99: the checks compare with bounds computed by rootform,
- * so they need no division and no compiler built-ins.
+ * so they need no division and no compiler built-ins; the last k values are kept in a ring, so no
+ * loop copies memory (a compiler would turn one into a call of memmove).
  *
  * @param term the exact term
  * @param function the name of the value function; the term is {@code function_term}
@@ -25,6 +26,7 @@ record CExactTerm(ExactTerm term, String function) {
                 unsigned long m;
                 unsigned long i;
                 int j;
+                int oldest = 0;
                 if (n < FIRSTL) {
                     return 2;
                 }
@@ -38,23 +40,23 @@ record CExactTerm(ExactTerm term, String function) {
                 }
                 for (i = KUL; i <= m; i++) {
                     INT next = 0;
+                    int at = oldest;
                     for (j = 0; j < K; j++) {
                         INT p;
                         if (PRODUCT_CHECK) {
                             return 1;
                         }
-                        p = ARRAY_step[j] * x[j];
+                        p = ARRAY_step[j] * x[at];
                         if (SUM_CHECK) {
                             return 1;
                         }
                         next += p;
+                        at = at + 1 == K ? 0 : at + 1;
                     }
-                    for (j = 0; j + 1 < K; j++) {
-                        x[j] = x[j + 1];
-                    }
-                    x[K - 1] = next;
+                    x[oldest] = next;
+                    oldest = oldest + 1 == K ? 0 : oldest + 1;
                 }
-                *out = x[K - 1];
+                *out = x[oldest == 0 ? K - 1 : oldest - 1];
                 return 0;
             }
             """;
@@ -88,7 +90,7 @@ record CExactTerm(ExactTerm term, String function) {
         String period = term.reach() instanceof Reach.Periodic p
                 ? "    if (m >= " + (p.from() + p.period()) + "UL) {\n        m = " + p.from() + "UL + (m - " + p.from() + "UL) % "
                         + p.period() + "UL;\n    }\n" : "";
-        String product = term.unsigned() ? "x[j] > ARRAY_high[j]" : "x[j] < ARRAY_low[j] || x[j] > ARRAY_high[j]";
+        String product = term.unsigned() ? "x[at] > ARRAY_high[j]" : "x[at] < ARRAY_low[j] || x[at] > ARRAY_high[j]";
         String sum = term.unsigned() ? "next > UINT64_MAX - p" : "(p > 0 && next > INT64_MAX - p) || (p < 0 && next < INT64_MIN - p)";
         String body = BODY.replace("LIMIT", limit).replace("PERIOD", period).replace("PRODUCT_CHECK", product)
                 .replace("SUM_CHECK", sum).replace("INT ", type() + " ").replace("FIRST", Long.toString(term.first()))

@@ -10,8 +10,9 @@ import java.util.Optional;
 /**
  * Finds how far the exact 64-bit term of an integer recurrence fits ({@link ExactTerm}): by running
  * the steps of the generated C on exact integers, each product step_j·x[m + j] and each partial sum
- * checked against the type's range, for up to {@link #STEPS} steps. When nothing leaves the range by
- * then, the sequence is tested for being a quasi-polynomial: (E^P − 1)^D x = 0 from offset k on
+ * checked against the type's range, for up to {@link #STEPS} steps (a periodic sequence is recognised
+ * after the first {@code FIRST_STEPS}). When nothing leaves the range, the sequence is tested for
+ * being a quasi-polynomial: (E^P − 1)^D x = 0 from offset k on
  * (tested on k consecutive values; the difference sequence satisfies the same order-k recurrence,
  * so k zeros in a row make it zero). With D = 1 the sequence is periodic and never overflows; with
  * D &ge; 2 every intermediate g is, on each residue class r mod P, a polynomial of degree &lt; D in
@@ -19,8 +20,14 @@ import java.util.Optional;
  * not decrease in q), which bounds the safe range analytically.
  */
 final class ExactTerms {
-    /** Steps run on exact integers before the analysis. */
+    /** Steps run on exact integers before looking for a period. */
+    private static final int FIRST_STEPS = 1_000;
+    /** Steps run on exact integers before the analysis of polynomial growth. */
     static final int STEPS = 20_000;
+
+    /** (E^period − 1)^degree x = 0 from offset k on. */
+    private record Quasi(int period, int degree) {
+    }
 
     private ExactTerms() {
     }
@@ -45,27 +52,63 @@ final class ExactTerms {
     private static Reach reach(IntegerRecurrence r, BigInteger min, BigInteger max) {
         int k = r.step().size();
         List<BigInteger> x = new ArrayList<>(r.start());
-        for (int m = 0; m < STEPS; m++) {
+        Optional<Reach> overflow = run(r, x, FIRST_STEPS, min, max);
+        if (overflow.isPresent()) {
+            return overflow.get();
+        }
+        Optional<Quasi> quasi = quasiPolynomial(x, k);
+        if (quasi.isPresent() && quasi.get().degree() == 1) {
+            return new Reach.Periodic(k, quasi.get().period());
+        }
+        overflow = run(r, x, STEPS, min, max);
+        if (overflow.isPresent()) {
+            return overflow.get();
+        }
+        quasi = quasi.or(() -> quasiPolynomial(x, k));
+        if (quasi.isEmpty()) {
+            return new Reach.Checked(r.first() + k - 1 + STEPS);
+        }
+        int period = quasi.get().period();
+        int degree = quasi.get().degree();
+        if (degree == 1) {
+            return new Reach.Periodic(k, period);
+        }
+        BigInteger safeSteps = bound(r, x, period, degree, max.min(min.negate())).max(BigInteger.valueOf(STEPS));
+        return new Reach.Bounded(safeSteps.add(BigInteger.valueOf(r.first() + k - 1)).min(BigInteger.valueOf(Long.MAX_VALUE))
+                .longValueExact(), degree - 1, period);
+    }
+
+    /**
+     * Runs the steps on exact integers until {@code steps} of them are done (x holds k + steps values),
+     * or an intermediate leaves [min, max]: then the exact reach.
+     */
+    private static Optional<Reach> run(IntegerRecurrence r, List<BigInteger> x, int steps, BigInteger min, BigInteger max) {
+        int k = r.step().size();
+        for (int m = x.size() - k; m < steps; m++) {
             List<BigInteger> g = intermediates(r.step(), x, m);
             if (!g.stream().allMatch(v -> fits(v, min, max))) {
-                return new Reach.Exact(r.first() + k - 1 + m, !fits(g.get(g.size() - 1), min, max));
+                return Optional.of(new Reach.Exact(r.first() + k - 1 + m, !fits(g.get(g.size() - 1), min, max)));
             }
             x.add(g.get(g.size() - 1));
         }
-        long checked = r.first() + k - 1 + STEPS;
+        return Optional.empty();
+    }
+
+    /**
+     * The smallest period P (as far as the values in x allow) with (E^P − 1)^D x = 0 from offset k on,
+     * and the smallest such D; empty when there is none.
+     */
+    private static Optional<Quasi> quasiPolynomial(List<BigInteger> x, int k) {
         for (int period = 1; k + k - 1 + (long) k * period < x.size(); period++) {
             if (vanishes(x, k, period, k)) {
                 int degree = 1;
                 while (!vanishes(x, k, period, degree)) {
                     degree++;
                 }
-                return degree == 1 ? new Reach.Periodic(k, period)
-                        : new Reach.Bounded(bound(r, x, period, degree, max.min(min.negate())).max(BigInteger.valueOf(STEPS))
-                                .add(BigInteger.valueOf(r.first() + k - 1)).min(BigInteger.valueOf(Long.MAX_VALUE)).longValueExact(),
-                                degree - 1, period);
+                return Optional.of(new Quasi(period, degree));
             }
         }
-        return new Reach.Checked(checked);
+        return Optional.empty();
     }
 
     /**
