@@ -1,44 +1,31 @@
 package dev.rootform.api;
 
+import dev.rootform.symbolic.work.Cancelled;
+import dev.rootform.symbolic.work.Deadline;
 import java.time.Duration;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.TimeoutException;
 import java.util.function.Supplier;
 
 /**
- * Runs one job with a wall-clock limit on a daemon thread; past the limit the caller gets
- * {@link Result.OutOfTime}.
+ * Runs one job on the calling thread under a wall-clock limit: the job's {@link Deadline} is
+ * installed for its duration (every long loop checks it), and the shared {@link Watchdog}
+ * interrupts the thread when the limit passes, so that JAS factoring stops as well. A
+ * {@link Cancelled} job becomes {@link Result.OutOfTime}. No thread is started per job and none
+ * keeps computing afterwards; the interrupt status the watchdog set is cleared before returning.
  */
 final class TimeLimit {
     private TimeLimit() {
     }
 
-    /** The job's result, or {@link Result.OutOfTime}; the job's unchecked exceptions pass through. */
+    /**
+     * The job's result, or {@link Result.OutOfTime} when it was cancelled: the limit passed or the
+     * calling thread was interrupted (an interrupt from elsewhere stays set, as it came).
+     * The job's other unchecked exceptions pass through.
+     */
     static Result within(Duration limit, Supplier<Result> job) {
-        ExecutorService executor = Executors.newSingleThreadExecutor(r -> {
-            Thread t = new Thread(r, "rootform-job");
-            t.setDaemon(true);
-            return t;
-        });
-        try {
-            Future<Result> future = executor.submit(job::get);
-            return future.get(limit.toMillis(), TimeUnit.MILLISECONDS);
-        } catch (TimeoutException e) {
+        try (Deadline.Scope scope = Deadline.after(limit).enter(); Watchdog.Alarm alarm = Watchdog.arm(limit)) {
+            return job.get();
+        } catch (Cancelled e) {
             return new Result.OutOfTime(limit);
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof RuntimeException r) {
-                throw r;
-            }
-            throw new IllegalStateException(e.getCause());
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return new Result.OutOfTime(limit);
-        } finally {
-            executor.shutdownNow();
         }
     }
 }

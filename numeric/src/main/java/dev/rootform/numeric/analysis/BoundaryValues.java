@@ -10,6 +10,7 @@ import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.parse.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -64,6 +65,7 @@ final class BoundaryValues {
     static BoundaryValues solve(Solution solution, int digits, RootCache cache) {
         int working = digits + Analyzer.GUARD_DIGITS;
         while (working <= Analyzer.MAX_WORKING_DIGITS) {
+            Deadline.checkCurrent();
             BoundaryValues low = at(solution, working, cache);
             BoundaryValues high = at(solution, working + Analyzer.GUARD_DIGITS, cache);
             if (agree(low.constants, high.constants, digits + 2)) {
@@ -90,6 +92,7 @@ final class BoundaryValues {
         LinearEquation eq = solution.problem().equation();
         Apfloat[][] a = new Apfloat[n][n + 1];
         for (int row = 0; row < n; row++) {
+            Deadline.checkCurrent();
             boolean condition = row < conditions.size();
             Condition c = condition ? conditions.get(row) : null;
             Apfloat t = condition ? point(c, working) : new Apfloat(COLLOCATION[row - conditions.size()], working);
@@ -179,6 +182,7 @@ final class BoundaryValues {
             swap(a, scales, p, rank);
             for (int r = 0; r < k; r++) {
                 if (r != rank) {
+                    Deadline.checkCurrent();
                     Apfloat f = a[r][c].divide(a[rank][c]);
                     for (int j = c; j <= k; j++) {
                         a[r][j] = a[r][j].subtract(f.multiply(a[rank][j]));

@@ -3,8 +3,12 @@ package dev.rootform.symbolic.backend;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Cancelled;
+import dev.rootform.symbolic.work.Deadline;
 import edu.jas.arith.BigInteger;
 import edu.jas.kern.ComputerThreads;
+import edu.jas.kern.PreemptStatus;
+import edu.jas.kern.PreemptingException;
 import edu.jas.poly.ExpVector;
 import edu.jas.poly.GenPolynomial;
 import edu.jas.poly.GenPolynomialRing;
@@ -20,7 +24,15 @@ import java.util.Map;
  * Factorisation over Q into monic irreducible factors with multiplicities, by JAS over Z after
  * clearing denominators (measured 2–4× faster than over Q at degree 120). The only class that
  * touches JAS types. JAS's parallel GCD thread pool is switched off, so no non-daemon thread keeps
- * the JVM alive after use.
+ * the JVM alive after use, and the work runs on the calling thread.
+ *
+ * <p>Cancellation: JAS checks {@link Thread#isInterrupted()} whenever it builds a polynomial in a
+ * ring made while preemption is allowed ({@code PreemptStatus.setAllow()}, switched on before each
+ * factorisation), and then throws its own unchecked
+ * exception; this class turns that into {@link Cancelled}. So an interrupt of the calling thread
+ * (the front door's watchdog interrupts it when the time limit passes) stops a long
+ * factorisation within one polynomial operation. {@link Deadline#checkCurrent()} is consulted
+ * before the JAS call and in this class's own loops.
  *
  * @since 0.1
  */
@@ -28,9 +40,6 @@ public final class JasFactorizer {
     static {
         ComputerThreads.NO_THREADS = true;
     }
-
-    private static final GenPolynomialRing<BigInteger> RING =
-            new GenPolynomialRing<>(BigInteger.ONE, 1, new String[] {"x"});
 
     private JasFactorizer() {
     }
@@ -53,15 +62,32 @@ public final class JasFactorizer {
     }
 
     private static List<Factor> factorsOf(RationalPolynomial p) {
+        Deadline.checkCurrent();
         FactorAbstract<BigInteger> engine = FactorFactory.getImplementation(BigInteger.ONE);
         List<Factor> factors = new ArrayList<>();
-        for (Map.Entry<GenPolynomial<BigInteger>, Long> e : engine.factors(toJas(p)).entrySet()) {
+        for (Map.Entry<GenPolynomial<BigInteger>, Long> e : interruptible(engine, p).entrySet()) {
             RationalPolynomial f = fromJas(e.getKey());
             if (f.degree() >= 1) {
                 factors.add(new Factor(f.monic(), Math.toIntExact(e.getValue())));
             }
         }
         return factors;
+    }
+
+    /**
+     * JAS's factorisation of p over Z, in a polynomial ring made for this call with preemption
+     * allowed (another library in the same JVM may have switched it off globally); its preemption
+     * exception becomes {@link Cancelled}. The ring is not a static constant: made in a class
+     * initialiser, an interrupt would break the class for good.
+     */
+    private static Map<GenPolynomial<BigInteger>, Long> interruptible(FactorAbstract<BigInteger> engine,
+            RationalPolynomial p) {
+        PreemptStatus.setAllow();
+        try {
+            return engine.factors(toJas(new GenPolynomialRing<>(BigInteger.ONE, 1, new String[] {"x"}), p));
+        } catch (PreemptingException e) {
+            throw new Cancelled("factoring was interrupted");
+        }
     }
 
     /**
@@ -89,6 +115,7 @@ public final class JasFactorizer {
             factors.add(new Factor(RationalPolynomial.X, m));
         }
         for (Factor g : factorsOf(unit)) {
+            Deadline.checkCurrent();
             int e = g.degree();
             Rational[] scaled = new Rational[e + 1];
             for (int j = 0; j <= e; j++) {
@@ -128,6 +155,7 @@ public final class JasFactorizer {
     private static void checkProduct(RationalPolynomial p, List<Factor> factors) {
         RationalPolynomial product = RationalPolynomial.constant(p.leadingCoefficient());
         for (Factor f : factors) {
+            Deadline.checkCurrent();
             product = product.multiply(f.polynomial().pow(f.multiplicity()));
         }
         if (!product.equals(p)) {
@@ -135,12 +163,12 @@ public final class JasFactorizer {
         }
     }
 
-    private static GenPolynomial<BigInteger> toJas(RationalPolynomial p) {
+    private static GenPolynomial<BigInteger> toJas(GenPolynomialRing<BigInteger> ring, RationalPolynomial p) {
         java.math.BigInteger lcm = java.math.BigInteger.ONE;
         for (Rational c : p.coefficients()) {
             lcm = lcm.divide(lcm.gcd(c.denominator())).multiply(c.denominator());
         }
-        GenPolynomial<BigInteger> result = RING.getZERO();
+        GenPolynomial<BigInteger> result = ring.getZERO();
         for (int i = 0; i <= p.degree(); i++) {
             Rational c = p.coefficient(i).multiply(Rational.of(lcm));
             if (!c.isZero()) {
