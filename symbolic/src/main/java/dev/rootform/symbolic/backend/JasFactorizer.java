@@ -19,6 +19,8 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.locks.ReentrantLock;
 
 /**
  * Factorisation over Q into monic irreducible factors with multiplicities, by JAS over Z after
@@ -28,11 +30,16 @@ import java.util.Map;
  *
  * <p>Cancellation: JAS checks {@link Thread#isInterrupted()} whenever it builds a polynomial in a
  * ring made while preemption is allowed ({@code PreemptStatus.setAllow()}, switched on before each
- * factorisation), and then throws its own unchecked
- * exception; this class turns that into {@link Cancelled}. So an interrupt of the calling thread
- * (the front door's watchdog interrupts it when the time limit passes) stops a long
- * factorisation within one polynomial operation. {@link Deadline#checkCurrent()} is consulted
- * before the JAS call and in this class's own loops.
+ * factorisation) and then throws its own unchecked exception, which this class turns into
+ * {@link Cancelled}. So an interrupt of the calling thread (the front door's watchdog interrupts
+ * it when the time limit passes) stops a long factorisation within one polynomial operation.
+ * {@link Deadline#checkCurrent()} is consulted before the JAS call and in this class's own loops.
+ *
+ * <p>Threads: JAS is not safe for concurrent use. Its prime tables ({@code edu.jas.arith.PrimeList},
+ * used by the modular factorisation and gcd) share one list per range among all instances and
+ * append to it without synchronisation when a computation runs past the primes listed (seen in
+ * its bytecode). So one factorisation runs at a time; a thread waiting for its turn still honours
+ * its deadline.
  *
  * @since 0.1
  */
@@ -40,6 +47,11 @@ public final class JasFactorizer {
     static {
         ComputerThreads.NO_THREADS = true;
     }
+
+    /** One JAS factorisation at a time (see the class comment). */
+    private static final ReentrantLock JAS = new ReentrantLock();
+    /** How often a thread waiting for {@link #JAS} checks its deadline, in milliseconds. */
+    private static final long WAIT_STEP_MILLIS = 10;
 
     private JasFactorizer() {
     }
@@ -82,11 +94,26 @@ public final class JasFactorizer {
      */
     private static Map<GenPolynomial<BigInteger>, Long> interruptible(FactorAbstract<BigInteger> engine,
             RationalPolynomial p) {
-        PreemptStatus.setAllow();
+        lock();
         try {
+            PreemptStatus.setAllow();
             return engine.factors(toJas(new GenPolynomialRing<>(BigInteger.ONE, 1, new String[] {"x"}), p));
         } catch (PreemptingException e) {
             throw new Cancelled("factoring was interrupted");
+        } finally {
+            JAS.unlock();
+        }
+    }
+
+    /** Takes {@link #JAS}, checking the current deadline while another thread holds it. */
+    private static void lock() {
+        try {
+            while (!JAS.tryLock(WAIT_STEP_MILLIS, TimeUnit.MILLISECONDS)) {
+                Deadline.checkCurrent();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new Cancelled("interrupted while waiting to factor");
         }
     }
 
