@@ -32,4 +32,13 @@ public final class Rootform {
     public static Result solve(SolveRequest request) {
         return SolveJob.run(request);
     }
+
+    /**
+     * Recovers the shortest linear recurrence with constant rational coefficients that generates
+     * the given exact terms (confirmed by at least two terms beyond twice its order), writes it in
+     * solve's input syntax and solves that text.
+     */
+    public static Recovery recover(RecoverRequest request) {
+        return RecoverJob.run(request);
+    }
 }

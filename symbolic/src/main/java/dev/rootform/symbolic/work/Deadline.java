@@ -71,6 +71,14 @@ public final class Deadline {
         return limit;
     }
 
+    /** The one of this deadline and {@code other} that expires first ({@link #none()} never does). */
+    public Deadline sooner(Deadline other) {
+        if (limit.isEmpty()) {
+            return other;
+        }
+        return other.limit.isPresent() && other.expiresAt - expiresAt < 0 ? other : this;
+    }
+
     /** Whether the expiry instant has passed (never for {@link #none()}). */
     public boolean expired() {
         return limit.isPresent() && System.nanoTime() - expiresAt >= 0;
