@@ -93,6 +93,16 @@ class DeadlineTest {
     }
 
     @Test
+    void soonerPicksTheDeadlineThatExpiresFirst() throws InterruptedException {
+        Deadline late = Deadline.after(Duration.ofHours(1));
+        Deadline early = passed();
+        assertSame(early, late.sooner(early));
+        assertSame(early, early.sooner(late));
+        assertSame(late, late.sooner(Deadline.none()));
+        assertSame(late, Deadline.none().sooner(late));
+    }
+
+    @Test
     void limitsMustBePositive() {
         assertThrows(IllegalArgumentException.class, () -> Deadline.after(Duration.ZERO));
         assertThrows(IllegalArgumentException.class, () -> Deadline.after(Duration.ofMillis(-1)));
