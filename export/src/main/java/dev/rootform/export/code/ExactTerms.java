@@ -2,6 +2,7 @@ package dev.rootform.export.code;
 
 import dev.rootform.export.ExactTerm;
 import dev.rootform.export.ExactTerm.Reach;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
@@ -17,7 +18,8 @@ import java.util.Optional;
  * so k zeros in a row make it zero). With D = 1 the sequence is periodic and never overflows; with
  * D &ge; 2 every intermediate g is, on each residue class r mod P, a polynomial of degree &lt; D in
  * q, so |g(r + Pq)| &le; Σ_i |Δ^i g(r)|·C(q, i) (Newton's forward-difference form; the binomials do
- * not decrease in q), which bounds the safe range analytically.
+ * not decrease in q), which bounds the safe range analytically. Every loop checks the current
+ * {@link Deadline}.
  */
 final class ExactTerms {
     /** Steps run on exact integers before looking for a period. */
@@ -85,6 +87,7 @@ final class ExactTerms {
     private static Optional<Reach> run(IntegerRecurrence r, List<BigInteger> x, int steps, BigInteger min, BigInteger max) {
         int k = r.step().size();
         for (int m = x.size() - k; m < steps; m++) {
+            Deadline.checkCurrent();
             List<BigInteger> g = intermediates(r.step(), x, m);
             if (!g.stream().allMatch(v -> fits(v, min, max))) {
                 return Optional.of(new Reach.Exact(r.first() + k - 1 + m, !fits(g.get(g.size() - 1), min, max)));
@@ -100,6 +103,7 @@ final class ExactTerms {
      */
     private static Optional<Quasi> quasiPolynomial(List<BigInteger> x, int k) {
         for (int period = 1; k + k - 1 + (long) k * period < x.size(); period++) {
+            Deadline.checkCurrent();
             if (vanishes(x, k, period, k)) {
                 int degree = 1;
                 while (!vanishes(x, k, period, degree)) {
@@ -152,6 +156,7 @@ final class ExactTerms {
         int count = 2 * k;
         BigInteger first = null;
         for (int residue = 0; residue < period; residue++) {
+            Deadline.checkCurrent();
             List<List<BigInteger>> samples = new ArrayList<>();
             for (int q = 0; q < degree; q++) {
                 samples.add(intermediates(r.step(), x, k + residue + (long) period * q));
