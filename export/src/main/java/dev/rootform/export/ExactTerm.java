@@ -37,11 +37,21 @@ public record ExactTerm(List<BigInteger> step, List<BigInteger> start, long firs
 
     /** The smallest value of the integer type: −2^63, or 0 when unsigned. */
     public BigInteger minimum() {
-        return unsigned ? BigInteger.ZERO : BigInteger.ONE.shiftLeft(63).negate();
+        return minimum(unsigned);
     }
 
     /** The largest value of the integer type: 2^63 − 1, or 2^64 − 1 when unsigned. */
     public BigInteger maximum() {
+        return maximum(unsigned);
+    }
+
+    /** The smallest value of {@code int64_t}, or of {@code uint64_t} when {@code unsigned}. */
+    public static BigInteger minimum(boolean unsigned) {
+        return unsigned ? BigInteger.ZERO : BigInteger.ONE.shiftLeft(63).negate();
+    }
+
+    /** The largest value of {@code int64_t}, or of {@code uint64_t} when {@code unsigned}. */
+    public static BigInteger maximum(boolean unsigned) {
         return BigInteger.ONE.shiftLeft(unsigned ? 64 : 63).subtract(BigInteger.ONE);
     }
 

@@ -1,5 +1,6 @@
 package dev.rootform.export.code;
 
+import dev.rootform.export.CType;
 import dev.rootform.export.CVariant;
 import dev.rootform.export.CodeFacts;
 import dev.rootform.export.CodeModel;
@@ -72,7 +73,7 @@ public final class CRenderer {
         String signature = real + " " + function + (form.differential() ? "(" + real + " t)" : "(long n)");
         StringBuilder declarations = new StringBuilder();
         facts.ifPresent(f -> declarations.append("/* The closed form in ")
-                .append(variant.type() == dev.rootform.export.CType.DOUBLE ? "double precision" : "single precision")
+                .append(variant.type() == CType.DOUBLE ? "double precision" : "single precision")
                 .append(form.differential() ? "" : "; NAN below the first index").append(". */\n").append(signature).append(";\n"));
         term.ifPresent(t -> declarations.append(t.declaration()));
         List<String> includes = new ArrayList<>();

@@ -37,8 +37,8 @@ final class ExactTerms {
     /** The exact term of {@code r}, or empty when a step or a first value does not fit in 64 bits. */
     static Optional<ExactTerm> of(IntegerRecurrence r) {
         boolean unsigned = r.step().stream().allMatch(c -> c.signum() >= 0) && r.start().stream().allMatch(c -> c.signum() >= 0);
-        BigInteger min = unsigned ? BigInteger.ZERO : BigInteger.ONE.shiftLeft(63).negate();
-        BigInteger max = BigInteger.ONE.shiftLeft(unsigned ? 64 : 63).subtract(BigInteger.ONE);
+        BigInteger min = ExactTerm.minimum(unsigned);
+        BigInteger max = ExactTerm.maximum(unsigned);
         if (!r.step().stream().allMatch(c -> fits(c, min, max)) || !r.start().stream().allMatch(c -> fits(c, min, max))) {
             return Optional.empty();
         }
