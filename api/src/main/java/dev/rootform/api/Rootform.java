@@ -18,6 +18,13 @@ package dev.rootform.api;
  * outcomes (bad input, contradictory or underdetermined conditions, a failed check, the time
  * limit) are values of {@link Result}, never exceptions; an exception means a bug.
  *
+ * <p>The work runs on the calling thread. When {@link Options#timeLimit()} passes, it stops
+ * within one step of its current loop and the result is {@link Result.OutOfTime}; nothing keeps
+ * computing after the call returns. To stop it, a shared daemon thread ({@code rootform-watchdog},
+ * ending when idle) interrupts the calling thread at the limit; the call clears that interrupt
+ * again before it returns. An interrupt of the calling thread from elsewhere also stops the work
+ * with {@link Result.OutOfTime}, and that interrupt status is left set.
+ *
  * @since 0.2
  */
 public final class Rootform {

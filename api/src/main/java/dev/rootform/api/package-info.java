@@ -26,16 +26,20 @@
  *   <li><b>{@code Report} → {@code Exporter}</b> (export): each format only formats the report and
  *       computes no mathematics.</li>
  * </ol>
- * Past the time limit of the options, the result is {@link dev.rootform.api.Result.OutOfTime}.
+ * Past the time limit of the options, the work stops and the result is
+ * {@link dev.rootform.api.Result.OutOfTime}.
  * Expected outcomes are values of the sealed {@link dev.rootform.api.Result}, never exceptions;
  * {@link dev.rootform.api.Rootform} shows a whole call.
  *
  * <h2>Thread safety</h2>
  * {@link dev.rootform.api.Rootform#solve} keeps no state between calls and may be called from any
- * number of threads at once; each call does its work on a worker thread of its own, so that the time
- * limit can be kept. Requests, options, results, reports and exporters are immutable or stateless
- * and may be shared between threads; only {@link dev.rootform.api.Options.Builder} is not
- * thread-safe.
+ * number of threads at once. Each call does its work on the calling thread and starts none of its
+ * own: every long loop checks the call's deadline, and one shared daemon thread
+ * ({@code rootform-watchdog}, ending when idle) interrupts the calling thread when the time limit
+ * passes, so that factoring stops too; the call clears that interrupt before it returns. Nothing
+ * keeps computing after a call returns. Requests, options, results, reports and exporters are
+ * immutable or stateless and may be shared between threads; only
+ * {@link dev.rootform.api.Options.Builder} is not thread-safe.
  *
  * <h2>Dependencies</h2>
  * The public signatures of this package name only JDK and rootform types: no type of the libraries

@@ -8,6 +8,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.MathContext;
@@ -65,6 +66,7 @@ public final class FrequencySweep {
     }
 
     private FrequencyPoint at(Frequency w) {
+        Deadline.checkCurrent();
         Optional<Rational[]> exactPoint = gaussianPoint(w);
         Optional<FrequencyPoint> onRoot = exactPoint.isPresent() ? exactRoot(w, exactPoint.get()) : cyclotomicRoot(w);
         if (onRoot.isPresent()) {

@@ -3,6 +3,7 @@ package dev.rootform.numeric.response;
 import dev.rootform.numeric.analysis.ModeSum;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.solve.ExactSolution;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -25,6 +26,8 @@ import java.util.function.IntPredicate;
  * <p>Discrete time: the same horizon in samples; the figures are sample counts decided on the
  * exact values y[n] wherever a double is within {@link #NEAR} of a threshold.
  *
+ * <p>Every loop checks the current {@link Deadline}.
+ *
  * @since 0.3
  */
 public final class StepFigureFinder {
@@ -40,6 +43,8 @@ public final class StepFigureFinder {
     private static final Rational BAND = Rational.of(1, 50);
     private static final Rational HUNDRED = Rational.of(100);
     private static final int MAX_ITERATIONS = 400;
+    /** Grid points between two deadline checks. */
+    private static final int CHECK_EVERY = 1024;
 
     private final int digits;
 
@@ -61,6 +66,9 @@ public final class StepFigureFinder {
         double[] f = new double[n + 1];
         double[] df = new double[n + 1];
         for (int k = 0; k <= n; k++) {
+            if (k % CHECK_EVERY == 0) {
+                Deadline.checkCurrent();
+            }
             f[k] = table.value(k * h) / yInf;
             df[k] = table.derivative(k * h) / yInf;
         }
@@ -94,6 +102,9 @@ public final class StepFigureFinder {
         int n = (int) Math.min(MAX_POINTS, Math.max(first, (long) Math.ceil(horizon(table, yInf))));
         double[] f = new double[n + 1];
         for (int k = 0; k <= n; k++) {
+            if (k % CHECK_EVERY == 0) {
+                Deadline.checkCurrent();
+            }
             f[k] = (k < first ? s.valueAt(k).doubleValue() : table.value(k)) / yInf;
         }
         Exact exact = new Exact(s, finalValue);
@@ -328,6 +339,7 @@ public final class StepFigureFinder {
             BigDecimal two = BigDecimal.valueOf(2);
             BigDecimal x = a.add(b).divide(two, mc);
             for (int i = 0; i < MAX_ITERATIONS; i++) {
+                Deadline.checkCurrent();
                 BigDecimal fx = value(d, x).subtract(c);
                 if (fx.signum() == 0) {
                     return Optional.of(x);
