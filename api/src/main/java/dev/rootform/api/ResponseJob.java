@@ -109,7 +109,7 @@ final class ResponseJob {
     }
 
     private static Optional<StepFigures> stepFigures(TransferFunction h, Input input, TransferFacts facts, Solution s, int digits) {
-        if (!(input instanceof Input.Step) || !facts.stable() || facts.dcGain().isEmpty()) {
+        if (!input.isStep() || !facts.stable() || facts.dcGain().isEmpty()) {
             return Optional.empty();
         }
         StepFigureFinder finder = new StepFigureFinder(digits);
@@ -127,7 +127,7 @@ final class ResponseJob {
                         + " instability that any disturbance or initial state inside the loop excites)");
             }
         }
-        if (input instanceof Input.Step && !facts.stable()) {
+        if (input.isStep() && !facts.stable()) {
             warnings.add("no step figures: " + h.signature() + " is not BIBO stable, so the step response has no final value");
         }
         return warnings;

@@ -3,7 +3,6 @@ package dev.rootform.cli;
 import dev.rootform.api.ResponseExporters;
 import dev.rootform.api.ResponseRequest;
 import dev.rootform.api.ResponseResult;
-import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.symbolic.model.InputException;
@@ -11,6 +10,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.function.UnaryOperator;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -46,22 +46,20 @@ final class ResponseCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        PrintWriter err = spec.commandLine().getErr();
         try {
             out.check();
-            ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format).orElseThrow();
             List<String> list = frequencies == null ? List.of() : List.of(frequencies.split(",", -1));
             ResponseResult result = Rootform.response(ResponseRequest.of(transfer).to(to).frequencies(list).with(out.options(null)));
             if (result instanceof ResponseResult.Unanswered u) {
-                err.println(ErrorLine.describe(u.result()));
-                err.flush();
-                return u.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+                return out.print(u.result(), UnaryOperator.identity(), spec);
             }
+            ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format).orElseThrow();
             ResponseReport report = result.answer().orElseThrow();
             OutputOptions.refuse(renderer.refusal(report));
             out.write(renderer.render(report, out.codeNames()), spec.commandLine().getOut());
             return result instanceof ResponseResult.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
         } catch (InputException e) {
+            PrintWriter err = spec.commandLine().getErr();
             err.println(ErrorLine.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;

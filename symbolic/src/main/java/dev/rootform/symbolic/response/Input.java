@@ -14,12 +14,17 @@ import java.util.Objects;
  *
  * @since 0.3
  */
-public sealed interface Input permits Input.Impulse, Input.Step, Input.Ramp, Input.Forcing {
+public sealed interface Input permits Input.Impulse, Input.Polynomial, Input.Forcing {
     /** The name as the user writes it: {@code impulse}, {@code step}, {@code ramp} or the forcing text. */
     String text();
 
     /** u for t &gt; 0 (n &ge; 0) as forcing terms; empty for the impulse. */
     List<ForcingTerm> terms(Domain domain);
+
+    /** True for the unit step. */
+    default boolean isStep() {
+        return equals(Polynomial.STEP);
+    }
 
     /** The unit impulse δ(t) or δ[n]. */
     record Impulse() implements Input {
@@ -34,29 +39,31 @@ public sealed interface Input permits Input.Impulse, Input.Step, Input.Ramp, Inp
         }
     }
 
-    /** The unit step: 1 for t &ge; 0. */
-    record Step() implements Input {
+    /**
+     * The unit step (power 0: 1 for t &ge; 0) or the unit ramp (power 1: t, or n, for t &ge; 0).
+     *
+     * @param power 0 or 1
+     */
+    record Polynomial(int power) implements Input {
+        /** The unit step. */
+        public static final Polynomial STEP = new Polynomial(0);
+        /** The unit ramp. */
+        public static final Polynomial RAMP = new Polynomial(1);
+
+        public Polynomial {
+            if (power != 0 && power != 1) {
+                throw new IllegalArgumentException("power (" + power + ") must be 0 (step) or 1 (ramp)");
+            }
+        }
+
         @Override
         public String text() {
-            return "step";
+            return power == 0 ? "step" : "ramp";
         }
 
         @Override
         public List<ForcingTerm> terms(Domain domain) {
-            return List.of(new ForcingTerm(Rational.ONE, 0, neutral(domain), ForcingTerm.Oscillation.NONE, Rational.ZERO, false));
-        }
-    }
-
-    /** The unit ramp: t (or n) for t &ge; 0. */
-    record Ramp() implements Input {
-        @Override
-        public String text() {
-            return "ramp";
-        }
-
-        @Override
-        public List<ForcingTerm> terms(Domain domain) {
-            return List.of(new ForcingTerm(Rational.ONE, 1, neutral(domain), ForcingTerm.Oscillation.NONE, Rational.ZERO, false));
+            return List.of(new ForcingTerm(Rational.ONE, power, neutral(domain), ForcingTerm.Oscillation.NONE, Rational.ZERO, false));
         }
     }
 
@@ -94,9 +101,9 @@ public sealed interface Input permits Input.Impulse, Input.Step, Input.Ramp, Inp
             case "impulse":
                 return new Impulse();
             case "step":
-                return new Step();
+                return Polynomial.STEP;
             case "ramp":
-                return new Ramp();
+                return Polynomial.RAMP;
             default:
                 List<ForcingTerm> terms = ProblemParser.forcing(text, domain);
                 if (terms.isEmpty()) {

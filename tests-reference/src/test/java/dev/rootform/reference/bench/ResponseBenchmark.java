@@ -11,12 +11,12 @@ import java.util.List;
  * (target: median ≤ 100 ms for H(s)), each the whole job: parse, exact facts, planned problem
  * solved and verified (exact checks, the integrator cross-check), pole and zero values, and for
  * the step input the certified step figures. Not part of the test run; started by the
- * {@code bench} profile with {@code -Dbench.main=dev.rootform.reference.bench.ResponseBenchmark}
+ * {@code bench} profile with {@code -Dbench.class=dev.rootform.reference.bench.ResponseBenchmark}
  * (command in README "Performance").
  */
 public final class ResponseBenchmark {
     private static final int WARM_UP = 30;
-    private static final int RUNS = Integer.getInteger("bench.runs", 60);
+    private static final int RUNS = 60;
     /** Stable, order 10, factors of degrees 1 and 2 (poles -1, -2, -3, -4 and three complex pairs). */
     private static final String FACTORED = "H(s) = 30(s^2 + 3s + 1)/((s + 1)(s + 2)(s + 3)(s + 4)(s^2 + 2s + 5)(s^2 + s + 3)(s^2 + 4s + 13))";
     /** Stable, order 10, the denominator expanded, with an irreducible factor of degree 8. */
