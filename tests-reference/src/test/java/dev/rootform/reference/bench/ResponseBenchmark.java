@@ -4,6 +4,7 @@ import dev.rootform.api.Options;
 import dev.rootform.api.ResponseRequest;
 import dev.rootform.api.ResponseResult;
 import dev.rootform.api.Rootform;
+import dev.rootform.api.SolveRequest;
 import java.util.List;
 
 /**
@@ -25,6 +26,10 @@ public final class ResponseBenchmark {
     private static final String DIGITAL = "H(z) = 0.01/((1 - 0.5z^-1 + 0.25z^-2)(1 - 0.9z^-1 + 0.2z^-2)(1 + 0.3z^-1 + 0.1z^-2)"
             + "(1 - 1.2z^-1 + 0.72z^-2)(1 - 0.1z^-1 - 0.3z^-2))";
 
+    /** Process CPU time (all threads, JIT and GC included): less sensitive than wall time to other jobs on the machine. */
+    private static final com.sun.management.OperatingSystemMXBean CPU =
+            (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+
     private ResponseBenchmark() {
     }
 
@@ -37,25 +42,42 @@ public final class ResponseBenchmark {
         }
     }
 
+    /**
+     * The response, then for comparison {@code rootform solve} of the problem the response solved
+     * (the same equation, initial values and points: the share of the time that solve itself takes).
+     */
     private static void measure(String transfer, String input) {
-        ResponseRequest request = ResponseRequest.of(transfer).to(input).with(Options.builder().points("1", "5").build());
-        for (int i = 0; i < WARM_UP; i++) {
-            run(request);
+        Options options = Options.builder().points("1", "5").build();
+        ResponseRequest request = ResponseRequest.of(transfer).to(input).with(options);
+        ResponseResult first = Rootform.response(request);
+        if (!(first instanceof ResponseResult.Answered answered)) {
+            throw new IllegalStateException(transfer + ": " + first);
         }
-        Timings timings = new Timings();
-        for (int i = 0; i < RUNS; i++) {
-            long start = System.nanoTime();
-            run(request);
-            timings.add(System.nanoTime() - start);
-        }
-        System.out.printf("%-8s %s%n         median %.1f ms, p90 %.1f ms%n", input, transfer, timings.medianMillis(),
-                timings.quantileMillis(0.9));
+        SolveRequest solve = SolveRequest.of(answered.report().problem()).with(options);
+        System.out.printf("%-8s %s%n", input, transfer);
+        report("response", time(() -> Rootform.response(request).answer().orElseThrow()));
+        report("its solve", time(() -> Rootform.solve(solve).answer().orElseThrow()));
     }
 
-    private static void run(ResponseRequest request) {
-        ResponseResult r = Rootform.response(request);
-        if (!(r instanceof ResponseResult.Answered)) {
-            throw new IllegalStateException(request.transfer() + ": " + r);
+    /** Wall and process-CPU times of RUNS calls after WARM_UP. */
+    private static Timings[] time(Runnable call) {
+        for (int i = 0; i < WARM_UP; i++) {
+            call.run();
         }
+        Timings wall = new Timings();
+        Timings cpu = new Timings();
+        for (int i = 0; i < RUNS; i++) {
+            long start = System.nanoTime();
+            long startCpu = CPU.getProcessCpuTime();
+            call.run();
+            wall.add(System.nanoTime() - start);
+            cpu.add(CPU.getProcessCpuTime() - startCpu);
+        }
+        return new Timings[] {wall, cpu};
+    }
+
+    private static void report(String what, Timings[] t) {
+        System.out.printf("         %-10s wall median %.1f ms, p90 %.1f ms; process CPU median %.1f ms%n", what,
+                t[0].medianMillis(), t[0].quantileMillis(0.9), t[1].medianMillis());
     }
 }
