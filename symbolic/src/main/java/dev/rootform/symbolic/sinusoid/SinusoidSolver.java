@@ -139,12 +139,8 @@ public final class SinusoidSolver {
             while (a[pivot][col].isZero()) {
                 pivot++; // a pivot exists: the system is regular (see the class comment)
             }
-            TrigNumber[] rowSwap = a[pivot];
-            a[pivot] = a[col];
-            a[col] = rowSwap;
-            TrigNumber valueSwap = b[pivot];
-            b[pivot] = b[col];
-            b[col] = valueSwap;
+            exchange(a, pivot, col);
+            exchange(b, pivot, col);
             for (int row = 0; row < size; row++) {
                 if (row == col || a[row][col].isZero()) {
                     continue;
@@ -162,6 +158,12 @@ public final class SinusoidSolver {
             x[i] = b[i].divide(a[i][i]);
         }
         return x;
+    }
+
+    private static void exchange(Object[] array, int i, int j) {
+        Object held = array[i];
+        array[i] = array[j];
+        array[j] = held;
     }
 
     /** cos(dω) = T_|d|(c). */
