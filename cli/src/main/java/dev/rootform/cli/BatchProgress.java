@@ -56,7 +56,7 @@ sealed interface BatchProgress extends AutoCloseable permits BatchProgress.Bar, 
         @Override
         public void step() {
             bar.step();
-            bar.setExtraMessage(tally.counts());
+            bar.setExtraMessage(" " + tally.counts());
         }
 
         @Override
