@@ -1,6 +1,6 @@
 package dev.rootform.api;
 
-import dev.rootform.export.Formulas;
+import dev.rootform.export.notation.Formulas;
 import java.math.BigDecimal;
 
 /**

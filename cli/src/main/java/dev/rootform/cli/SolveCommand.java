@@ -7,10 +7,10 @@ import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Exporter;
-import dev.rootform.export.Identifiers;
+import dev.rootform.export.code.Identifiers;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
@@ -95,10 +95,11 @@ final class SolveCommand implements Callable<Integer> {
             Result result = Rootform.solve(SolveRequest.of(input, given).with(options));
             Optional<Report> answer = result.answer();
             if (answer.isEmpty()) {
-                err.println(Diagnostics.describe(result));
+                err.println(ErrorLine.describe(result));
                 err.flush();
                 return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
             }
+            refuse(exporter.refusal(answer.get()));
             Rendering rendering = exporter.render(answer.get(), names);
             if (header != null) {
                 write(header, rendering.header().orElseThrow());
@@ -106,7 +107,7 @@ final class SolveCommand implements Callable<Integer> {
             write(output, rendering.text());
             return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
         } catch (InputException e) {
-            err.println(Diagnostics.describe(e));
+            err.println(ErrorLine.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;
         }
@@ -114,19 +115,26 @@ final class SolveCommand implements Callable<Integer> {
 
     /** Checks the code-naming options before any work, so a bad name fails fast. */
     private CodeNames codeNames() {
-        Identifiers.javaClass(className);
+        refuse(Identifiers.javaClassRefusal(className));
         if (packageName != null) {
-            Identifiers.javaPackage(packageName);
+            refuse(Identifiers.javaPackageRefusal(packageName));
         }
-        Identifiers.cFunction("--function", function);
+        refuse(Identifiers.cFunctionRefusal("--function", function));
         if (header != null) {
             if (!format.equals("c")) {
                 throw new InputException("--header is for --format c", "", -1);
             }
-            Identifiers.cHeader(header.getFileName().toString());
+            refuse(Identifiers.cHeaderRefusal(header.getFileName().toString()));
         }
         return new CodeNames(Optional.ofNullable(packageName), className, function,
                 Optional.ofNullable(header).map(h -> h.getFileName().toString()));
+    }
+
+    /** @throws InputException with the refusal's message, when there is one */
+    private static void refuse(Optional<String> refusal) {
+        refusal.ifPresent(message -> {
+            throw new InputException(message, "", -1);
+        });
     }
 
     /** The format names, for the help text. */

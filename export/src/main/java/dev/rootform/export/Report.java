@@ -2,9 +2,9 @@ package dev.rootform.export;
 
 import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.PointValue;
-import dev.rootform.numeric.analysis.RootApproximation;
 import dev.rootform.numeric.analysis.SteadyState;
 import dev.rootform.numeric.diagnostics.Diagnostics;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
 import java.util.List;

@@ -86,7 +86,7 @@ class EvaluatorSourcesTest {
         EvaluatorSources.Summary s = sources("1.0").update();
         assertEquals(1, s.generated());
         assertEquals(List.of(
-                "src/main/rootform/general.json: no conditions: code needs a solution with fitted constants",
+                "src/main/rootform/general.json: code output needs fitted constants: give conditions for the free constants C1",
                 "src/main/rootform/twin.json: generates com/example/seq/Fibonacci.java like src/main/rootform/fibonacci.json;"
                         + " give it another class or package",
                 "src/main/rootform/typo.json: unbalanced '(' (at column 7 of \"y'' + (2y' = 0\")"), s.failures());

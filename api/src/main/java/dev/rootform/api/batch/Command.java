@@ -12,7 +12,7 @@ interface Command {
     /**
      * @param defaultTimeLimit the time limit when the request sets none
      * @return the API call, which gives the command's JSON answer or why there is none
-     * @throws dev.rootform.symbolic.parse.InputException for a missing, mistyped or invalid field
+     * @throws dev.rootform.symbolic.model.InputException for a missing, mistyped or invalid field
      */
     Supplier<Reply> prepare(Fields fields, Duration defaultTimeLimit);
 }

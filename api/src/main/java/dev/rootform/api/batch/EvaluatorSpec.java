@@ -10,7 +10,10 @@ import dev.rootform.api.ResultText;
 import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
 import dev.rootform.export.CodeNames;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.export.Exporter;
+import dev.rootform.export.Report;
+import java.util.Optional;
+import dev.rootform.symbolic.model.InputException;
 
 /**
  * A build-time spec: one JSON object that names a problem and the Java evaluator to generate for
@@ -30,7 +33,7 @@ public final class EvaluatorSpec {
 
     /**
      * Solves the spec's problem and writes its Java evaluator with the {@code java} exporter. Only a
-     * solution with fitted conditions whose every check held gives code; never throws.
+     * solution with fitted constants whose every check held gives code; never throws.
      */
     public static GeneratedCode generate(String specJson) {
         try {
@@ -55,13 +58,15 @@ public final class EvaluatorSpec {
         if (result instanceof Result.CheckFailed c) {
             return new GeneratedCode.Failure("a check failed: " + String.join(", ", c.failed()));
         }
-        if (result instanceof Result.General) {
-            return new GeneratedCode.Failure("no conditions: code needs a solution with fitted constants");
-        }
-        if (!(result instanceof Result.Solved s)) {
+        if (result.answer().isEmpty()) {
             return new GeneratedCode.Failure(ResultText.explain(result));
         }
-        String text = Exporters.byName("java").orElseThrow().render(s.report(), names).text();
-        return new GeneratedCode.Source(names.packageName(), names.className(), text);
+        Report report = result.answer().get();
+        Exporter java = Exporters.byName("java").orElseThrow();
+        Optional<String> refusal = java.refusal(report);
+        if (refusal.isPresent()) {
+            return new GeneratedCode.Failure(refusal.get());
+        }
+        return new GeneratedCode.Source(names.packageName(), names.className(), java.render(report, names).text());
     }
 }

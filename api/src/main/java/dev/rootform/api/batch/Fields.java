@@ -2,7 +2,7 @@ package dev.rootform.api.batch;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.math.BigDecimal;
 import java.time.Duration;
 import java.util.ArrayList;

@@ -3,8 +3,8 @@ package dev.rootform.api.batch;
 import dev.rootform.api.Options;
 import dev.rootform.api.SolveRequest;
 import dev.rootform.export.CodeNames;
-import dev.rootform.export.Identifiers;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.export.code.Identifiers;
+import dev.rootform.symbolic.model.InputException;
 import java.time.Duration;
 import java.util.Optional;
 
@@ -38,17 +38,30 @@ final class SolveFields {
 
     /** The names of generated Java or C code, checked; {@code header} only with {@code format} c. */
     static CodeNames codeNames(Fields f, String format) {
-        String function = Identifiers.cFunction("function", f.text("function").orElse(CodeNames.DEFAULT_FUNCTION));
-        Optional<String> header = f.text("header").map(Identifiers::cHeader);
-        if (header.isPresent() && !format.equals("c")) {
-            throw new InputException("\"header\" is for format c", "", -1);
+        String function = f.text("function").orElse(CodeNames.DEFAULT_FUNCTION);
+        refuse(Identifiers.cFunctionRefusal("function", function));
+        Optional<String> header = f.text("header");
+        if (header.isPresent()) {
+            if (!format.equals("c")) {
+                throw new InputException("\"header\" is for format c", "", -1);
+            }
+            refuse(Identifiers.cHeaderRefusal(header.get()));
         }
         return names(f, function, header);
     }
 
     private static CodeNames names(Fields f, String function, Optional<String> header) {
-        String className = Identifiers.javaClass(f.text("class").orElse(CodeNames.DEFAULT_CLASS));
-        Optional<String> packageName = f.text("package").map(Identifiers::javaPackage);
+        String className = f.text("class").orElse(CodeNames.DEFAULT_CLASS);
+        refuse(Identifiers.javaClassRefusal(className));
+        Optional<String> packageName = f.text("package");
+        packageName.ifPresent(p -> refuse(Identifiers.javaPackageRefusal(p)));
         return new CodeNames(packageName, className, function, header);
+    }
+
+    /** @throws InputException with the refusal's message, when there is one */
+    static void refuse(Optional<String> refusal) {
+        refusal.ifPresent(message -> {
+            throw new InputException(message, "", -1);
+        });
     }
 }

@@ -12,7 +12,7 @@ import dev.rootform.export.CodeNames;
 import dev.rootform.export.Exporter;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.io.UncheckedIOException;
 import java.time.Duration;
 import java.util.Optional;
@@ -43,6 +43,10 @@ final class SolveLine {
         Optional<Report> answer = result.answer();
         if (answer.isEmpty()) {
             return new Reply.Failed(ResultText.explain(result), result instanceof Result.OutOfTime ? 1 : 2);
+        }
+        Optional<String> refusal = exporter.refusal(answer.get());
+        if (refusal.isPresent()) {
+            return new Reply.Failed(refusal.get(), 2);
         }
         int exit = result instanceof Result.CheckFailed ? 3 : 0;
         Rendering rendering = exporter.render(answer.get(), names);

@@ -33,7 +33,7 @@ class EvaluatorSpecTest {
 
     @ParameterizedTest(name = "[{index}] {0}")
     @CsvSource(delimiter = '|', textBlock = """
-        {"problem": "(D+1) y = 0", "class": "Decay"}                       | no conditions: code needs a solution with fitted constants
+        {"problem": "(D+1) y = 0", "class": "Decay"}                       | code output needs fitted constants: give conditions for the free constants C1
         {"problem": "y'' + (2y' = 0"}                                      | unbalanced '(' (at column 7 of "y'' + (2y' = 0")
         {"problem": "x[n+1] = x[n]; x[0] = 1", "function": "f"}            | unknown field "function" for a spec
         {"problem": "x[n+2] = -x[n]; x[0] = 1; x[2] = 0"}                  | every solution has x[0] + x[2] = 0

@@ -1,0 +1,13 @@
+package dev.rootform.export.code;
+
+/**
+ * One real term of emitted code, with constants rounded once from their exact values:
+ * amplitude·v^power·G(v)·cos(frequency·v + phase), where G(v) = e^{growth·v} (differential) or
+ * growth^v (difference); frequency 0 means the cosine factor is left out.
+ *
+ * @since 0.2
+ */
+record Wave(double amplitude, int power, double growth, double frequency, double phase) {
+    /** The wave that stands for an empty sum. */
+    static final Wave ZERO = new Wave(0.0, 0, 0.0, 0.0, 0.0);
+}
