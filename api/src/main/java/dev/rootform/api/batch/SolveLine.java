@@ -1,7 +1,6 @@
 package dev.rootform.api.batch;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.rootform.api.Exporters;
 import dev.rootform.api.Result;
@@ -60,8 +59,7 @@ final class SolveLine {
 
     private static ObjectNode parse(String json) {
         try {
-            JsonNode node = Json.read(json);
-            return (ObjectNode) node;
+            return (ObjectNode) Json.read(json);
         } catch (JsonProcessingException e) {
             throw new UncheckedIOException(e);
         }
