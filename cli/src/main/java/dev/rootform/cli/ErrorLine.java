@@ -21,12 +21,22 @@ final class ErrorLine {
         return describe(e.getMessage(), e.source(), e.position());
     }
 
+    /**
+     * The message, and when it has a place, the input line with a caret under it: a source of
+     * several lines (a file) is cut to the line of the place, which is then named.
+     */
     private static String describe(String message, String source, int position) {
         StringBuilder sb = new StringBuilder("rootform: ").append(message);
         if (position >= 0 && source != null && !source.isEmpty()) {
-            int column = Math.min(position, source.length());
-            sb.append(" (at column ").append(column + 1).append(')').append(System.lineSeparator())
-                    .append("  ").append(source).append(System.lineSeparator())
+            int at = Math.min(position, source.length());
+            int from = source.lastIndexOf('\n', at - 1) + 1;
+            int to = source.indexOf('\n', at);
+            String line = source.substring(from, to < 0 ? source.length() : to);
+            int column = at - from;
+            boolean several = from > 0 || to >= 0;
+            sb.append(several ? " (at line " + (source.substring(0, from).chars().filter(c -> c == '\n').count() + 1) + ", column "
+                    : " (at column ").append(column + 1).append(')').append(System.lineSeparator())
+                    .append("  ").append(line).append(System.lineSeparator())
                     .append("  ").append(" ".repeat(column)).append('^');
         }
         return sb.toString();
