@@ -11,6 +11,7 @@ final class Commands {
     static final String DEFAULT = "solve";
 
     private static final Map<String, Command> TABLE = new TreeMap<>(Map.of(
+            "recover", RecoverLine::prepare,
             "solve", SolveLine::prepare));
 
     private Commands() {

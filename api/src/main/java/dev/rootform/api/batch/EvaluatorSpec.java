@@ -43,8 +43,8 @@ public final class EvaluatorSpec {
             }
             Fields f = new Fields((ObjectNode) node);
             f.text("description");
-            SolveRequest request = SolveFields.request(f, Options.DEFAULT_TIME_LIMIT);
-            CodeNames names = SolveFields.javaNames(f);
+            SolveRequest request = SolveLine.request(f, Options.DEFAULT_TIME_LIMIT, true);
+            CodeNames names = OutputFields.javaNames(f);
             f.rejectUnknown("a spec");
             return generate(Rootform.solve(request), names);
         } catch (JsonProcessingException e) {

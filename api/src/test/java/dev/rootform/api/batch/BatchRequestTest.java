@@ -55,7 +55,7 @@ class BatchRequestTest {
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digts": 3}    | unknown field "digts" for solve
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digits": "3"} | "digits" must be a whole number in 1..10000
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digits": 0}   | "digits" must be a whole number in 1..10000
-        {"id": "b", "command": "tally", "problem": "x[n+1] = x[n]"}      | unknown command "tally" (one of solve)
+        {"id": "b", "command": "tally", "problem": "x[n+1] = x[n]"}      | unknown command "tally" (one of recover, solve)
         {"id": "b"}                                                       | the request has no "problem"
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "format": "pdf"} | "format" pdf is not one of
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "header": "a.h"}  | "header" is for format c
@@ -116,6 +116,24 @@ class BatchRequestTest {
                 + " \"function\": \"fib\", \"header\": \"fib.h\"}"));
         assertTrue(c.get("text").asText().contains("#include \"fib.h\""), c.toString());
         assertTrue(c.get("header").asText().contains("fib(long n)"), c.toString());
+    }
+
+    @Test
+    void recoverGivesTheRecurrenceInFrontOfItsSolveAnswer() throws Exception {
+        // 1, 1, 2, 3, 5, 8, ... are the Fibonacci numbers F(1), F(2), ... (OEIS A000045); F(30) = 832040 (from memory)
+        JsonNode j = json(answer("{\"id\": \"rec\", \"command\": \"recover\", \"terms\": [1, 1, 2, 3, 5, 8, 13, 21, 34, 55],"
+                + " \"start\": 1, \"valuesAt\": [\"30\"]}"));
+        assertEquals(0, j.get("exit").asInt(), j.toString());
+        assertEquals(2, j.get("recovered").get("order").asInt(), j.toString());
+        assertEquals("832040", j.get("values").get(0).get("exact").asText());
+        JsonNode few = json(answer("{\"id\": \"few\", \"command\": \"recover\", \"terms\": \"1, 2, 4\"}"));
+        assertEquals(2, few.get("exit").asInt());
+        assertTrue(few.get("error").asText().contains("too few"), few.toString());
+        JsonNode java = json(answer("{\"id\": \"j\", \"command\": \"recover\", \"terms\": \"1, 2, 4, 8, 16, 32\", \"format\": \"java\","
+                + " \"class\": \"Powers\"}"));
+        assertTrue(java.get("text").asText().contains("public final class Powers"), java.toString());
+        JsonNode none = json(answer("{\"id\": \"n\", \"command\": \"recover\", \"terms\": \"1, 2, 4, 8, 16, 32\", \"problem\": \"x[n+1] = x[n]\"}"));
+        assertTrue(none.get("error").asText().contains("unknown field \"problem\" for recover"), none.toString());
     }
 
     @Test
