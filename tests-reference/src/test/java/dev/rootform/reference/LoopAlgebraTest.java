@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -20,7 +20,7 @@ import org.junit.jupiter.params.provider.CsvSource;
  */
 class LoopAlgebraTest {
     private static RationalFunction f(String num, String den) {
-        return RationalFunction.of(p(num), p(den));
+        return new RationalFunction(p(num), p(den));
     }
 
     private static RationalPolynomial p(String ascending) {

@@ -1,6 +1,7 @@
 package dev.rootform.export.code;
 
 import dev.rootform.export.Rendering;
+import dev.rootform.export.document.ResponseNotation;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.export.notation.CommentText;
 import dev.rootform.symbolic.response.Impulse;
@@ -29,7 +30,7 @@ public final class ResponseCode {
     private static List<String> lines(ResponseReport r) {
         TransferFunction h = r.transfer();
         List<String> lines = new ArrayList<>();
-        lines.add("Response of " + h.signature() + " = " + h.value().toString(h.variable()) + " to the input "
+        lines.add("Response of " + ResponseNotation.transfer(h) + " to the input "
                 + r.plan().input().text() + " from zero initial state; the output is 0 before "
                 + (h.continuous() ? "t = 0" : "n = 0") + ". Solved as: " + r.problem());
         if (h.continuous()) {

@@ -7,7 +7,8 @@ import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.Surd;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
+import dev.rootform.symbolic.transfer.RationalFunctions;
 import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.BigInteger;
@@ -55,8 +56,8 @@ public final class FrequencySweep {
         this.digits = digits;
         this.precision = digits + GUARD_DIGITS;
         List<Root> all = new ArrayList<>();
-        addRoots(all, h.zeros(), 1);
-        addRoots(all, h.poles(), -1);
+        addRoots(all, RationalFunctions.zeros(h), 1);
+        addRoots(all, RationalFunctions.poles(h), -1);
         this.roots = List.copyOf(all);
     }
 

@@ -3,7 +3,8 @@ package dev.rootform.symbolic.parse;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.transfer.LowestTerms;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
+import dev.rootform.symbolic.transfer.RationalFunctions;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -105,7 +106,7 @@ record Block(Rational scale, List<Piece> top, List<Piece> bottom) {
 
     /** The value as a rational function in lowest terms, with the factors that reducing it cancelled. */
     LowestTerms lowestTerms() {
-        return RationalFunction.lowestTerms(product(top).multiply(scale), product(bottom));
+        return RationalFunctions.lowestTerms(product(top).multiply(scale), product(bottom));
     }
 
     private static RationalPolynomial product(List<Piece> pieces) {

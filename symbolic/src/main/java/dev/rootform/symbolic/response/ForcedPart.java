@@ -9,7 +9,7 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.ForcingTerm.Oscillation;
 import dev.rootform.symbolic.solve.LinearSystem;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;

@@ -8,7 +8,7 @@ import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import dev.rootform.symbolic.model.InputException;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.transfer.TransferFunction;
 import java.util.ArrayList;
 import java.util.Collections;

@@ -1,7 +1,7 @@
 package dev.rootform.symbolic.response;
 
 import dev.rootform.symbolic.model.Problem;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.transfer.TransferFunction;
 import java.util.List;
 import java.util.Objects;

@@ -5,6 +5,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.solve.ExactRoots;
+import dev.rootform.symbolic.transfer.RationalFunctions;
 import dev.rootform.symbolic.transfer.StabilityTest;
 import dev.rootform.symbolic.transfer.TransferFunction;
 import java.util.List;
@@ -55,9 +56,11 @@ public record TransferFacts(List<Factor> poles, List<ExactRoot> poleRoots, List<
 
     /** The facts of h. */
     public static TransferFacts of(TransferFunction h) {
-        List<Factor> poles = h.value().poles();
-        List<Factor> zeros = h.value().zeros();
-        Optional<Rational> dc = h.value().evaluate(h.continuous() ? Rational.ZERO : Rational.ONE);
+        List<Factor> poles = RationalFunctions.poles(h.value());
+        List<Factor> zeros = RationalFunctions.zeros(h.value());
+        Rational dcPoint = h.continuous() ? Rational.ZERO : Rational.ONE;
+        Optional<Rational> dc = h.value().denominator().evaluate(dcPoint).isZero() ? Optional.empty()
+                : Optional.of(h.value().evaluate(dcPoint));
         List<HiddenMode> hidden = h.cancelled().stream()
                 .map(f -> new HiddenMode(f, ExactRoots.of(List.of(f)), stable(h, f.polynomial()))).toList();
         return new TransferFacts(poles, ExactRoots.of(poles), zeros, ExactRoots.of(zeros), dc, h.value().relativeDegree(),

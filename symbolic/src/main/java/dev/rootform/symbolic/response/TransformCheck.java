@@ -4,7 +4,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import java.util.List;
 
 /**

@@ -5,7 +5,7 @@ import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.ForcingTerm.Oscillation;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import java.util.List;
 import java.util.Optional;
 
@@ -51,7 +51,7 @@ final class Transforms {
         Rational a = t.exponential();
         RationalPolynomial shifted = RationalPolynomial.of(a.negate(), Rational.ONE);
         if (t.oscillation() == Oscillation.NONE) {
-            return Optional.of(RationalFunction.of(RationalPolynomial.ONE, shifted));
+            return Optional.of(new RationalFunction(RationalPolynomial.ONE, shifted));
         }
         if (t.frequencyTimesPi()) {
             return Optional.empty();
@@ -59,13 +59,13 @@ final class Transforms {
         Rational w = t.frequency();
         RationalPolynomial den = shifted.multiply(shifted).add(RationalPolynomial.constant(w.multiply(w)));
         RationalPolynomial num = t.oscillation() == Oscillation.COS ? shifted : RationalPolynomial.constant(w);
-        return Optional.of(RationalFunction.of(num, den));
+        return Optional.of(new RationalFunction(num, den));
     }
 
     private static Optional<RationalFunction> zTransform(ForcingTerm t) {
         Rational b = t.exponential();
         if (t.oscillation() == Oscillation.NONE) {
-            return Optional.of(RationalFunction.of(RationalPolynomial.X, RationalPolynomial.of(b.negate(), Rational.ONE)));
+            return Optional.of(new RationalFunction(RationalPolynomial.X, RationalPolynomial.of(b.negate(), Rational.ONE)));
         }
         if (!t.frequencyTimesPi()) {
             return Optional.empty();
@@ -79,6 +79,6 @@ final class Transforms {
         RationalPolynomial den = RationalPolynomial.of(b.multiply(b), bc.multiply(-2), Rational.ONE);
         RationalPolynomial num = t.oscillation() == Oscillation.COS ? RationalPolynomial.of(Rational.ZERO, bc.negate(), Rational.ONE)
                 : RationalPolynomial.of(Rational.ZERO, b.multiply(sin.get()));
-        return Optional.of(RationalFunction.of(num, den));
+        return Optional.of(new RationalFunction(num, den));
     }
 }

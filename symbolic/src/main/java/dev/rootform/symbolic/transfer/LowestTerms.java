@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.transfer;
 
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.algebra.Factor;
 import java.util.List;
 import java.util.Objects;

@@ -1,8 +1,6 @@
 package dev.rootform.symbolic.transfer;
 
-import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 
@@ -32,31 +30,5 @@ public record PartialFractions(RationalPolynomial polynomialPart, List<PartialFr
             Objects.requireNonNull(factor, "factor");
             Objects.requireNonNull(numerator, "numerator");
         }
-    }
-
-    /**
-     * The decomposition of f: for each factor g^m of D, B = N·(D/g^m)^(-1) mod g^m (Chinese
-     * remainder theorem), then B written in powers of g by repeated division.
-     */
-    static PartialFractions of(RationalFunction f) {
-        RationalPolynomial n = f.numerator();
-        RationalPolynomial d = f.denominator();
-        List<Fraction> fractions = new ArrayList<>();
-        for (Factor g : f.poles()) {
-            RationalPolynomial q = g.polynomial().pow(g.multiplicity());
-            RationalPolynomial rest = d.divide(q);
-            RationalPolynomial b = n.multiply(rest.inverseModulo(q)).mod(q);
-            // b = Σ_{j=1..m} A_j g^(m-j): the remainders of repeated division by g give A_m, A_{m-1}, …
-            List<Fraction> ofFactor = new ArrayList<>();
-            for (int j = g.multiplicity(); j >= 1; j--) {
-                RationalPolynomial[] qr = b.divideAndRemainder(g.polynomial());
-                if (!qr[1].isZero()) {
-                    ofFactor.add(0, new Fraction(g.polynomial(), j, qr[1]));
-                }
-                b = qr[0];
-            }
-            fractions.addAll(ofFactor);
-        }
-        return new PartialFractions(f.polynomialPart(), fractions);
     }
 }

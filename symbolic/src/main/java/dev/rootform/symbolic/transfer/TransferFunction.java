@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.transfer;
 
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.model.Domain;
 import java.util.List;

@@ -10,7 +10,7 @@ import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.ForcingTerm;
-import dev.rootform.symbolic.transfer.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.transfer.TransferFunction;
 import java.util.List;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -23,7 +23,7 @@ class TransferParserTest {
     }
 
     private static RationalFunction f(String num, String den) {
-        return RationalFunction.of(p(num.split(" ")), p(den.split(" ")));
+        return new RationalFunction(p(num.split(" ")), p(den.split(" ")));
     }
 
     @ParameterizedTest
