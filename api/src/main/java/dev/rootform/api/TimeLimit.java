@@ -11,7 +11,7 @@ import java.util.function.Supplier;
 
 /**
  * Runs one job with a wall-clock limit on a daemon thread; past the limit the caller gets
- * {@link Result.OutOfTime}.
+ * {@link Result.OutOfTime} (or the value it names) and the job's thread is interrupted.
  */
 final class TimeLimit {
     private TimeLimit() {
@@ -19,16 +19,21 @@ final class TimeLimit {
 
     /** The job's result, or {@link Result.OutOfTime}; the job's unchecked exceptions pass through. */
     static Result within(Duration limit, Supplier<Result> job) {
+        return within(limit, job, new Result.OutOfTime(limit));
+    }
+
+    /** The job's result, or {@code late} past the limit; the job's unchecked exceptions pass through. */
+    static <T> T within(Duration limit, Supplier<T> job, T late) {
         ExecutorService executor = Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, "rootform-job");
             t.setDaemon(true);
             return t;
         });
         try {
-            Future<Result> future = executor.submit(job::get);
+            Future<T> future = executor.submit(job::get);
             return future.get(limit.toMillis(), TimeUnit.MILLISECONDS);
         } catch (TimeoutException e) {
-            return new Result.OutOfTime(limit);
+            return late;
         } catch (ExecutionException e) {
             if (e.getCause() instanceof RuntimeException r) {
                 throw r;
@@ -36,7 +41,7 @@ final class TimeLimit {
             throw new IllegalStateException(e.getCause());
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-            return new Result.OutOfTime(limit);
+            return late;
         } finally {
             executor.shutdownNow();
         }

@@ -14,8 +14,8 @@ import java.util.stream.Collectors;
  *
  * @since 0.2
  */
-final class CodeHeader {
-    static final String CAUTION = "A closed form describes the idealised linear model, not the machine. Where this code "
+public final class CodeHeader {
+    public static final String CAUTION = "A closed form describes the idealised linear model, not the machine. Where this code "
             + "feeds a structure, a vehicle, a medical device or any safety function, validate it against the physical "
             + "system and follow the applicable codes and licensed engineering practice.";
     private static final int WIDTH = 96;

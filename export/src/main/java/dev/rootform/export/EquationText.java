@@ -21,15 +21,15 @@ import java.util.List;
  *
  * @since 0.1
  */
-final class EquationText {
+public final class EquationText {
     /** The name of the characteristic variable in plain text. */
-    static final String LAMBDA = "λ";
+    public static final String LAMBDA = "λ";
 
     private EquationText() {
     }
 
     /** Σ a_j·(j-th derivative or shift) = right-hand side, highest order first, zero terms left out. */
-    static String equation(LinearEquation eq) {
+    public static String equation(LinearEquation eq) {
         StringBuilder sb = new StringBuilder();
         for (int j = eq.order(); j >= 0; j--) {
             Rational a = eq.coefficients().get(j);
@@ -65,7 +65,7 @@ final class EquationText {
     }
 
     /** lc·(f1)^m1·(f2)^m2…, e.g. {@code λ·(λ - 2)} or {@code (λ + 1)^2}. */
-    static String factorisation(RationalPolynomial characteristic, List<Factor> factors) {
+    public static String factorisation(RationalPolynomial characteristic, List<Factor> factors) {
         Rational lc = characteristic.leadingCoefficient();
         boolean alone = factors.size() == 1 && factors.get(0).multiplicity() == 1 && lc.isOne();
         List<String> parts = new ArrayList<>();

@@ -66,7 +66,7 @@ public final class LatexRenderer {
     }
 
     /** Plain equation text in LaTeX math: {@code ·} as \cdot, {@code y^(4)} as y^{(4)}, other powers braced. */
-    static String math(String plain) {
+    public static String math(String plain) {
         return plain.replace("·", " \\cdot ").replace("π", "\\pi ").replace("λ", "\\lambda ").replace("√", "\\sqrt ")
                 .replaceAll("\\^\\((\\d+)\\)", "^{($1)}").replaceAll("\\^\\(([^()]*)\\)", "^{$1}");
     }

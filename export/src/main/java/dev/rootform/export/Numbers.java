@@ -10,7 +10,7 @@ import java.math.MathContext;
  *
  * @since 0.1
  */
-final class Numbers {
+public final class Numbers {
     /** Beyond this many digits before or after the point, a value is written with an exponent. */
     private static final int PLAIN_LIMIT = 20;
 
@@ -18,7 +18,7 @@ final class Numbers {
     }
 
     /** x rounded to {@code digits} significant digits, without trailing zeros, e.g. {@code 0.2231}. */
-    static String decimal(BigDecimal x, int digits) {
+    public static String decimal(BigDecimal x, int digits) {
         BigDecimal r = x.round(new MathContext(Math.max(1, digits))).stripTrailingZeros();
         if (r.signum() == 0) {
             return "0";

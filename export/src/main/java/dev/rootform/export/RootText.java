@@ -10,12 +10,12 @@ import dev.rootform.symbolic.closedform.Surd;
  *
  * @since 0.1
  */
-final class RootText {
+public final class RootText {
     private RootText() {
     }
 
     /** The exact root; an implicit root is named by its index among the roots of its factor. */
-    static String exact(ExactRoot root) {
+    public static String exact(ExactRoot root) {
         if (root instanceof ExactRoot.Explicit e) {
             return complex(e.re(), e.im());
         }
@@ -30,7 +30,7 @@ final class RootText {
     }
 
     /** re + im·i rounded to {@code digits} significant digits; just re when im is 0. */
-    static String decimal(RootApproximation a, int digits) {
+    public static String decimal(RootApproximation a, int digits) {
         String re = Numbers.decimal(a.re(), digits);
         if (a.im().signum() == 0) {
             return re;

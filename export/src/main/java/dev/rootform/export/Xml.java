@@ -5,12 +5,12 @@ package dev.rootform.export;
  *
  * @since 0.2
  */
-final class Xml {
+public final class Xml {
     private Xml() {
     }
 
     /** text with {@code & < > "} replaced by entity references. */
-    static String escape(String text) {
+    public static String escape(String text) {
         return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
     }
 }

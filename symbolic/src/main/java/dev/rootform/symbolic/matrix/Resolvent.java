@@ -71,6 +71,24 @@ public record Resolvent(RationalMatrix matrix, RationalPolynomial characteristic
         return characteristic.divide(g.monic());
     }
 
+    /**
+     * True when (sI − A)·adj(sI − A) = χ(s)·I holds exactly, coefficient by coefficient:
+     * M_{k-1} − A·M_k = c_k·I for k = 0..n (M_{-1} = M_n = 0).
+     */
+    public boolean adjugateIdentityHolds() {
+        int n = size();
+        RationalMatrix zero = RationalMatrix.zero(n, n);
+        RationalMatrix identity = RationalMatrix.identity(n);
+        for (int k = 0; k <= n; k++) {
+            RationalMatrix lower = k == 0 ? zero : adjugate.get(k - 1);
+            RationalMatrix upper = k == n ? zero : adjugate.get(k);
+            if (!lower.subtract(matrix.multiply(upper)).equals(identity.scale(characteristic.coefficient(k)))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** p(A) by Horner's rule. */
     public static RationalMatrix evaluate(RationalPolynomial p, RationalMatrix a) {
         RationalMatrix result = RationalMatrix.zero(a.rows(), a.columns());

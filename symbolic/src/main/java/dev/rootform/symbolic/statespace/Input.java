@@ -1,5 +1,7 @@
 package dev.rootform.symbolic.statespace;
 
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import java.util.List;
 import java.util.Objects;
@@ -36,12 +38,12 @@ public sealed interface Input permits Input.None, Input.Impulse, Input.Step, Inp
         }
     }
 
-    /** The input as forcing terms: empty for none, 1 for a step; an impulse has none. */
-    default List<ForcingTerm> terms() {
+    /** The input as forcing terms in the given time domain: empty for none, 1 for a step; an impulse has none. */
+    default List<ForcingTerm> terms(Domain domain) {
         if (this instanceof Signal s) {
             return s.terms();
         }
-        return this instanceof Step ? List.of(InputCalculus.constant(dev.rootform.symbolic.algebra.Rational.ONE)) : List.of();
+        return this instanceof Step ? List.of(InputCalculus.constant(domain, Rational.ONE)) : List.of();
     }
 
     /** How the input is written: {@code 0}, {@code δ}, {@code 1}, or the signal's text. */

@@ -23,9 +23,10 @@ public final class InputCalculus {
     private InputCalculus() {
     }
 
-    /** The constant c. */
-    public static ForcingTerm constant(Rational c) {
-        return new ForcingTerm(c, 0, Rational.ZERO, Oscillation.NONE, Rational.ZERO, false);
+    /** The constant c: rate 0 (continuous) or base 1 (discrete). */
+    public static ForcingTerm constant(Domain domain, Rational c) {
+        Rational exponential = domain == Domain.DIFFERENTIAL ? Rational.ZERO : Rational.ONE;
+        return new ForcingTerm(c, 0, exponential, Oscillation.NONE, Rational.ZERO, false);
     }
 
     /**

@@ -69,7 +69,7 @@ public final class StateEquations {
             return pulse(x0, b, dd);
         }
         List<List<ForcingTerm>> u = new ArrayList<>();
-        u.add(input.terms());
+        u.add(input.terms(model.domain()));
         for (int l = 0; l < order; l++) {
             u.add(InputCalculus.next(model.domain(), u.get(l)));
         }
