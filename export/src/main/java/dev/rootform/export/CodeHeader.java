@@ -120,7 +120,7 @@ public final class CodeHeader {
     }
 
     /** Sanitised lines wrapped at about {@link #WIDTH} characters. */
-    static List<String> wrap(List<String> lines) {
+    public static List<String> wrap(List<String> lines) {
         List<String> out = new ArrayList<>();
         for (String raw : lines) {
             String line = sanitize(raw);

@@ -8,13 +8,17 @@ import java.util.List;
  *
  * @since 0.1
  */
-final class Layout {
+public final class Layout {
     private static final int LABEL_WIDTH = 16;
 
     private final StringBuilder text = new StringBuilder();
 
+    /** An empty layout. */
+    public Layout() {
+    }
+
     /** Adds a section: the label on the first line, nothing for an empty list. */
-    Layout section(String label, List<String> lines) {
+    public Layout section(String label, List<String> lines) {
         for (int i = 0; i < lines.size(); i++) {
             String head = i == 0 ? label : "";
             text.append(head).append(" ".repeat(Math.max(1, LABEL_WIDTH - head.length()))).append(lines.get(i)).append('\n');
@@ -23,7 +27,7 @@ final class Layout {
     }
 
     /** Adds a one-line section. */
-    Layout line(String label, String line) {
+    public Layout line(String label, String line) {
         return section(label, List.of(line));
     }
 

@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.statespace;
 
+import dev.rootform.symbolic.algebra.NumberField;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.ClosedForm;
@@ -76,9 +77,12 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
 
     /** X^(m)(0) from every entry's exact form: X(0) = I and X^(m+1)(0) = A·X^(m)(0), m &lt; d. */
     private static Check derivatives(RationalMatrix a, List<List<ExactSolution>> x, int d) {
+        Derivatives at = new Derivatives(x.get(0).get(0), d);
         RationalMatrix previous = null;
         for (int m = 0; m <= d; m++) {
-            RationalMatrix current = matrix(x, true, m);
+            int order = m;
+            List<List<Rational>> rows = x.stream().map(row -> row.stream().map(s -> at.of(s, order)).toList()).toList();
+            RationalMatrix current = RationalMatrix.of(rows, x.size());
             RationalMatrix expected = m == 0 ? RationalMatrix.identity(a.rows()) : a.multiply(previous);
             if (!current.equals(expected)) {
                 return new Check("e^(At) satisfies X' = AX, X(0) = I", false, m == 0 ? "X(0) is not I"
@@ -95,7 +99,7 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
     private static Check powersCheck(RationalMatrix a, List<List<ExactSolution>> x, int d) {
         RationalMatrix previous = null;
         for (int m = 0; m <= d + 1; m++) {
-            RationalMatrix current = matrix(x, false, m);
+            RationalMatrix current = matrix(x, m);
             RationalMatrix expected = m == 0 ? RationalMatrix.identity(a.rows()) : a.multiply(previous);
             if (!current.equals(expected)) {
                 return new Check("A^n satisfies X[n+1] = A·X[n], X[0] = I", false, m == 0 ? "X[0] is not I"
@@ -104,7 +108,7 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
             previous = current;
         }
         for (long n : FAR_INDICES) {
-            if (!matrix(x, false, n).equals(a.power(n))) {
+            if (!matrix(x, n).equals(a.power(n))) {
                 return new Check("A^n satisfies X[n+1] = A·X[n], X[0] = I", false, "X[" + n + "] differs from A^" + n);
             }
         }
@@ -112,12 +116,53 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
                 + " X[m+1] = A·X[m] for m = 0.." + (d + 1) + ", and X[n] = A^n (repeated squaring) at n = 25, 64");
     }
 
-    /** The matrix of entry values: exact derivatives at 0 of order m (continuous) or values at n = m. */
-    private static RationalMatrix matrix(List<List<ExactSolution>> x, boolean derivative, long m) {
+    /** The matrix of entry values at n = m. */
+    private static RationalMatrix matrix(List<List<ExactSolution>> x, long m) {
         List<List<Rational>> rows = new ArrayList<>();
         for (List<ExactSolution> row : x) {
-            rows.add(row.stream().map(s -> derivative ? s.derivativeAtOrigin((int) m) : s.valueAt(m)).toList());
+            rows.add(row.stream().map(s -> s.valueAt(m)).toList());
         }
         return RationalMatrix.of(rows, x.size());
+    }
+
+    /**
+     * Exact derivatives at the origin of solutions that share their factors, from the power sums
+     * T_s = Tr(α^s) of each factor (computed once): for a component Σ_α Σ_i c_i(α)·t^i·e^{αt},
+     * y^(m)(0) = Σ_i m!/(m−i)!·Tr(c_i(α)·α^{m−i}) = Σ_i m!/(m−i)!·Σ_l c_{i,l}·T_{l+m−i}.
+     */
+    private static final class Derivatives {
+        private final List<List<Rational>> traces = new ArrayList<>();
+
+        Derivatives(ExactSolution sample, int maxOrder) {
+            for (var c : sample.components()) {
+                NumberField k = new NumberField(c.factor().polynomial());
+                List<Rational> t = new ArrayList<>();
+                RationalPolynomial power = RationalPolynomial.ONE;
+                for (int s = 0; s <= maxOrder + c.factor().degree(); s++) {
+                    t.add(k.trace(power));
+                    power = k.multiply(power, k.generator());
+                }
+                traces.add(t);
+            }
+        }
+
+        Rational of(ExactSolution s, int m) {
+            Rational sum = Rational.ZERO;
+            for (int j = 0; j < s.components().size(); j++) {
+                List<RationalPolynomial> c = s.components().get(j).coefficients();
+                List<Rational> t = traces.get(j);
+                Rational falling = Rational.ONE;
+                for (int i = 0; i < c.size() && i <= m; i++) {
+                    RationalPolynomial ci = c.get(i);
+                    for (int l = 0; l <= ci.degree(); l++) {
+                        if (!ci.coefficient(l).isZero()) {
+                            sum = sum.add(falling.multiply(ci.coefficient(l)).multiply(t.get(l + m - i)));
+                        }
+                    }
+                    falling = falling.multiply(m - i);
+                }
+            }
+            return sum;
+        }
     }
 }
