@@ -91,7 +91,13 @@ public final class LinearCombination {
             Surd q = i < y.size() ? value(y.get(i)) : Surd.of(Rational.ZERO);
             sum.add(new Coefficient.Exact(add(p, q)));
         }
-        return (x.size() >= y.size() ? a : b).withCoefficients(sum);
+        if (a instanceof Term.RootSum) {
+            while (sum.size() > 1 && sum.get(sum.size() - 1).isZero()) {
+                sum.remove(sum.size() - 1);
+            }
+            return ((Term.RootSum) a).withCoefficients(sum);
+        }
+        return a.withCoefficients(sum);
     }
 
     /** p + q for surds with the same radicand (or rational). */
