@@ -42,6 +42,9 @@ import java.util.OptionalInt;
  * against the matrices themselves ({@link ResponseCheck}), and classify the outcome.
  */
 final class SystemJob {
+    /** Digits of the scalar solves' values at least, so that the cross-check compares more than the shown digits. */
+    private static final int CHECK_DIGITS = 20;
+
     private SystemJob() {
     }
 
@@ -82,7 +85,7 @@ final class SystemJob {
             throw new InputException("an input needs B: the model has no input matrix", request.input().orElse(""), 0);
         }
         List<Rational> points = Points.parse(options.points());
-        Options scalar = options.toBuilder().points(List.of()).build();
+        Options scalar = options.toBuilder().points(List.of()).digits(Math.max(options.digits(), CHECK_DIGITS)).build();
 
         Resolvent resolvent = Resolvent.of(a);
         RationalPolynomial minimal = resolvent.minimalPolynomial();
@@ -178,7 +181,7 @@ final class SystemJob {
                 Rational before = s.signal().before();
                 v = new PointValue(v.at(), before.toBigDecimal(new MathContext(digits)), Optional.of(before));
             }
-            out.add(v);
+            out.add(new PointValue(v.at(), v.value().round(new MathContext(digits)), v.exact(), v.exactSurd()));
         }
         return out;
     }

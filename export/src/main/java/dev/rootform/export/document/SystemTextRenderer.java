@@ -29,7 +29,7 @@ public final class SystemTextRenderer {
         String lambda = EquationText.LAMBDA;
         Layout out = new Layout();
         section(out, "system", List.of((m.continuous() ? "continuous: x' = Ax + Bu, y = Cx + Du" : "discrete: x[n+1] = Ax[n] + Bu[n], y[n] = Cx[n] + Du[n]")
-                + "; " + m.states() + " states, " + m.inputs() + " inputs, " + m.outputs() + " outputs"));
+                + "; " + count(m.states(), "state") + ", " + count(m.inputs(), "input") + ", " + count(m.outputs(), "output")));
         section(out, "A", List.of(SystemTexts.matrix(m.a())));
         if (m.inputs() > 0) {
             section(out, "B", List.of(SystemTexts.matrix(m.b())));
@@ -87,6 +87,10 @@ public final class SystemTextRenderer {
         section(out, "verification", checks);
         section(out, "caution", List.of(CodeHeader.CAUTION));
         return out.toString();
+    }
+
+    private static String count(int n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
     }
 
     private static String texts(List<dev.rootform.numeric.analysis.PointValue> values, int digits) {
