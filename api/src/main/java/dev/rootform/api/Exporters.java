@@ -1,16 +1,17 @@
 package dev.rootform.api;
 
-import dev.rootform.export.CRenderer;
-import dev.rootform.export.CSource;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Exporter;
-import dev.rootform.export.JavaRenderer;
-import dev.rootform.export.JsonRenderer;
-import dev.rootform.export.LatexRenderer;
-import dev.rootform.export.MathMlRenderer;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
-import dev.rootform.export.TextRenderer;
+import dev.rootform.export.code.CRenderer;
+import dev.rootform.export.code.CSource;
+import dev.rootform.export.code.CodeRequests;
+import dev.rootform.export.code.JavaRenderer;
+import dev.rootform.export.document.JsonRenderer;
+import dev.rootform.export.document.LatexRenderer;
+import dev.rootform.export.document.MathMlRenderer;
+import dev.rootform.export.document.TextRenderer;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -29,12 +30,12 @@ import java.util.function.BiFunction;
  */
 public final class Exporters {
     private static final Map<String, Exporter> BY_NAME = index(List.of(
-            new Named("text", (r, n) -> Rendering.of(TextRenderer.render(r))),
-            new Named("json", (r, n) -> Rendering.of(JsonRenderer.render(r))),
-            new Named("latex", (r, n) -> Rendering.of(LatexRenderer.render(r))),
-            new Named("mathml", (r, n) -> Rendering.of(MathMlRenderer.render(r))),
-            new Named("java", (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
-            new Named("c", Exporters::c)));
+            new Named("text", false, (r, n) -> Rendering.of(TextRenderer.render(r))),
+            new Named("json", false, (r, n) -> Rendering.of(JsonRenderer.render(r))),
+            new Named("latex", false, (r, n) -> Rendering.of(LatexRenderer.render(r))),
+            new Named("mathml", false, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
+            new Named("java", true, (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
+            new Named("c", true, Exporters::c)));
 
     private Exporters() {
     }
@@ -60,8 +61,13 @@ public final class Exporters {
         return java.util.Collections.unmodifiableMap(map);
     }
 
-    /** An exporter that delegates to a renderer. */
-    private record Named(String format, BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
+    /** An exporter that delegates to a renderer; code formats need a fitted solution. */
+    private record Named(String format, boolean code, BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
+        @Override
+        public Optional<String> refusal(Report report) {
+            return code ? CodeRequests.refusal(report) : Optional.empty();
+        }
+
         @Override
         public Rendering render(Report report, CodeNames names) {
             return renderer.apply(report, names);

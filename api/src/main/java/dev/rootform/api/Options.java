@@ -17,9 +17,13 @@ import java.util.Optional;
  *     choice; the solution is still computed and verified exactly)
  * @param variable the independent variable of a differential equation, when not the default
  *     {@code t} and not named in the equation
+ * @param code also build the double-precision model that generated code evaluates, with its
+ *     measured range and accuracy (needed by the {@code java} and {@code c} exporters; costs a
+ *     sample of high-precision values)
  * @since 0.2
  */
-public record Options(int digits, List<String> points, Duration timeLimit, boolean numeric, Optional<String> variable) {
+public record Options(int digits, List<String> points, Duration timeLimit, boolean numeric, Optional<String> variable,
+        boolean code) {
     /** Default significant digits. */
     public static final int DEFAULT_DIGITS = 30;
     /** Largest number of significant digits accepted. */
@@ -40,7 +44,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         Objects.requireNonNull(variable, "variable");
     }
 
-    /** 30 digits, no points, 300 s, exact presentation, default variable. */
+    /** 30 digits, no points, 300 s, exact presentation, default variable, no code model. */
     public static Options defaults() {
         return builder().build();
     }
@@ -52,7 +56,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
     /** A builder starting from these options. */
     public Builder toBuilder() {
         return new Builder().digits(digits).points(points).timeLimit(timeLimit).numeric(numeric)
-                .variable(variable.orElse(null));
+                .variable(variable.orElse(null)).code(code);
     }
 
     /** Collects options; {@link #build()} validates them. Not thread-safe; the built options are. */
@@ -62,6 +66,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         private Duration timeLimit = DEFAULT_TIME_LIMIT;
         private boolean numeric;
         private String variable;
+        private boolean code;
 
         private Builder() {
         }
@@ -98,8 +103,14 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
             return this;
         }
 
+        /** Whether to build the generated-code model with the answer. */
+        public Builder code(boolean code) {
+            this.code = code;
+            return this;
+        }
+
         public Options build() {
-            return new Options(digits, points, timeLimit, numeric, Optional.ofNullable(variable));
+            return new Options(digits, points, timeLimit, numeric, Optional.ofNullable(variable), code);
         }
     }
 }

@@ -27,6 +27,15 @@ public final class Rootform {
     }
 
     /**
+     * Recovers the shortest linear recurrence with constant rational coefficients that generates
+     * the given exact terms (confirmed by at least two terms beyond twice its order), writes it in
+     * solve's input syntax and solves that text.
+     */
+    public static Recovery recover(RecoverRequest request) {
+        return RecoverJob.run(request);
+    }
+
+    /**
      * Analyses a state-space model exactly: e^(At) or A^n entry by entry, the transfer matrix, the
      * response to x0 and the input, stability and the Kalman ranks, all verified.
      *

@@ -1,6 +1,8 @@
 package dev.rootform.api;
 
 import dev.rootform.export.CodeNames;
+import dev.rootform.export.Exporter;
+import dev.rootform.export.Report;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.document.SystemJsonRenderer;
 import dev.rootform.export.document.SystemLatexRenderer;
@@ -8,7 +10,7 @@ import dev.rootform.export.document.SystemMathMlRenderer;
 import dev.rootform.export.document.SystemReport;
 import dev.rootform.export.document.SystemReport.SignalReport;
 import dev.rootform.export.document.SystemTextRenderer;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.util.List;
 
 /**
@@ -39,9 +41,18 @@ public final class SystemExporters {
             case "json" -> Rendering.of(SystemJsonRenderer.render(report));
             case "latex" -> Rendering.of(SystemLatexRenderer.render(report));
             case "mathml" -> Rendering.of(SystemMathMlRenderer.render(report));
-            case "java", "c" -> Exporters.byName(format).orElseThrow().render(output(report, format).report(), names);
+            case "java", "c" -> code(report, format, names);
             default -> throw new InputException("--format " + format + " is not one of " + String.join(", ", names()), "", -1);
         };
+    }
+
+    private static Rendering code(SystemReport report, String format, CodeNames names) {
+        Exporter exporter = Exporters.byName(format).orElseThrow();
+        Report y = output(report, format).report();
+        exporter.refusal(y).ifPresent(message -> {
+            throw new InputException(message, "", -1);
+        });
+        return exporter.render(y, names);
     }
 
     private static SignalReport output(SystemReport report, String format) {

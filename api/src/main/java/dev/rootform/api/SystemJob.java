@@ -16,7 +16,7 @@ import dev.rootform.symbolic.matrix.RationalMatrix;
 import dev.rootform.symbolic.matrix.Resolvent;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.Problem;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
 import dev.rootform.symbolic.statespace.Input;
@@ -85,7 +85,8 @@ final class SystemJob {
             throw new InputException("an input needs B: the model has no input matrix", request.input().orElse(""), 0);
         }
         List<Rational> points = Points.parse(options.points());
-        Options scalar = options.toBuilder().points(List.of()).digits(Math.max(options.digits(), CHECK_DIGITS)).build();
+        Options scalar = options.toBuilder().points(List.of()).digits(Math.max(options.digits(), CHECK_DIGITS)).code(false)
+                .build();
 
         Resolvent resolvent = Resolvent.of(a);
         RationalPolynomial minimal = resolvent.minimalPolynomial();
@@ -112,7 +113,8 @@ final class SystemJob {
             ResponseCheck cross = new ResponseCheck(model, x0, input);
             List<Rational> all = new ArrayList<>(points);
             all.addAll(cross.points(minimal.degree()));
-            Options withPoints = scalar.toBuilder().points(all.stream().map(Rational::toString).toList()).build();
+            Options withPoints = scalar.toBuilder().points(all.stream().map(Rational::toString).toList())
+                    .code(options.code()).build();
             for (Signal s : equations.response(x0, input)) {
                 SignalReport r = new SignalReport(s, solved(s.problem(), withPoints));
                 (s.name().startsWith("x") ? states : outputs).add(r);

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.rootform.export.Formulas;
+import dev.rootform.export.notation.Formulas;
 import dev.rootform.export.document.SystemReport;
 import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.symbolic.algebra.Rational;

@@ -4,11 +4,11 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import dev.rootform.export.CodeHeader;
-import dev.rootform.export.EquationText;
-import dev.rootform.export.Formulas;
-import dev.rootform.export.Numbers;
-import dev.rootform.export.RootText;
+import dev.rootform.export.notation.CommentText;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.RootText;
 import dev.rootform.export.document.SystemReport.Eigenvalue;
 import dev.rootform.export.document.SystemReport.SignalReport;
 import dev.rootform.export.document.SystemReport.ValueRow;
@@ -95,7 +95,7 @@ public final class SystemJsonRenderer {
         for (Check c : r.checks()) {
             checks.addObject().put("name", c.name()).put("passed", c.passed()).put("detail", c.detail());
         }
-        root.put("caution", CodeHeader.CAUTION);
+        root.put("caution", CommentText.CAUTION);
         try {
             return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root);
         } catch (JsonProcessingException e) {

@@ -1,9 +1,9 @@
 package dev.rootform.export.document;
 
-import dev.rootform.export.CodeHeader;
-import dev.rootform.export.EquationText;
-import dev.rootform.export.Formulas;
-import dev.rootform.export.LatexRenderer;
+import dev.rootform.export.notation.CommentText;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.Formulas;
+
 import dev.rootform.export.document.SystemReport.SignalReport;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.statespace.RationalFunction;
@@ -25,8 +25,8 @@ public final class SystemLatexRenderer {
 
     public static String render(SystemReport r) {
         StringBuilder out = new StringBuilder();
-        CodeHeader.wrap(List.of("state-space model, " + r.model().states() + " states; " + (r.verified() ? "verified" : "NOT verified"),
-                CodeHeader.CAUTION)).forEach(l -> out.append("% ").append(l).append('\n'));
+        CommentText.wrap(List.of("state-space model, " + r.model().states() + " states; " + (r.verified() ? "verified" : "NOT verified"),
+                CommentText.CAUTION)).forEach(l -> out.append("% ").append(l).append('\n'));
         List<String> rows = new ArrayList<>();
         rows.add(row("characteristic", LatexRenderer.math(EquationText.factorisation(r.characteristic(), r.factors())) + " = 0"));
         String name = r.model().continuous() ? "e^{At}" : "A^{n}";

@@ -1,10 +1,10 @@
 package dev.rootform.export.document;
 
-import dev.rootform.export.CodeHeader;
-import dev.rootform.export.EquationText;
-import dev.rootform.export.Formulas;
-import dev.rootform.export.MathMlRenderer;
-import dev.rootform.export.Xml;
+import dev.rootform.export.notation.CommentText;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.Formulas;
+
+import dev.rootform.export.notation.Xml;
 import dev.rootform.export.document.SystemReport.SignalReport;
 import dev.rootform.symbolic.statespace.RationalFunction;
 import java.util.ArrayList;
@@ -23,8 +23,8 @@ public final class SystemMathMlRenderer {
 
     public static String render(SystemReport r) {
         StringBuilder out = new StringBuilder("<!--\n");
-        CodeHeader.wrap(List.of("state-space model, " + r.model().states() + " states; " + (r.verified() ? "verified" : "NOT verified"),
-                CodeHeader.CAUTION)).forEach(l -> out.append("  ").append(l.replace("--", "—")).append('\n'));
+        CommentText.wrap(List.of("state-space model, " + r.model().states() + " states; " + (r.verified() ? "verified" : "NOT verified"),
+                CommentText.CAUTION)).forEach(l -> out.append("  ").append(l.replace("--", "—")).append('\n'));
         out.append("-->\n<math xmlns=\"").append(MathMlRenderer.NAMESPACE).append("\" display=\"block\">\n<mtable>\n");
         List<String> rows = new ArrayList<>();
         rows.add(text("characteristic: " + EquationText.factorisation(r.characteristic(), r.factors()) + " = 0"));

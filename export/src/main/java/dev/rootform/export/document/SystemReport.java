@@ -2,7 +2,7 @@ package dev.rootform.export.document;
 
 import dev.rootform.export.Report;
 import dev.rootform.numeric.analysis.PointValue;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;

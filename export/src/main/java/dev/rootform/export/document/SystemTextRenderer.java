@@ -1,9 +1,8 @@
 package dev.rootform.export.document;
 
-import dev.rootform.export.CodeHeader;
-import dev.rootform.export.EquationText;
-import dev.rootform.export.Layout;
-import dev.rootform.export.RootText;
+import dev.rootform.export.notation.CommentText;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.RootText;
 import dev.rootform.export.document.SystemReport.ValueRow;
 import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.symbolic.closedform.ClosedForm;
@@ -85,7 +84,7 @@ public final class SystemTextRenderer {
         }
         checks.add(r.verified() ? "verified" : "NOT verified");
         section(out, "verification", checks);
-        section(out, "caution", List.of(CodeHeader.CAUTION));
+        section(out, "caution", List.of(CommentText.CAUTION));
         return out.toString();
     }
 

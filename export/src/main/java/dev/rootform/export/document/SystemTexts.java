@@ -1,7 +1,7 @@
 package dev.rootform.export.document;
 
-import dev.rootform.export.Formulas;
-import dev.rootform.export.RootText;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.export.notation.RootText;
 import dev.rootform.export.document.SystemReport.Eigenvalue;
 import dev.rootform.export.document.SystemReport.SignalReport;
 import dev.rootform.symbolic.closedform.ClosedForm;
@@ -71,6 +71,6 @@ final class SystemTexts {
 
     /** A value's text: exact when known, else the decimal. */
     static String value(dev.rootform.numeric.analysis.PointValue v, int digits) {
-        return v.exactText().orElse(dev.rootform.export.Numbers.decimal(v.value(), digits));
+        return v.exactText().orElse(dev.rootform.export.notation.Numbers.decimal(v.value(), digits));
     }
 }

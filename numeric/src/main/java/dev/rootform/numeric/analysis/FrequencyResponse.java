@@ -23,7 +23,7 @@ final class FrequencyResponse {
     }
 
     static List<SteadyState> of(LinearEquation eq, int digits) {
-        long precision = digits + Analyzer.GUARD_DIGITS;
+        long precision = digits + WorkingPrecision.GUARD_DIGITS;
         List<SteadyState> result = new ArrayList<>();
         for (ForcingTerm t : eq.forcing()) {
             if (t.oscillation() == ForcingTerm.Oscillation.NONE || t.power() != 0 || !plainRate(eq.domain(), t)) {

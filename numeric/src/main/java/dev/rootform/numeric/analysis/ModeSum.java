@@ -70,7 +70,7 @@ final class ModeSum {
                 if (o.sine() instanceof Coefficient.Free) {
                     basis.add(single(new Mode(minusI, o.power(), z)));
                 }
-            } else if (t instanceof Term.RootSum r) {
+            } else if (t instanceof Term.ConjugateSum r) {
                 List<Apcomplex> alphas = roots(r.factor(), cache, precision);
                 for (int j = 0; j < r.coefficients().size(); j++) {
                     if (r.coefficients().get(j) instanceof Coefficient.Free) {

@@ -4,8 +4,8 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.LinearEquation;
-import dev.rootform.symbolic.parse.InputException;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -37,7 +37,7 @@ public final class ConditionFitter {
      *     several points of a differential equation, or they are inconsistent or do not determine
      *     the solution
      */
-    public static InitialState fit(LinearEquation equation, RationalPolynomial operator, List<Condition> conditions,
+    static InitialState fit(LinearEquation equation, RationalPolynomial operator, List<Condition> conditions,
             ForcingPart part) {
         int k = equation.order();
         validate(equation, conditions);
@@ -73,7 +73,7 @@ public final class ConditionFitter {
      * @throws InputException if the conditions are at several points of a differential equation or
      *     at a non-integer index of a sequence
      */
-    public static List<List<Rational>> matrix(LinearEquation equation, List<Condition> conditions) {
+    static List<List<Rational>> matrix(LinearEquation equation, List<Condition> conditions) {
         return rows(equation, conditions, origin(equation.domain(), conditions), equation.characteristicPolynomial());
     }
 

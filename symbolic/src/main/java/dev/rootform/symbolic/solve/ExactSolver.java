@@ -24,7 +24,7 @@ import java.util.List;
  *
  * @since 0.1
  */
-public final class ExactSolver {
+final class ExactSolver {
     private ExactSolver() {
     }
 
@@ -32,7 +32,7 @@ public final class ExactSolver {
      * The solution in the kernel of the operator μ with the given initial state (deg μ values);
      * {@code factors} is the factorisation of μ.
      */
-    public static ExactSolution solve(LinearEquation equation, ForcingPart part, RationalPolynomial operator,
+    static ExactSolution solve(LinearEquation equation, ForcingPart part, RationalPolynomial operator,
             List<Factor> factors, InitialState state) {
         RationalPolynomial p = transformNumerator(operator.coefficients(), state.values());
         boolean difference = equation.domain() == Domain.DIFFERENCE;

@@ -25,7 +25,7 @@ import java.util.function.LongFunction;
  *
  * @since 0.1
  */
-public final class ExactVerifier {
+final class ExactVerifier {
     /** How many terms the independent reference compares beyond the order. */
     static final int REFERENCE_TERMS = 40;
     /** Extra points at which L y - g is checked beyond the deg A that prove it. */
@@ -34,7 +34,7 @@ public final class ExactVerifier {
     private ExactVerifier() {
     }
 
-    public static List<Check> verify(ExactSolution solution, List<Condition> conditions) {
+    static List<Check> verify(ExactSolution solution, List<Condition> conditions) {
         List<Check> checks = new ArrayList<>();
         checks.add(substitution(solution));
         if (!conditions.isEmpty()) {

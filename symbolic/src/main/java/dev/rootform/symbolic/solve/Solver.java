@@ -32,7 +32,7 @@ public final class Solver {
      * Solves a problem exactly: the fitted solution when conditions are given, else the general
      * solution with free constants C1..Ck (plus a particular solution for a forced equation).
      *
-     * @throws dev.rootform.symbolic.parse.InputException if the forcing has no exact annihilator or
+     * @throws dev.rootform.symbolic.model.InputException if the forcing has no exact annihilator or
      *     rational values, or the conditions are wrong in number, inconsistent or do not determine
      *     the solution
      */
@@ -52,16 +52,16 @@ public final class Solver {
         }
         ExactSolution exact = fitted(eq, mu, problem.conditions(), ForcingPart.RATIONAL);
         List<Check> checks = new ArrayList<>(ExactVerifier.verify(exact, problem.conditions()));
-        ClosedForm general = Presenter.general(eq, factors);
+        ClosedForm general = ClosedFormBuilder.general(eq, factors);
         if (radicand == 1) {
-            return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact, factors),
+            return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), ClosedFormBuilder.fitted(exact, factors),
                     general, Optional.of(exact), Optional.empty(), Optional.empty(), false, checks);
         }
         List<Condition> zero = zeroed(problem.conditions());
         RadicalSolution both = new RadicalSolution(radicand, exact, fitted(eq, mu, zero, ForcingPart.RADICAL));
         checks.addAll(radicalChecks(both.radical(), zero, radicand));
-        return new Solution(problem, chi, factors, Presenter.roots(factors),
-                Presenter.fitted(exact, Optional.of(both), factors), general, Optional.empty(), Optional.empty(),
+        return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors),
+                ClosedFormBuilder.fitted(exact, Optional.of(both), factors), general, Optional.empty(), Optional.empty(),
                 Optional.of(both), false, checks);
     }
 
@@ -79,8 +79,8 @@ public final class Solver {
         if (!problem.conditions().isEmpty()) {
             ConditionFitter.validate(eq, problem.conditions());
         }
-        ClosedForm general = Presenter.general(eq, factors);
-        return new Solution(problem, chi, factors, Presenter.roots(factors), TrialForm.of(eq, general, factors), general,
+        ClosedForm general = ClosedFormBuilder.general(eq, factors);
+        return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), TrialForm.of(eq, general, factors), general,
                 Optional.empty(), Optional.empty(), Optional.empty(), true, List.of(basisCheck(eq, factors)));
     }
 
@@ -122,10 +122,10 @@ public final class Solver {
         if (!problem.conditions().isEmpty()) {
             ConditionFitter.validate(eq, problem.conditions());
         }
-        ClosedForm general = Presenter.general(eq, factors);
+        ClosedForm general = ClosedFormBuilder.general(eq, factors);
         List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
         if (eq.isHomogeneous()) {
-            return new Solution(problem, chi, factors, Presenter.roots(factors), general, general, Optional.empty(),
+            return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), general, general, Optional.empty(),
                     Optional.empty(), Optional.empty(), false, checks);
         }
         List<Condition> zero = zeroConditions(eq);
@@ -137,8 +137,8 @@ public final class Solver {
             checks.addAll(radicalChecks(radical, List.of(), mu.radicand()));
             both = Optional.of(new RadicalSolution(mu.radicand(), particular, radical));
         }
-        return new Solution(problem, chi, factors, Presenter.roots(factors),
-                Presenter.withParticular(general, Presenter.fitted(particular, both, factors)), general,
+        return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors),
+                ClosedFormBuilder.withParticular(general, ClosedFormBuilder.fitted(particular, both, factors)), general,
                 Optional.empty(), Optional.of(particular), Optional.empty(), false, checks);
     }
 
@@ -149,7 +149,7 @@ public final class Solver {
         } catch (UnderdeterminedConditions e) {
             ExactSolution free = ExactSolver.solve(eq.homogeneous(), ForcingPart.RATIONAL, mu.polynomial(), mu.factors(),
                     e.freeState());
-            throw ConditionsException.underdetermined(e.getMessage(), Presenter.fitted(free, mu.characteristic()));
+            throw ConditionsException.underdetermined(e.getMessage(), ClosedFormBuilder.fitted(free, mu.characteristic()));
         }
     }
 
@@ -209,7 +209,7 @@ public final class Solver {
     private static ExactSolution withoutTransient(ExactSolution s, List<Factor> characteristic) {
         List<Component> result = new ArrayList<>();
         for (Component c : s.components()) {
-            int homogeneous = Presenter.multiplicity(characteristic, c.factor().polynomial());
+            int homogeneous = ClosedFormBuilder.multiplicity(characteristic, c.factor().polynomial());
             List<RationalPolynomial> kept = new ArrayList<>(c.coefficients());
             for (int i = 0; i < Math.min(homogeneous, kept.size()); i++) {
                 kept.set(i, RationalPolynomial.ZERO);

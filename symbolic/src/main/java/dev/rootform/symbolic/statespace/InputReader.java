@@ -3,7 +3,7 @@ package dev.rootform.symbolic.statespace;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.parse.ProblemParser;
 import java.util.List;
 

@@ -71,8 +71,8 @@ public final class LinearCombination {
 
     /** The term with every coefficient cleared: what like terms share. */
     private static Term shape(Term t) {
-        if (t instanceof Term.RootSum r) {
-            return new Term.RootSum(r.factor(), List.of(), r.power());
+        if (t instanceof Term.ConjugateSum r) {
+            return new Term.ConjugateSum(r.factor(), List.of(), r.power());
         }
         return t.withCoefficients(t.coefficients().stream().map(c -> (Coefficient) new Coefficient.Free("")).toList());
     }
@@ -91,11 +91,11 @@ public final class LinearCombination {
             Surd q = i < y.size() ? value(y.get(i)) : Surd.of(Rational.ZERO);
             sum.add(new Coefficient.Exact(add(p, q)));
         }
-        if (a instanceof Term.RootSum) {
+        if (a instanceof Term.ConjugateSum) {
             while (sum.size() > 1 && sum.get(sum.size() - 1).isZero()) {
                 sum.remove(sum.size() - 1);
             }
-            return ((Term.RootSum) a).withCoefficients(sum);
+            return ((Term.ConjugateSum) a).withCoefficients(sum);
         }
         return a.withCoefficients(sum);
     }

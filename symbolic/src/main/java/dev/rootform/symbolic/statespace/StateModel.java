@@ -2,7 +2,7 @@ package dev.rootform.symbolic.statespace;
 
 import dev.rootform.symbolic.matrix.RationalMatrix;
 import dev.rootform.symbolic.model.Domain;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.util.Objects;
 
 /**
