@@ -29,10 +29,24 @@ public final class JasFactorizer {
         ComputerThreads.NO_THREADS = true;
     }
 
-    private static final GenPolynomialRing<BigInteger> RING =
-            new GenPolynomialRing<>(BigInteger.ONE, 1, new String[] {"x"});
+    /**
+     * Z[x], made on first use rather than in the class initialiser: JAS checks the thread's
+     * interrupt flag while building a ring, and a job interrupted at its time limit during class
+     * initialisation would otherwise leave this class unusable for the rest of the JVM.
+     */
+    private static volatile GenPolynomialRing<BigInteger> ring;
 
     private JasFactorizer() {
+    }
+
+    /** Z[x]; built again by the next caller if an interrupt stopped the first. */
+    private static GenPolynomialRing<BigInteger> ring() {
+        GenPolynomialRing<BigInteger> r = ring;
+        if (r == null) {
+            r = new GenPolynomialRing<>(BigInteger.ONE, 1, new String[] {"x"});
+            ring = r;
+        }
+        return r;
     }
 
     /**
@@ -140,7 +154,7 @@ public final class JasFactorizer {
         for (Rational c : p.coefficients()) {
             lcm = lcm.divide(lcm.gcd(c.denominator())).multiply(c.denominator());
         }
-        GenPolynomial<BigInteger> result = RING.getZERO();
+        GenPolynomial<BigInteger> result = ring().getZERO();
         for (int i = 0; i <= p.degree(); i++) {
             Rational c = p.coefficient(i).multiply(Rational.of(lcm));
             if (!c.isZero()) {
