@@ -3,20 +3,18 @@ package dev.rootform.symbolic.backend;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.rootform.symbolic.algebra.RationalPolynomial;
-import java.util.concurrent.atomic.AtomicReference;
 import org.junit.jupiter.api.Test;
 
 /** A job interrupted at its first use of the factoriser (a time limit) must not break it for later jobs. */
 class InterruptedFirstUseTest {
     @Test
     void factoringWorksAfterAnInterruptedCall() throws InterruptedException {
-        AtomicReference<Throwable> failure = new AtomicReference<>();
         Thread job = new Thread(() -> {
             Thread.currentThread().interrupt();
             try {
                 JasFactorizer.factor(RationalPolynomial.ofIntegers(-3, 0, 1));
             } catch (RuntimeException e) {
-                failure.set(e);
+                // the interrupted job may be refused (JAS's PreemptingException); what matters is the next call
             }
         });
         job.start();
