@@ -36,7 +36,11 @@ public final class SystemLatexRenderer {
         for (SignalReport s : concat(r.states(), r.outputs())) {
             ClosedForm f = s.report().solution().closedForm();
             String arg = r.model().continuous() ? "(t)" : "[n]";
-            rows.add(row("response", LatexRenderer.math(s.signal().name()) + arg + " = " + Formulas.latex(f)));
+            String signal = s.signal().name().replaceAll("^([a-z])(\\d+)$", "$1_{$2}");
+            String delta = s.signal().delta().isZero() ? "" : " + " + LatexRenderer.math(s.signal().delta().toString()) + "\\,\\delta(t)";
+            String from = s.signal().start() == 0 ? ""
+                    : ",\\; n \\geq 1,\\; " + signal + "[0] = " + LatexRenderer.math(s.signal().before().toString());
+            rows.add(row("response", signal + arg + " = " + Formulas.latex(f) + delta + from));
         }
         return out.append("\\begin{aligned}\n").append(String.join(" \\\\\n", rows)).append("\n\\end{aligned}\n").toString();
     }
