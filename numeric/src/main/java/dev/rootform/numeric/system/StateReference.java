@@ -6,6 +6,7 @@ import dev.rootform.symbolic.matrix.RationalMatrix;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.statespace.InputCalculus;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
@@ -73,6 +74,7 @@ public final class StateReference {
         };
         double[][] result = new double[points.length][];
         for (int p = 0; p < points.length; p++) {
+            Deadline.checkCurrent();
             double[] state = start.clone();
             double span = Math.abs(points[p]);
             if (span > 0) {
@@ -94,6 +96,7 @@ public final class StateReference {
         List<List<Rational>> states = new ArrayList<>();
         states.add(List.copyOf(x0));
         for (long m = 0; m < last; m++) {
+            Deadline.checkCurrent();
             Rational um = pulse ? (m == 0 ? Rational.ONE : Rational.ZERO) : InputCalculus.valueAt(Domain.DIFFERENCE, u, m);
             List<Rational> ax = a.multiply(states.get((int) m));
             List<Rational> next = new ArrayList<>();

@@ -1,6 +1,7 @@
 package dev.rootform.symbolic.matrix;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -147,6 +148,7 @@ public final class RationalMatrix {
         }
         Rational[][] e = new Rational[rows()][other.columns];
         for (int i = 0; i < rows(); i++) {
+            Deadline.checkCurrent();
             for (int j = 0; j < other.columns; j++) {
                 Rational sum = Rational.ZERO;
                 for (int k = 0; k < columns; k++) {
@@ -231,6 +233,7 @@ public final class RationalMatrix {
         }
         int rank = 0;
         for (int col = 0; col < columns && rank < m.length; col++) {
+            Deadline.checkCurrent();
             int pivot = -1;
             for (int i = rank; i < m.length; i++) {
                 if (!m[i][col].isZero()) {

@@ -10,6 +10,7 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -50,6 +51,7 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
         List<List<ClosedForm>> entries = new ArrayList<>();
         List<List<ExactSolution>> exact = new ArrayList<>();
         for (int i = 0; i < n; i++) {
+            Deadline.checkCurrent();
             List<ClosedForm> row = new ArrayList<>();
             List<ExactSolution> exactRow = new ArrayList<>();
             for (int j = 0; j < n; j++) {
@@ -80,6 +82,7 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
         Derivatives at = new Derivatives(x.get(0).get(0), d);
         RationalMatrix previous = null;
         for (int m = 0; m <= d; m++) {
+            Deadline.checkCurrent();
             int order = m;
             List<List<Rational>> rows = x.stream().map(row -> row.stream().map(s -> at.of(s, order)).toList()).toList();
             RationalMatrix current = RationalMatrix.of(rows, x.size());
@@ -99,6 +102,7 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
     private static Check powersCheck(RationalMatrix a, List<List<ExactSolution>> x, int d) {
         RationalMatrix previous = null;
         for (int m = 0; m <= d + 1; m++) {
+            Deadline.checkCurrent();
             RationalMatrix current = matrix(x, m);
             RationalMatrix expected = m == 0 ? RationalMatrix.identity(a.rows()) : a.multiply(previous);
             if (!current.equals(expected)) {
