@@ -113,6 +113,22 @@ class SystemTest {
     }
 
     @Test
+    void aLargeModelPastItsTimeLimitIsOutOfTime() {
+        java.util.Random random = new java.util.Random(3);
+        StringBuilder a = new StringBuilder("[");
+        for (int i = 0; i < 16; i++) {
+            a.append(i == 0 ? "[" : ",[");
+            for (int j = 0; j < 16; j++) {
+                a.append(j == 0 ? "" : ",").append(random.nextInt(19) - 9);
+            }
+            a.append(']');
+        }
+        SystemResult r = Rootform.system(SystemRequest.continuous(a.append(']').toString())
+                .with(Options.builder().timeLimit(java.time.Duration.ofMillis(50)).build()));
+        assertInstanceOf(Result.OutOfTime.class, assertInstanceOf(SystemResult.NoAnswer.class, r).reason());
+    }
+
+    @Test
     void badInputIsRefusedWithTheMatrixNamed() {
         SystemResult r = Rootform.system(SystemRequest.continuous("[[0,1],[-5,\"a\"]]"));
         Result.Refused refused = assertInstanceOf(Result.Refused.class, ((SystemResult.NoAnswer) r).reason());
