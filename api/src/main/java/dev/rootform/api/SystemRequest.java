@@ -11,6 +11,7 @@ import java.util.Optional;
  * <pre>{@code
  * SystemResult r = Rootform.system(SystemRequest.continuous("[[0,1],[-5,-2]]")
  *         .withB("[[0],[1]]").withC("[[1,0]]").withInput("step"));
+ * r.answer().ifPresent(a -> System.out.println("G(s) = " + a.transfer().orElseThrow().entries()));
  * }</pre>
  *
  * @param continuous true for x' = Ax + Bu, false for x[n+1] = Ax[n] + Bu[n]
