@@ -58,6 +58,16 @@ public final class Rootform {
     }
 
     /**
+     * Analyses a state-space model exactly: e^(At) or A^n entry by entry, the transfer matrix, the
+     * response to x0 and the input, stability and the Kalman ranks, all verified.
+     *
+     * @since 0.3
+     */
+    public static SystemResult system(SystemRequest request) {
+        return SystemJob.run(request);
+    }
+
+    /**
      * Analyses a transfer function exactly (lowest terms, poles and zeros, DC gain, properness,
      * stability) and computes its response to the request's input in closed form, verified, with
      * the frequency response and, for a step into a stable system, the step figures.
