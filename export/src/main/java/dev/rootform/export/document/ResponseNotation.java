@@ -22,21 +22,9 @@ public final class ResponseNotation {
     private ResponseNotation() {
     }
 
-    /** {@code H(s) = (s + 3)/(s^2 + 2s + 5)}, {@code H(s) = 50/(s^2 + 14s + 65)}; a sum or product is grouped only when it must be. */
+    /** {@code H(s) = (s + 3)/(s^2 + 2s + 5)}, {@code H(s) = 50/(s^2 + 14s + 65)}. */
     public static String transfer(TransferFunction h) {
-        RationalPolynomial num = h.value().numerator();
-        String top = num.toString(h.variable());
-        if (h.value().isPolynomial()) {
-            return h.signature() + " = " + top;
-        }
-        return h.signature() + " = " + (single(num) ? top : "(" + top + ")") + "/(" + h.value().denominator().toString(h.variable()) + ")";
-    }
-
-    /** A numerator written without parentheses: a positive integer, or a monic monomial such as {@code s^2}. */
-    private static boolean single(RationalPolynomial p) {
-        long nonzero = p.coefficients().stream().filter(c -> !c.isZero()).count();
-        return nonzero == 1 && (p.degree() == 0 ? p.coefficient(0).isInteger() && p.coefficient(0).signum() > 0
-                : p.leadingCoefficient().isOne());
+        return h.signature() + " = " + h.value().toString(h.variable());
     }
 
     /**

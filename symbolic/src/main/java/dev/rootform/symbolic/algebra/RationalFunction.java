@@ -169,11 +169,17 @@ public record RationalFunction(RationalPolynomial numerator, RationalPolynomial 
         return numerator.evaluate(x).divide(denominator.evaluate(x));
     }
 
-    /** The function written in {@code variable}, e.g. {@code (2x)/(x^2 + 1)}. */
+    /**
+     * The function written in {@code variable}: {@code (s + 3)/(s^2 + 2s + 5)}, {@code 1/(s + 1)},
+     * {@code 2}; the numerator goes without parentheses when it is a non-negative integer.
+     */
     public String toString(String variable) {
         String top = numerator.toString(variable);
-        return denominator.equals(RationalPolynomial.ONE) ? top
-                : "(" + top + ")/(" + denominator.toString(variable) + ")";
+        if (isPolynomial()) {
+            return top;
+        }
+        boolean bare = numerator.degree() <= 0 && numerator.coefficient(0).signum() >= 0 && numerator.coefficient(0).isInteger();
+        return (bare ? top : "(" + top + ")") + "/(" + denominator.toString(variable) + ")";
     }
 
     @Override
