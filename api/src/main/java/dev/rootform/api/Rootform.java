@@ -25,4 +25,15 @@ public final class Rootform {
     public static Result solve(SolveRequest request) {
         return SolveJob.run(request);
     }
+
+    /**
+     * Checks a claimed solution of a problem: exactly where the claim's numbers are exact, else
+     * numerically to {@link Options#digits()} digits; with the equation part, each condition,
+     * where claim and solution differ, named slips and the correct solution.
+     *
+     * @since 0.3
+     */
+    public static CheckResult check(CheckRequest request) {
+        return CheckJob.run(request);
+    }
 }

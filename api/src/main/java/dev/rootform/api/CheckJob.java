@@ -1,0 +1,108 @@
+package dev.rootform.api;
+
+import dev.rootform.export.Report;
+import dev.rootform.export.document.ClaimReport;
+import dev.rootform.numeric.analysis.Analysis;
+import dev.rootform.numeric.analysis.Analyzer;
+import dev.rootform.numeric.claim.NumericClaimCheck;
+import dev.rootform.numeric.claim.NumericFindings;
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.claim.Claim;
+import dev.rootform.symbolic.claim.ClaimChecker;
+import dev.rootform.symbolic.claim.ClaimFindings;
+import dev.rootform.symbolic.claim.ClaimParser;
+import dev.rootform.symbolic.claim.ConditionFinding;
+import dev.rootform.symbolic.claim.Decision;
+import dev.rootform.symbolic.claim.EquationFinding;
+import dev.rootform.symbolic.claim.Mismatch;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.model.Problem;
+import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.parse.ProblemParser;
+import dev.rootform.symbolic.solve.Check;
+import dev.rootform.symbolic.solve.ConditionsException;
+import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.solve.Solver;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.stream.Stream;
+
+/**
+ * One claim check: solve the problem exactly, read the claim, check it exactly where its numbers
+ * allow ({@link ClaimChecker}), numerically for the rest and for a function's largest difference on
+ * a grid ({@link NumericClaimCheck}), and put both into one {@link ClaimReport}.
+ */
+final class CheckJob {
+    private CheckJob() {
+    }
+
+    static CheckResult run(CheckRequest request) {
+        AtomicReference<CheckResult> outcome = new AtomicReference<>();
+        // TimeLimit runs jobs that end in a Result; the check's own outcome travels beside it
+        Result finished = TimeLimit.within(request.options().timeLimit(), () -> {
+            outcome.set(check(request));
+            return new Result.Refused("", "", -1);
+        });
+        return finished instanceof Result.OutOfTime late ? new CheckResult.Unchecked(late) : outcome.get();
+    }
+
+    private static CheckResult check(CheckRequest request) {
+        Options options = request.options();
+        try {
+            Problem problem = ProblemParser.parse(request.problem(), request.given(), options.variable().orElse(null));
+            LinearEquation eq = problem.equation();
+            Solution solution = Solver.solve(problem);
+            Claim claim = ClaimParser.parse(request.claim(), eq.domain(), eq.function(), eq.variable());
+            ClaimFindings exact = ClaimChecker.check(solution, claim);
+            boolean numeric = exact.verdict() == Decision.UNDECIDED;
+            List<Rational> points = numeric || eq.domain() == Domain.DIFFERENTIAL ? NumericClaimCheck.samplePoints(solution) : List.of();
+            Analysis analysis = new Analyzer(options.digits()).analyze(solution, points);
+            Report report = new Report(solution, analysis, options.digits(), options.numeric());
+            if (!report.verified()) {
+                return new CheckResult.Unchecked(new Result.CheckFailed(report, Stream.concat(solution.checks().stream(),
+                        report.numericChecks().stream()).filter(c -> !c.passed()).map(Check::name).toList()));
+            }
+            ClaimReport checked = numeric
+                    ? withNumeric(report, claim, exact, NumericClaimCheck.check(solution, claim, analysis.values(), options.digits()))
+                    : exactly(report, claim, exact, eq.domain() == Domain.DIFFERENTIAL
+                            ? NumericClaimCheck.largestDifference(solution, claim, analysis.values(), options.digits())
+                            : exact.firstMismatch());
+            return checked.holds() ? new CheckResult.Holds(checked) : new CheckResult.Fails(checked);
+        } catch (ConditionsException e) {
+            return new CheckResult.Unchecked(e.contradictory() ? new Result.Contradictory(e.getMessage())
+                    : new Result.Underdetermined(e.getMessage(), e.freeSolution()));
+        } catch (InputException e) {
+            return new CheckResult.Unchecked(new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(), e.position()));
+        } catch (UnsupportedOperationException e) {
+            return new CheckResult.Unchecked(new Result.Refused(e.getMessage(), request.claim(), -1));
+        }
+    }
+
+    /** Every part decided exactly; a function's largest difference on the grid is the one numeric figure. */
+    private static ClaimReport exactly(Report report, Claim claim, ClaimFindings exact, Optional<Mismatch> mismatch) {
+        return new ClaimReport(report, claim.text(), claim.formula().toString(), exact.asRead(),
+                exact.verdict() == Decision.HOLDS, true, report.digits(), exact.equation(), exact.conditions(), mismatch,
+                exact.slips(), List.of());
+    }
+
+    /** The exact parts where they were decided, the numeric ones for the rest. */
+    private static ClaimReport withNumeric(Report report, Claim claim, ClaimFindings exact, NumericFindings numeric) {
+        EquationFinding equation = exact.equation().decision() != Decision.UNDECIDED ? exact.equation() : numeric.equation();
+        List<ConditionFinding> conditions = new ArrayList<>();
+        for (int i = 0; i < exact.conditions().size(); i++) {
+            ConditionFinding e = exact.conditions().get(i);
+            // an exact undecided condition is one the claim does not cover
+            conditions.add(e.decision() != Decision.UNDECIDED || e.exact() ? e : numeric.conditions().get(i));
+        }
+        List<String> notes = new ArrayList<>();
+        exact.inexact().ifPresent(reason -> notes.add("numeric check, because " + reason + " (no exact form here)"));
+        notes.add("compared to " + numeric.digits() + " significant digits at " + numeric.samples()
+                + "; a numeric verdict is evidence at these points, not a proof");
+        return new ClaimReport(report, claim.text(), claim.formula().toString(), exact.asRead(),
+                numeric.verdict() == Decision.HOLDS, false, numeric.digits(), equation, conditions, numeric.mismatch(),
+                List.of(), notes);
+    }
+}

@@ -1,0 +1,79 @@
+package dev.rootform.export.document;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.rootform.export.Formulas;
+import dev.rootform.export.JsonRenderer;
+import dev.rootform.symbolic.claim.ConditionFinding;
+import dev.rootform.symbolic.claim.Decision;
+import dev.rootform.symbolic.claim.Slip;
+import java.io.UncheckedIOException;
+import java.util.Locale;
+
+/**
+ * The answer to a claim check as one JSON object. Keys: verdict ("holds" | "fails"), exact,
+ * claim, readAs, digits, equation {holds, residual, detail}, conditions [{condition, claimed,
+ * required, holds}], firstMismatch {at, claimed, actual} (a function's adds difference; null when
+ * there is none), slips [{kind, explanation, corrected}], solution (as in solve's JSON), notes.
+ * A part not decided has holds null.
+ *
+ * @since 0.3
+ */
+public final class ClaimJsonRenderer {
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
+    private ClaimJsonRenderer() {
+    }
+
+    public static String render(ClaimReport r) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("verdict", r.holds() ? "holds" : "fails");
+        root.put("exact", r.exact());
+        root.put("claim", r.claim());
+        root.put("readAs", r.asRead().map(ClaimText::of).orElse(r.reading()));
+        root.put("digits", r.digits());
+        ObjectNode equation = root.putObject("equation");
+        holds(equation, r.equation().decision());
+        equation.put("residual", r.equation().decision() == Decision.HOLDS ? "0"
+                : r.equation().residual().map(Formulas::plain).orElse(null));
+        equation.put("detail", r.equation().detail());
+        ArrayNode conditions = root.putArray("conditions");
+        for (ConditionFinding c : r.conditions()) {
+            ObjectNode node = conditions.addObject().put("condition", ClaimTextRenderer.condition(r, c.condition()))
+                    .put("claimed", c.claimed()).put("required", c.condition().value().toString());
+            holds(node, c.decision());
+        }
+        if (r.mismatch().isPresent()) {
+            ObjectNode m = root.putObject("firstMismatch").put("at", r.mismatch().get().at())
+                    .put("claimed", r.mismatch().get().claimed()).put("actual", r.mismatch().get().actual());
+            if (!r.sequence()) {
+                m.put("difference", r.mismatch().get().difference());
+            }
+        } else {
+            root.putNull("firstMismatch");
+        }
+        ArrayNode slips = root.putArray("slips");
+        for (Slip s : r.slips()) {
+            slips.addObject().put("kind", s.kind().name().toLowerCase(Locale.ROOT).replace('_', '-'))
+                    .put("explanation", s.explanation()).put("corrected", ClaimText.of(s.corrected()));
+        }
+        try {
+            root.set("solution", MAPPER.readTree(JsonRenderer.render(r.solution())).get("solution"));
+            ArrayNode notes = root.putArray("notes");
+            r.notes().forEach(notes::add);
+            return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root);
+        } catch (JsonProcessingException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private static void holds(ObjectNode node, Decision d) {
+        if (d == Decision.UNDECIDED) {
+            node.putNull("holds");
+        } else {
+            node.put("holds", d == Decision.HOLDS);
+        }
+    }
+}

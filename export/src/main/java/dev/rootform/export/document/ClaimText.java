@@ -1,0 +1,31 @@
+package dev.rootform.export.document;
+
+import dev.rootform.export.Formulas;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.model.Domain;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A closed form written as one claim that {@code rootform check --claim} reads back:
+ * {@code x[n] = 4·2^n - 1 for n ≥ 1; x[0] = 2} or {@code y(t) = e^(-t)·cos(2t)}.
+ *
+ * @since 0.3
+ */
+public final class ClaimText {
+    private ClaimText() {
+    }
+
+    public static String of(ClosedForm f) {
+        if (f.domain() == Domain.DIFFERENTIAL) {
+            return f.function() + "(" + f.variable() + ") = " + Formulas.plain(f);
+        }
+        List<String> parts = new ArrayList<>();
+        parts.add(f.function() + "[" + f.variable() + "] = " + Formulas.plain(f) + " for " + f.variable() + " ≥ " + f.validFrom());
+        long first = f.origin().toBigInteger().longValueExact();
+        for (int i = 0; i < f.leadingValues().size(); i++) {
+            parts.add(f.function() + "[" + (first + i) + "] = " + f.leadingValues().get(i));
+        }
+        return String.join("; ", parts);
+    }
+}

@@ -1,0 +1,169 @@
+package dev.rootform.numeric.claim;
+
+import org.apfloat.Apcomplex;
+import org.apfloat.ApcomplexMath;
+import org.apfloat.Apfloat;
+
+/**
+ * A truncated Taylor series f(x + h) = Σ_{k ≤ K} c_k h^k at one point, in complex apfloat
+ * arithmetic: the value and the derivatives c_k·k! of an expression, carried through sums,
+ * products, quotients, exp and log by the usual recurrences of automatic differentiation (e.g.
+ * A. Griewank and A. Walther, Evaluating Derivatives, SIAM, 2008, ch. 13 — chapter from memory).
+ */
+final class Jet {
+    private final Apcomplex[] c;
+    private final long precision;
+
+    private Jet(Apcomplex[] c, long precision) {
+        this.c = c;
+        this.precision = precision;
+    }
+
+    static Jet constant(Apcomplex value, int order, long precision) {
+        Apcomplex[] c = zeros(order, precision);
+        c[0] = value;
+        return new Jet(c, precision);
+    }
+
+    /** x + h at the point x. */
+    static Jet variable(Apfloat x, int order, long precision) {
+        Jet j = constant(x, order, precision);
+        if (order > 0) {
+            j.c[1] = new Apfloat(1, precision);
+        }
+        return j;
+    }
+
+    int order() {
+        return c.length - 1;
+    }
+
+    Apcomplex value() {
+        return c[0];
+    }
+
+    /** The k-th derivative f^{(k)}(x) = k!·c_k. */
+    Apcomplex derivative(int k) {
+        Apcomplex d = c[k];
+        for (int i = 2; i <= k; i++) {
+            d = d.multiply(new Apfloat(i, precision));
+        }
+        return d;
+    }
+
+    /** True when every derivative is exactly zero (a constant). */
+    boolean isConstant() {
+        for (int k = 1; k < c.length; k++) {
+            if (!c[k].equals(Apcomplex.ZERO)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    Jet add(Jet o) {
+        Apcomplex[] r = new Apcomplex[c.length];
+        for (int k = 0; k < r.length; k++) {
+            r[k] = c[k].add(o.c[k]);
+        }
+        return new Jet(r, precision);
+    }
+
+    Jet negate() {
+        Apcomplex[] r = new Apcomplex[c.length];
+        for (int k = 0; k < r.length; k++) {
+            r[k] = c[k].negate();
+        }
+        return new Jet(r, precision);
+    }
+
+    Jet subtract(Jet o) {
+        return add(o.negate());
+    }
+
+    Jet scale(Apcomplex s) {
+        Apcomplex[] r = new Apcomplex[c.length];
+        for (int k = 0; k < r.length; k++) {
+            r[k] = c[k].multiply(s);
+        }
+        return new Jet(r, precision);
+    }
+
+    Jet multiply(Jet o) {
+        Apcomplex[] r = zeros(order(), precision);
+        for (int i = 0; i < c.length; i++) {
+            for (int j = 0; i + j < c.length; j++) {
+                r[i + j] = r[i + j].add(c[i].multiply(o.c[j]));
+            }
+        }
+        return new Jet(r, precision);
+    }
+
+    /** this/o: h_k = (f_k − Σ_{j≥1} g_j h_{k−j})/g_0. @throws ArithmeticException if o(x) = 0 */
+    Jet divide(Jet o) {
+        if (o.c[0].equals(Apcomplex.ZERO)) {
+            throw new ArithmeticException("division by zero");
+        }
+        Apcomplex[] h = new Apcomplex[c.length];
+        for (int k = 0; k < c.length; k++) {
+            Apcomplex s = c[k];
+            for (int j = 1; j <= k; j++) {
+                s = s.subtract(o.c[j].multiply(h[k - j]));
+            }
+            h[k] = s.divide(o.c[0]);
+        }
+        return new Jet(h, precision);
+    }
+
+    /** e^f: e_0 = e^{f_0}, e_k = (1/k)·Σ_{j=1..k} j·f_j·e_{k−j}. */
+    Jet exp() {
+        Apcomplex[] e = new Apcomplex[c.length];
+        e[0] = ApcomplexMath.exp(c[0]);
+        for (int k = 1; k < c.length; k++) {
+            Apcomplex s = Apcomplex.ZERO;
+            for (int j = 1; j <= k; j++) {
+                s = s.add(c[j].multiply(e[k - j]).multiply(new Apfloat(j, precision)));
+            }
+            e[k] = s.divide(new Apfloat(k, precision));
+        }
+        return new Jet(e, precision);
+    }
+
+    /** log f (principal branch): l_0 = log f_0, l_k = (f_k − (1/k)·Σ_{j=1..k−1} j·l_j·f_{k−j})/f_0. */
+    Jet log() {
+        if (c[0].equals(Apcomplex.ZERO)) {
+            throw new ArithmeticException("logarithm of zero");
+        }
+        Apcomplex[] l = new Apcomplex[c.length];
+        l[0] = ApcomplexMath.log(c[0]);
+        for (int k = 1; k < c.length; k++) {
+            Apcomplex s = Apcomplex.ZERO;
+            for (int j = 1; j < k; j++) {
+                s = s.add(l[j].multiply(c[k - j]).multiply(new Apfloat(j, precision)));
+            }
+            l[k] = c[k].subtract(s.divide(new Apfloat(k, precision))).divide(c[0]);
+        }
+        return new Jet(l, precision);
+    }
+
+    /** this^k for an integer k, by repeated squaring (k &lt; 0 through 1/this). */
+    Jet pow(long k) {
+        Jet base = k < 0 ? constant(new Apfloat(1, precision), order(), precision).divide(this) : this;
+        Jet result = constant(new Apfloat(1, precision), order(), precision);
+        for (long e = Math.abs(k); e > 0; e >>= 1) {
+            if ((e & 1) == 1) {
+                result = result.multiply(base);
+            }
+            if (e > 1) {
+                base = base.multiply(base);
+            }
+        }
+        return result;
+    }
+
+    private static Apcomplex[] zeros(int order, long precision) {
+        Apcomplex[] c = new Apcomplex[order + 1];
+        java.util.Arrays.fill(c, Apcomplex.ZERO);
+        return c;
+    }
+}
