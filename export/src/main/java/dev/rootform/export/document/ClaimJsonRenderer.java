@@ -15,8 +15,9 @@ import java.util.Locale;
 /**
  * The answer to a claim check as one JSON object. Keys: verdict ("holds" | "fails"), exact,
  * claim, readAs, digits, equation {holds, residual, detail}, conditions [{condition, claimed,
- * required, holds}], firstMismatch {at, claimed, actual} (a function's adds difference; null when
- * there is none), slips [{kind, explanation, corrected}], solution (as in solve's JSON), notes.
+ * required, holds}], firstMismatch {at, claimed, actual} (a sequence's first differing index, null
+ * when there is none), largestDifference {at, claimed, actual, difference} (a function's, on the
+ * grid), slips [{kind, explanation, corrected}], solution (as in solve's JSON), notes.
  * A part not decided has holds null.
  *
  * @since 0.3
@@ -45,15 +46,14 @@ public final class ClaimJsonRenderer {
                     .put("claimed", c.claimed()).put("required", c.condition().value().toString());
             holds(node, c.decision());
         }
-        if (r.mismatch().isPresent()) {
-            ObjectNode m = root.putObject("firstMismatch").put("at", r.mismatch().get().at())
-                    .put("claimed", r.mismatch().get().claimed()).put("actual", r.mismatch().get().actual());
+        String key = r.sequence() ? "firstMismatch" : "largestDifference";
+        root.putNull("firstMismatch");
+        r.mismatch().ifPresent(m -> {
+            ObjectNode node = root.putObject(key).put("at", m.at()).put("claimed", m.claimed()).put("actual", m.actual());
             if (!r.sequence()) {
-                m.put("difference", r.mismatch().get().difference());
+                node.put("difference", m.difference());
             }
-        } else {
-            root.putNull("firstMismatch");
-        }
+        });
         ArrayNode slips = root.putArray("slips");
         for (Slip s : r.slips()) {
             slips.addObject().put("kind", s.kind().name().toLowerCase(Locale.ROOT).replace('_', '-'))

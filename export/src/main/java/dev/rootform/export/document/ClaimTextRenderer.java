@@ -44,9 +44,17 @@ public final class ClaimTextRenderer {
             slips.add("  corrected: " + ClaimText.of(s.corrected()));
         }
         section(out, "slips", slips);
-        section(out, "solution", List.of(ClaimText.of(r.solution().solution().closedForm())));
+        section(out, "solution", solution(r));
         section(out, "notes", r.notes());
         return out.toString();
+    }
+
+    /** The correct solution as a claim, and its numerically fixed constants. */
+    private static List<String> solution(ClaimReport r) {
+        List<String> lines = new ArrayList<>(List.of(ClaimText.of(r.solution().solution().closedForm())));
+        r.solution().analysis().constantValues().forEach((name, value) -> lines.add("  " + name + " ≈ "
+                + value.round(new java.math.MathContext(r.digits())).stripTrailingZeros().toPlainString()));
+        return lines;
     }
 
     private static String equation(EquationFinding e) {

@@ -41,6 +41,10 @@ public final class NumericClaimCheck {
     static final Rational STEP = Rational.of(1, 2);
     /** Indices of a sequence claim sampled beyond the first: at least this many. */
     static final int SEQUENCE_SAMPLES = 24;
+    /** Significant digits of a value shown beside a comparison. */
+    static final int SHOWN_DIGITS = 16;
+    /** Beyond this magnitude a decimal is written with an exponent. */
+    private static final int PLAIN_LIMIT = 6;
 
     private final Solution solution;
     private final Claim claim;
@@ -291,9 +295,9 @@ public final class NumericClaimCheck {
         return new Apfloat(q.toBigDecimal(new MathContext((int) precision)), precision);
     }
 
-    /** A real value to the requested digits (the imaginary part of a real claim is rounding noise). */
+    /** A real value to the requested digits, at most {@link #SHOWN_DIGITS} (the imaginary part of a real claim is rounding noise). */
     private String decimal(Apcomplex z) {
-        return decimal(z.real(), digits);
+        return decimal(z.real(), Math.min(digits, SHOWN_DIGITS));
     }
 
     private static String decimal(Apfloat x, int shown) {
@@ -302,7 +306,7 @@ public final class NumericClaimCheck {
         }
         BigDecimal d = new BigDecimal(x.toString(true)).round(new MathContext(shown)).stripTrailingZeros();
         int magnitude = d.precision() - d.scale() - 1;
-        return Math.abs(magnitude) <= 20 ? d.toPlainString() : d.toString();
+        return Math.abs(magnitude) <= PLAIN_LIMIT ? d.toPlainString() : d.toString().replace("E", "e");
     }
 
     private static String point(Rational t) {

@@ -6,8 +6,8 @@ import java.util.Objects;
 
 /**
  * The expression tree of a claimed closed form. Every node remembers where it starts in the claim's
- * text, so a refusal can point at it. {@link #toString()} writes the tree back with every grouping
- * explicit, which shows how the claim was read.
+ * text, so a refusal can point at it. {@link #toString()} writes the tree back in ordinary notation
+ * with explicit products and only the parentheses it needs, which shows how the claim was read.
  *
  * @since 0.3
  */
@@ -25,7 +25,7 @@ public sealed interface Expr permits Expr.Number, Expr.Variable, Expr.Constant, 
 
         @Override
         public String toString() {
-            return value.signum() < 0 || !value.isInteger() ? "(" + value + ")" : value.toString();
+            return ExprWriter.write(this);
         }
     }
 
@@ -37,7 +37,7 @@ public sealed interface Expr permits Expr.Number, Expr.Variable, Expr.Constant, 
 
         @Override
         public String toString() {
-            return name;
+            return ExprWriter.write(this);
         }
     }
 
@@ -52,7 +52,7 @@ public sealed interface Expr permits Expr.Number, Expr.Variable, Expr.Constant, 
 
         @Override
         public String toString() {
-            return kind == Kind.PI ? "π" : kind == Kind.E ? "e" : "λ";
+            return ExprWriter.write(this);
         }
     }
 
@@ -64,7 +64,7 @@ public sealed interface Expr permits Expr.Number, Expr.Variable, Expr.Constant, 
 
         @Override
         public String toString() {
-            return "(-" + operand + ")";
+            return ExprWriter.write(this);
         }
     }
 
@@ -72,13 +72,7 @@ public sealed interface Expr permits Expr.Number, Expr.Variable, Expr.Constant, 
     record Binary(Op op, Expr left, Expr right, int start) implements Expr {
         /** The arithmetic operators. */
         public enum Op {
-            ADD("+"), SUBTRACT("-"), MULTIPLY("·"), DIVIDE("/"), POWER("^");
-
-            private final String symbol;
-
-            Op(String symbol) {
-                this.symbol = symbol;
-            }
+            ADD, SUBTRACT, MULTIPLY, DIVIDE, POWER
         }
 
         public Binary {
@@ -89,7 +83,7 @@ public sealed interface Expr permits Expr.Number, Expr.Variable, Expr.Constant, 
 
         @Override
         public String toString() {
-            return "(" + left + " " + op.symbol + " " + right + ")";
+            return ExprWriter.write(this);
         }
     }
 
@@ -118,7 +112,7 @@ public sealed interface Expr permits Expr.Number, Expr.Variable, Expr.Constant, 
 
         @Override
         public String toString() {
-            return function.written + "(" + argument + ")";
+            return ExprWriter.write(this);
         }
     }
 
@@ -134,7 +128,7 @@ public sealed interface Expr permits Expr.Number, Expr.Variable, Expr.Constant, 
 
         @Override
         public String toString() {
-            return "Σ_{" + factor.toString("λ") + " = 0} " + summand;
+            return ExprWriter.write(this);
         }
     }
 }
