@@ -58,7 +58,9 @@ final class CheckJob {
             Claim claim = ClaimParser.parse(request.claim(), eq.domain(), eq.function(), eq.variable());
             ClaimFindings exact = ClaimChecker.check(solution, claim);
             boolean numeric = exact.verdict() == Decision.UNDECIDED;
-            List<Rational> points = numeric || eq.domain() == Domain.DIFFERENTIAL ? NumericClaimCheck.samplePoints(solution) : List.of();
+            // a function claim that fails exactly is also measured on a grid; one that holds differs by 0
+            boolean grid = eq.domain() == Domain.DIFFERENTIAL && exact.verdict() == Decision.FAILS;
+            List<Rational> points = numeric || grid ? NumericClaimCheck.samplePoints(solution) : List.of();
             Analysis analysis = new Analyzer(options.digits()).analyze(solution, points);
             Report report = new Report(solution, analysis, options.digits(), options.numeric());
             if (!report.verified()) {
@@ -67,7 +69,7 @@ final class CheckJob {
             }
             ClaimReport checked = numeric
                     ? withNumeric(report, claim, exact, NumericClaimCheck.check(solution, claim, analysis.values(), options.digits()))
-                    : exactly(report, claim, exact, eq.domain() == Domain.DIFFERENTIAL
+                    : exactly(report, claim, exact, grid
                             ? NumericClaimCheck.largestDifference(solution, claim, analysis.values(), options.digits())
                             : exact.firstMismatch());
             return checked.holds() ? new CheckResult.Holds(checked) : new CheckResult.Fails(checked);

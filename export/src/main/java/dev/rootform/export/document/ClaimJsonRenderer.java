@@ -17,7 +17,7 @@ import java.util.Locale;
  * claim, readAs, digits, equation {holds, residual, detail}, conditions [{condition, claimed,
  * required, holds}], firstMismatch {at, claimed, actual} (a sequence's first differing index, null
  * when there is none), largestDifference {at, claimed, actual, difference} (a function's, on the
- * grid), slips [{kind, explanation, corrected}], solution (as in solve's JSON), notes.
+ * grid; difference "0" and no point when the claim is the solution exactly), slips [{kind, explanation, corrected}], solution (as in solve's JSON), notes.
  * A part not decided has holds null.
  *
  * @since 0.3
@@ -48,6 +48,9 @@ public final class ClaimJsonRenderer {
         }
         String key = r.sequence() ? "firstMismatch" : "largestDifference";
         root.putNull("firstMismatch");
+        if (!r.sequence() && r.holds() && r.exact()) {
+            root.putObject(key).putNull("at").put("difference", "0");
+        }
         r.mismatch().ifPresent(m -> {
             ObjectNode node = root.putObject(key).put("at", m.at()).put("claimed", m.claimed()).put("actual", m.actual());
             if (!r.sequence()) {

@@ -38,6 +38,9 @@ public final class ClaimTextRenderer {
         }
         section(out, "conditions", conditions);
         r.mismatch().ifPresent(m -> section(out, r.sequence() ? "first mismatch" : "largest diff.", List.of(mismatch(r, m))));
+        if (!r.sequence() && r.holds() && r.exact()) {
+            section(out, "largest diff.", List.of("0 (the claim is the solution exactly)"));
+        }
         List<String> slips = new ArrayList<>();
         for (Slip s : r.slips()) {
             slips.add(s.kind().label() + ": " + s.explanation());
