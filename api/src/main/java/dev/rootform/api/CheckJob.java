@@ -6,7 +6,6 @@ import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.claim.NumericClaimCheck;
 import dev.rootform.numeric.claim.NumericFindings;
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.claim.Claim;
 import dev.rootform.symbolic.claim.ClaimChecker;
 import dev.rootform.symbolic.claim.ClaimFindings;
@@ -24,16 +23,20 @@ import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
 import dev.rootform.symbolic.solve.Solver;
+import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.stream.Stream;
 
 /**
  * One claim check: solve the problem exactly, read the claim, check it exactly where its numbers
- * allow ({@link ClaimChecker}), numerically for the rest and for a function's largest difference on
- * a grid ({@link NumericClaimCheck}), and put both into one {@link ClaimReport}.
+ * allow ({@link ClaimChecker}), numerically for the rest and for a failing function's largest
+ * difference on a grid ({@link NumericClaimCheck}), and put both into one {@link ClaimReport}. The
+ * numeric analysis of the solution runs only when its constants are fixed numerically: the
+ * solution's own exact checks stand for an exact one.
  */
 final class CheckJob {
     private CheckJob() {
@@ -58,19 +61,21 @@ final class CheckJob {
             Claim claim = ClaimParser.parse(request.claim(), eq.domain(), eq.function(), eq.variable());
             ClaimFindings exact = ClaimChecker.check(solution, claim);
             boolean numeric = exact.verdict() == Decision.UNDECIDED;
-            // a function claim that fails exactly is also measured on a grid; one that holds differs by 0
-            boolean grid = eq.domain() == Domain.DIFFERENTIAL && exact.verdict() == Decision.FAILS;
-            List<Rational> points = numeric || grid ? NumericClaimCheck.samplePoints(solution) : List.of();
-            Analysis analysis = new Analyzer(options.digits()).analyze(solution, points);
+            // the numeric analysis is needed only for constants that are fixed numerically
+            Analysis analysis = solution.hasNumericConstants() ? new Analyzer(options.digits()).analyze(solution, List.of())
+                    : new Analysis(List.of(), List.of(), List.of(), Map.of(), List.of(), Optional.empty(), List.of());
             Report report = new Report(solution, analysis, options.digits(), options.numeric());
             if (!report.verified()) {
                 return new CheckResult.Unchecked(new Result.CheckFailed(report, Stream.concat(solution.checks().stream(),
                         report.numericChecks().stream()).filter(c -> !c.passed()).map(Check::name).toList()));
             }
+            Map<String, BigDecimal> constants = analysis.constantValues();
+            // a function claim that fails exactly is also measured on a grid; one that holds differs by 0
+            boolean grid = eq.domain() == Domain.DIFFERENTIAL && exact.verdict() == Decision.FAILS;
             ClaimReport checked = numeric
-                    ? withNumeric(report, claim, exact, NumericClaimCheck.check(solution, claim, analysis.values(), options.digits()))
+                    ? withNumeric(report, claim, exact, NumericClaimCheck.check(solution, constants, claim, options.digits()))
                     : exactly(report, claim, exact, grid
-                            ? NumericClaimCheck.largestDifference(solution, claim, analysis.values(), options.digits())
+                            ? NumericClaimCheck.largestDifference(solution, constants, claim, options.digits())
                             : exact.firstMismatch());
             return checked.holds() ? new CheckResult.Holds(checked) : new CheckResult.Fails(checked);
         } catch (ConditionsException e) {

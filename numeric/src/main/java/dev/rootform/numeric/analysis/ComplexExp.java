@@ -11,15 +11,18 @@ import org.apfloat.ApfloatMath;
  * growth of the squarings (a standard method; R. Brent and P. Zimmermann, Modern Computer
  * Arithmetic, Cambridge University Press, 2010, section 4.3 — section number from memory).
  * Measured about 8× faster than apfloat's own complex exponential at 57 digits.
+ *
+ * @since 0.3
  */
-final class ComplexExp {
+public final class ComplexExp {
     /** 2^-10 bound on the scaled argument: each Taylor term gains at least 3 digits. */
     private static final int SCALE_BITS = 10;
 
     private ComplexExp() {
     }
 
-    static Apcomplex exp(Apcomplex z, long precision) {
+    /** e^z to {@code precision} digits. */
+    public static Apcomplex exp(Apcomplex z, long precision) {
         double magnitude = ApcomplexMath.abs(z).doubleValue();
         int s = magnitude == 0 ? 0 : Math.max(0, (int) Math.ceil(Math.log(magnitude) / Math.log(2)) + SCALE_BITS);
         long work = precision + (long) Math.ceil(s * Math.log10(2)) + 5;

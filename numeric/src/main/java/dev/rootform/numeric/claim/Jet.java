@@ -1,8 +1,10 @@
 package dev.rootform.numeric.claim;
 
+import dev.rootform.numeric.analysis.ComplexExp;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
+import org.apfloat.ApfloatMath;
 
 /**
  * A truncated Taylor series f(x + h) = Σ_{k ≤ K} c_k h^k at one point, in complex apfloat
@@ -11,6 +13,10 @@ import org.apfloat.Apfloat;
  * A. Griewank and A. Walther, Evaluating Derivatives, SIAM, 2008, ch. 13 — chapter from memory).
  */
 final class Jet {
+    private static final Apfloat HALF = new Apfloat("0.5");
+    /** Integer powers up to this size are multiplied out. */
+    private static final Apfloat LIMIT = new Apfloat(100_000);
+
     private final Apcomplex[] c;
     private final long precision;
 
@@ -115,10 +121,31 @@ final class Jet {
         return new Jet(h, precision);
     }
 
+    /** The value when this is a constant small integer (an exponent such as n at an index), else empty. */
+    java.util.OptionalLong integerValue() {
+        if (!isConstant() || c[0].imag().signum() != 0) {
+            return java.util.OptionalLong.empty();
+        }
+        Apfloat v = c[0].real();
+        Apfloat rounded = v.signum() >= 0 ? ApfloatMath.floor(v.add(HALF)) : ApfloatMath.ceil(v.subtract(HALF));
+        return v.equals(rounded) && rounded.compareTo(LIMIT) <= 0 && rounded.compareTo(LIMIT.negate()) >= 0
+                ? java.util.OptionalLong.of(rounded.longValue()) : java.util.OptionalLong.empty();
+    }
+
+    /** True when every coefficient is real. */
+    boolean isReal() {
+        for (Apcomplex x : c) {
+            if (x.imag().signum() != 0) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** e^f: e_0 = e^{f_0}, e_k = (1/k)·Σ_{j=1..k} j·f_j·e_{k−j}. */
     Jet exp() {
         Apcomplex[] e = new Apcomplex[c.length];
-        e[0] = ApcomplexMath.exp(c[0]);
+        e[0] = ComplexExp.exp(c[0], precision);
         for (int k = 1; k < c.length; k++) {
             Apcomplex s = Apcomplex.ZERO;
             for (int j = 1; j <= k; j++) {
@@ -135,7 +162,7 @@ final class Jet {
             throw new ArithmeticException("logarithm of zero");
         }
         Apcomplex[] l = new Apcomplex[c.length];
-        l[0] = ApcomplexMath.log(c[0]);
+        l[0] = c[0].imag().signum() == 0 && c[0].real().signum() > 0 ? ApfloatMath.log(c[0].real()) : ApcomplexMath.log(c[0]);
         for (int k = 1; k < c.length; k++) {
             Apcomplex s = Apcomplex.ZERO;
             for (int j = 1; j < k; j++) {
@@ -144,6 +171,31 @@ final class Jet {
             l[k] = c[k].subtract(s.divide(new Apfloat(k, precision))).divide(c[0]);
         }
         return new Jet(l, precision);
+    }
+
+    /**
+     * {cos f, sin f} of a real series: C_0 = cos f_0, S_0 = sin f_0, C_k = −(1/k)·Σ j·f_j·S_{k−j},
+     * S_k = (1/k)·Σ j·f_j·C_{k−j}.
+     */
+    Jet[] cosSin() {
+        Apcomplex[] cs = new Apcomplex[c.length];
+        Apcomplex[] sn = new Apcomplex[c.length];
+        Apcomplex unit = ComplexExp.exp(new Apcomplex(Apfloat.ZERO, c[0].real()), precision);
+        cs[0] = unit.real();
+        sn[0] = unit.imag();
+        for (int k = 1; k < c.length; k++) {
+            Apcomplex a = Apcomplex.ZERO;
+            Apcomplex b = Apcomplex.ZERO;
+            for (int j = 1; j <= k; j++) {
+                Apfloat weight = new Apfloat(j, precision);
+                a = a.add(c[j].multiply(sn[k - j]).multiply(weight));
+                b = b.add(c[j].multiply(cs[k - j]).multiply(weight));
+            }
+            Apfloat divisor = new Apfloat(k, precision);
+            cs[k] = a.negate().divide(divisor);
+            sn[k] = b.divide(divisor);
+        }
+        return new Jet[] {new Jet(cs, precision), new Jet(sn, precision)};
     }
 
     /** this^k for an integer k, by repeated squaring (k &lt; 0 through 1/this). */

@@ -9,6 +9,7 @@ import java.math.MathContext;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.OptionalLong;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
@@ -24,6 +25,7 @@ final class JetEvaluator {
     private final long precision;
     private final int order;
     private final Map<RationalPolynomial, List<Enclosure>> roots = new HashMap<>();
+    private final Apfloat euler;
 
     /**
      * @param precision working precision in decimal digits
@@ -32,6 +34,7 @@ final class JetEvaluator {
     JetEvaluator(long precision, int order) {
         this.precision = precision;
         this.order = order;
+        this.euler = ApfloatMath.exp(new Apfloat(1, precision));
     }
 
     /** The jet of e at the point x. @throws UnsupportedOperationException for arccos etc. of the variable */
@@ -51,7 +54,7 @@ final class JetEvaluator {
                 case PI:
                     return constant(ApfloatMath.pi(precision));
                 case E:
-                    return constant(ApfloatMath.exp(new Apfloat(1, precision)));
+                    return constant(euler);
                 default:
                     return constant(lambda);
             }
@@ -75,14 +78,13 @@ final class JetEvaluator {
 
     private Jet binary(Expr.Binary b, Apfloat x, Apcomplex lambda) {
         if (b.op() == Expr.Binary.Op.POWER) {
-            if (b.right() instanceof Expr.Number n && n.value().isInteger() && n.value().abs().compareTo(Rational.of(100_000)) <= 0) {
-                return evaluate(b.left(), x, lambda).pow(n.value().toBigInteger().longValueExact());
-            }
             Jet exponent = evaluate(b.right(), x, lambda);
             if (b.left() instanceof Expr.Constant c && c.kind() == Expr.Constant.Kind.E) {
                 return exponent.exp();
             }
-            return exponent.multiply(evaluate(b.left(), x, lambda).log()).exp();
+            Jet base = evaluate(b.left(), x, lambda);
+            OptionalLong k = exponent.integerValue();
+            return k.isPresent() ? base.pow(k.getAsLong()) : exponent.multiply(base.log()).exp();
         }
         Jet left = evaluate(b.left(), x, lambda);
         Jet right = evaluate(b.right(), x, lambda);
@@ -105,6 +107,9 @@ final class JetEvaluator {
         switch (c.function()) {
             case COS:
             case SIN: {
+                if (a.isReal()) {
+                    return a.cosSin()[c.function() == Expr.Call.Function.COS ? 0 : 1];
+                }
                 Jet plus = a.scale(i).exp();
                 Jet minus = a.scale(i.negate()).exp();
                 return c.function() == Expr.Call.Function.COS ? plus.add(minus).scale(half)

@@ -1,13 +1,14 @@
 package dev.rootform.numeric.claim;
 
-import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.claim.Claim;
 import dev.rootform.symbolic.claim.ConditionFinding;
 import dev.rootform.symbolic.claim.Decision;
 import dev.rootform.symbolic.claim.EquationFinding;
+import dev.rootform.symbolic.claim.Expr;
 import dev.rootform.symbolic.claim.Expressions;
 import dev.rootform.symbolic.claim.Mismatch;
+import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -52,11 +53,14 @@ public final class NumericClaimCheck {
     private final int digits;
     private final long precision;
     private final Apfloat tolerance;
+    /** The solution's formula with numerically fixed constants put in; empty for a general solution. */
+    private final Optional<Expr> solutionForm;
     /** Values (order 0) of the claim, the forcing and the values claimed one by one; root sums' roots cached. */
     private final JetEvaluator values;
 
-    private NumericClaimCheck(Solution solution, Claim claim, int digits) {
+    private NumericClaimCheck(Solution solution, Map<String, BigDecimal> constants, Claim claim, int digits) {
         this.solution = solution;
+        this.solutionForm = resolved(solution, constants);
         this.claim = claim;
         this.eq = solution.problem().equation();
         this.digits = digits;
@@ -65,7 +69,7 @@ public final class NumericClaimCheck {
         this.values = new JetEvaluator(precision, 0);
     }
 
-    /** The points at which the check needs the solution's values: indices of a sequence, a grid of a function. */
+    /** The sample points: indices of a sequence from its first index, a grid of a function from its condition point. */
     public static List<Rational> samplePoints(Solution solution) {
         List<Rational> points = new ArrayList<>();
         if (solution.problem().conditions().isEmpty()) {
@@ -88,31 +92,35 @@ public final class NumericClaimCheck {
     /**
      * Checks the claim numerically.
      *
-     * @param values the solution's values at {@link #samplePoints(Solution)} (empty for a general solution)
+     * @param constants the values of the solution's numerically fixed constants (boundary values,
+     *     trial forms), by name; empty when its constants are exact
      * @param digits significant digits of the comparisons
      * @throws UnsupportedOperationException if the claim uses arccos, arcsin or arctan of the variable
      */
-    public static NumericFindings check(Solution solution, Claim claim, List<PointValue> values, int digits) {
-        return new NumericClaimCheck(solution, claim, digits).run(values);
+    public static NumericFindings check(Solution solution, Map<String, BigDecimal> constants, Claim claim, int digits) {
+        return new NumericClaimCheck(solution, constants, claim, digits).run();
     }
 
     /**
      * Only the largest difference between a function claim and the solution on the grid of
-     * {@link #samplePoints(Solution)}, when the rest was decided exactly.
+     * {@link #samplePoints(Solution)}, for a claim decided exactly.
      */
-    public static Optional<Mismatch> largestDifference(Solution solution, Claim claim, List<PointValue> values, int digits) {
-        NumericClaimCheck check = new NumericClaimCheck(solution, claim, digits);
-        return check.largestDifference(samplePoints(solution), byPoint(values));
+    public static Optional<Mismatch> largestDifference(Solution solution, Map<String, BigDecimal> constants, Claim claim,
+            int digits) {
+        return new NumericClaimCheck(solution, constants, claim, digits).largestDifference(samplePoints(solution));
     }
 
-    private static Map<Rational, PointValue> byPoint(List<PointValue> values) {
-        Map<Rational, PointValue> byPoint = new HashMap<>();
-        values.forEach(v -> byPoint.put(v.at(), v));
-        return byPoint;
+    /** The solution's formula as an expression, its free constants replaced by their values. */
+    private static Optional<Expr> resolved(Solution solution, Map<String, BigDecimal> constants) {
+        if (solution.problem().conditions().isEmpty()) {
+            return Optional.empty();
+        }
+        Map<String, Rational> values = new HashMap<>();
+        constants.forEach((name, value) -> values.put(name, Rational.of(value)));
+        return Optional.of(Expressions.of(solution.closedForm().withConstantValues(values)));
     }
 
-    private NumericFindings run(List<PointValue> solutionValues) {
-        Map<Rational, PointValue> byPoint = byPoint(solutionValues);
+    private NumericFindings run() {
         boolean sequence = eq.domain() == Domain.DIFFERENCE;
         List<Rational> points = samplePoints(solution);
         if (points.isEmpty()) {
@@ -123,8 +131,9 @@ public final class NumericClaimCheck {
         for (Condition c : solution.problem().conditions()) {
             conditions.add(condition(c));
         }
-        Optional<Mismatch> mismatch = byPoint.isEmpty() ? Optional.empty()
-                : sequence ? firstMismatch(points, byPoint) : largestDifference(points, byPoint);
+        Optional<Mismatch> mismatch = solutionForm.isEmpty() ? Optional.empty()
+                : sequence ? firstMismatch(points) : largestDifference(points);
+
         Decision verdict = equation.decision();
         for (ConditionFinding c : conditions) {
             verdict = verdict.and(c.decision());
@@ -245,33 +254,34 @@ public final class NumericClaimCheck {
 
     // ---- comparison with the solution ----
 
-    private Optional<Mismatch> firstMismatch(List<Rational> points, Map<Rational, PointValue> solutionValues) {
+    /** x[n] of a fitted sequence, exactly (a rational, or a + b·√r). */
+    private Surd exactValue(long n) {
+        return solution.exact().map(s -> Surd.of(s.valueAt(n))).orElseGet(() -> solution.radical().orElseThrow().valueAt(n));
+    }
+
+    private Optional<Mismatch> firstMismatch(List<Rational> points) {
         for (Rational p : points) {
-            Apcomplex claimed = sequenceValue(p.toBigInteger().longValueExact());
-            PointValue actual = solutionValues.get(p);
-            if (claimed == null || actual == null) {
+            long n = p.toBigInteger().longValueExact();
+            Apcomplex claimed = sequenceValue(n);
+            if (claimed == null) {
                 continue;
             }
-            Apfloat x = new Apfloat(actual.value(), precision);
+            Surd exact = exactValue(n);
+            Apcomplex x = new Apfloat(exact.toBigDecimal(new MathContext((int) precision)), precision);
             Apfloat difference = ApcomplexMath.abs(claimed.subtract(x));
-            if (!small(difference, max(ApcomplexMath.abs(claimed), ApfloatMath.abs(x)))) {
-                return Optional.of(new Mismatch(p.toString(), "≈ " + decimal(claimed),
-                        actual.exactText().orElse("≈ " + decimal(x)), ""));
+            if (!small(difference, max(ApcomplexMath.abs(claimed), ApcomplexMath.abs(x)))) {
+                return Optional.of(new Mismatch(p.toString(), "≈ " + decimal(claimed), exact.toString(), ""));
             }
         }
         return Optional.empty();
     }
 
-    private Optional<Mismatch> largestDifference(List<Rational> points, Map<Rational, PointValue> solutionValues) {
+    private Optional<Mismatch> largestDifference(List<Rational> points) {
         Mismatch largest = null;
         Apfloat worst = new Apfloat(-1, precision);
         for (Rational t : points) {
-            PointValue actual = solutionValues.get(t);
-            if (actual == null) {
-                continue;
-            }
             Apcomplex claimed = values.at(claim.formula(), apfloat(t)).value();
-            Apfloat x = new Apfloat(actual.value(), precision);
+            Apcomplex x = values.at(solutionForm.orElseThrow(), apfloat(t)).value();
             Apfloat difference = ApcomplexMath.abs(claimed.subtract(x));
             if (difference.compareTo(worst) > 0) {
                 worst = difference;
