@@ -38,6 +38,7 @@ public final class Benchmark {
         warm();
         cold(Path.of(args.length > 0 ? args[0] : "../rootform"));
         scaling();
+        CheckBenchmark.run();
         sideBySide();
     }
 
