@@ -4,8 +4,8 @@ import dev.rootform.export.Report;
 import dev.rootform.export.document.ClaimReport;
 import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.Analyzer;
-import dev.rootform.numeric.claim.NumericClaimCheck;
-import dev.rootform.numeric.claim.NumericFindings;
+import dev.rootform.numeric.analysis.NumericClaimCheck;
+import dev.rootform.numeric.analysis.NumericFindings;
 import dev.rootform.symbolic.claim.Claim;
 import dev.rootform.symbolic.claim.ClaimChecker;
 import dev.rootform.symbolic.claim.ClaimFindings;
@@ -17,7 +17,7 @@ import dev.rootform.symbolic.claim.Mismatch;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.parse.ProblemParser;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ConditionsException;
@@ -28,7 +28,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.atomic.AtomicReference;
 import java.util.stream.Stream;
 
 /**
@@ -43,13 +42,8 @@ final class CheckJob {
     }
 
     static CheckResult run(CheckRequest request) {
-        AtomicReference<CheckResult> outcome = new AtomicReference<>();
-        // TimeLimit runs jobs that end in a Result; the check's own outcome travels beside it
-        Result finished = TimeLimit.within(request.options().timeLimit(), () -> {
-            outcome.set(check(request));
-            return new Result.Refused("", "", -1);
-        });
-        return finished instanceof Result.OutOfTime late ? new CheckResult.Unchecked(late) : outcome.get();
+        Result.OutOfTime late = new Result.OutOfTime(request.options().timeLimit());
+        return TimeLimit.within(request.options().timeLimit(), () -> check(request), new CheckResult.Unchecked(late));
     }
 
     private static CheckResult check(CheckRequest request) {

@@ -10,9 +10,9 @@ import java.util.Optional;
  * ran out — the {@link Result} that says so.
  *
  * <pre>{@code
- * CheckResult r = Rootform.check(CheckRequest.of("x[n+1] = 2x[n] + 1; x[0] = 1", "2^(n+1) - 1"));
+ * CheckResult r = Rootform.check(CheckRequest.of("x[n+1] = 2x[n] + 1; x[0] = 1", "2^(n+2) - 1"));
  * if (r instanceof CheckResult.Fails f) {
- *     System.out.println(ClaimTextRenderer.render(f.report()));
+ *     f.checked().slips().forEach(slip -> System.out.println(slip.explanation()));
  * }
  * }</pre>
  *

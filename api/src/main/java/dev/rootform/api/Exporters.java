@@ -1,16 +1,17 @@
 package dev.rootform.api;
 
-import dev.rootform.export.CRenderer;
-import dev.rootform.export.CSource;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Exporter;
-import dev.rootform.export.JavaRenderer;
-import dev.rootform.export.JsonRenderer;
-import dev.rootform.export.LatexRenderer;
-import dev.rootform.export.MathMlRenderer;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
-import dev.rootform.export.TextRenderer;
+import dev.rootform.export.code.CRenderer;
+import dev.rootform.export.code.CSource;
+import dev.rootform.export.code.CodeRequests;
+import dev.rootform.export.code.JavaRenderer;
+import dev.rootform.export.document.JsonRenderer;
+import dev.rootform.export.document.LatexRenderer;
+import dev.rootform.export.document.MathMlRenderer;
+import dev.rootform.export.document.TextRenderer;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -19,32 +20,48 @@ import java.util.function.BiFunction;
 
 /**
  * The exporters by format name: {@code text}, {@code json}, {@code latex}, {@code mathml},
- * {@code java}, {@code c}.
+ * {@code java}, {@code c}. Each exporter only formats a finished {@link Report}; all of them are
+ * stateless and thread-safe. The code formats ({@code java}, {@code c}) cannot write every answer
+ * (a general solution has free constants): {@link Exporter#refusal(Report)} says why, and
+ * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report.
+ *
+ * <p>The sum of the first n odd numbers, solved and written as LaTeX:
  *
  * <pre>{@code
- * String json = Exporters.byName("json").orElseThrow().render(report, CodeNames.defaults()).text();
+ * Report report = Rootform.solve(SolveRequest.of("x[n+1] = x[n] + 2n + 1; x[0] = 0")).answer().orElseThrow();
+ * Exporter latex = Exporters.byName("latex").orElseThrow();
+ * System.out.println(latex.render(report, CodeNames.defaults()).text());
  * }</pre>
  *
  * @since 0.2
  */
 public final class Exporters {
     private static final Map<String, Exporter> BY_NAME = index(List.of(
-            new Named("text", (r, n) -> Rendering.of(TextRenderer.render(r))),
-            new Named("json", (r, n) -> Rendering.of(JsonRenderer.render(r))),
-            new Named("latex", (r, n) -> Rendering.of(LatexRenderer.render(r))),
-            new Named("mathml", (r, n) -> Rendering.of(MathMlRenderer.render(r))),
-            new Named("java", (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
-            new Named("c", Exporters::c)));
+            new Named("text", false, (r, n) -> Rendering.of(TextRenderer.render(r))),
+            new Named("json", false, (r, n) -> Rendering.of(JsonRenderer.render(r))),
+            new Named("latex", false, (r, n) -> Rendering.of(LatexRenderer.render(r))),
+            new Named("mathml", false, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
+            new Named("java", true, (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
+            new Named("c", true, Exporters::c)));
 
     private Exporters() {
     }
 
-    /** The exporter of {@code format}, or empty for an unknown name. */
+    /**
+     * The exporter of one format.
+     *
+     * @param format a name from {@link #names()}, e.g. {@code "json"}
+     * @return the exporter, or empty for an unknown name
+     */
     public static Optional<Exporter> byName(String format) {
         return Optional.ofNullable(BY_NAME.get(format));
     }
 
-    /** Every format name, in a fixed order. */
+    /**
+     * Every format name.
+     *
+     * @return the names in a fixed order, {@code text} first
+     */
     public static List<String> names() {
         return List.copyOf(BY_NAME.keySet());
     }
@@ -60,8 +77,13 @@ public final class Exporters {
         return java.util.Collections.unmodifiableMap(map);
     }
 
-    /** An exporter that delegates to a renderer. */
-    private record Named(String format, BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
+    /** An exporter that delegates to a renderer; code formats need a fitted solution. */
+    private record Named(String format, boolean code, BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
+        @Override
+        public Optional<String> refusal(Report report) {
+            return code ? CodeRequests.refusal(report) : Optional.empty();
+        }
+
         @Override
         public Rendering render(Report report, CodeNames names) {
             return renderer.apply(report, names);

@@ -1,7 +1,7 @@
 package dev.rootform.api;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.util.ArrayList;
 import java.util.List;
 

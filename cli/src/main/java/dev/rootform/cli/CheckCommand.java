@@ -8,7 +8,7 @@ import dev.rootform.api.Rootform;
 import dev.rootform.export.document.ClaimJsonRenderer;
 import dev.rootform.export.document.ClaimReport;
 import dev.rootform.export.document.ClaimTextRenderer;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.io.PrintWriter;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -84,7 +84,7 @@ final class CheckCommand implements Callable<Integer> {
             out.flush();
             return result instanceof CheckResult.Holds ? ExitCode.VERIFIED : ExitCode.CLAIM_FAILS;
         } catch (InputException e) {
-            err.println(Diagnostics.describe(e));
+            err.println(ErrorLine.describe(e));
             err.flush();
             return ExitCode.BAD_INPUT;
         }
@@ -94,6 +94,6 @@ final class CheckCommand implements Callable<Integer> {
         if (reason instanceof Result.CheckFailed f) {
             return "rootform: internal error: the solver's own answer failed its checks (" + String.join(", ", f.failed()) + ")";
         }
-        return Diagnostics.describe(reason);
+        return ErrorLine.describe(reason);
     }
 }

@@ -5,7 +5,7 @@ import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
 import dev.rootform.export.Report;
-import dev.rootform.export.TextRenderer;
+import dev.rootform.export.document.TextRenderer;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;

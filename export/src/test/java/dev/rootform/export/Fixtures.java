@@ -2,7 +2,7 @@ package dev.rootform.export;
 
 import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.PointValue;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Condition;
@@ -18,8 +18,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
-/** Problems solved by the exact solver, and reports around them, for the renderer tests. */
-final class Fixtures {
+/** Problems solved by the exact solver, and reports around them, for the tests of every export package. */
+public final class Fixtures {
     /** The roots of λ^3 - λ - 1, real one first (values to 16 digits). */
     private static final String[][] CUBIC = {
         {"1.324717957244746", "0"}, {"-0.6623589786223730", "0.5622795120623012"}, {"-0.6623589786223730", "-0.5622795120623012"},
@@ -28,38 +28,38 @@ final class Fixtures {
     private Fixtures() {
     }
 
-    static Solution difference(List<Condition> conditions, long... a) {
+    public static Solution difference(List<Condition> conditions, long... a) {
         return solve(Domain.DIFFERENCE, "x", "n", conditions, a);
     }
 
-    static Solution differential(List<Condition> conditions, long... a) {
+    public static Solution differential(List<Condition> conditions, long... a) {
         return solve(Domain.DIFFERENTIAL, "y", "t", conditions, a);
     }
 
     /** x[at] = value, or y(at) = value. */
-    static Condition at(long at, long value) {
+    public static Condition at(long at, long value) {
         return derivativeAt(0, Rational.of(at), value);
     }
 
-    static Condition derivativeAt(int derivative, Rational at, long value) {
+    public static Condition derivativeAt(int derivative, Rational at, long value) {
         return new Condition(derivative, at, Rational.of(value));
     }
 
-    static Solution fibonacci() {
+    public static Solution fibonacci() {
         return difference(List.of(at(0, 0), at(1, 1)), -1, -1, 1);
     }
 
     /** y'' + 2y' + 5y = 0, y(0) = 1, y'(0) = 0. */
-    static Solution dampedOscillator() {
+    public static Solution dampedOscillator() {
         return differential(List.of(at(0, 1), derivativeAt(1, Rational.ZERO, 0)), 5, 2, 1);
     }
 
     /** A report with 10 digits, no numeric checks and no warnings. */
-    static Report report(Solution s, List<PointValue> values) {
+    public static Report report(Solution s, List<PointValue> values) {
         return report(s, values, List.of(), List.of());
     }
 
-    static Report report(Solution s, List<PointValue> values, List<Check> numericChecks, List<String> warnings) {
+    public static Report report(Solution s, List<PointValue> values, List<Check> numericChecks, List<String> warnings) {
         List<RootApproximation> roots = new ArrayList<>();
         for (ExactRoot r : s.roots()) {
             roots.add(approximate(r));
@@ -67,7 +67,7 @@ final class Fixtures {
         return new Report(s, new Analysis(roots, values, numericChecks, java.util.Map.of(), List.of(), Optional.empty(), warnings), 10);
     }
 
-    static PointValue value(long at, long exact) {
+    public static PointValue value(long at, long exact) {
         return new PointValue(Rational.of(at), BigDecimal.valueOf(exact), Optional.of(Rational.of(exact)));
     }
 

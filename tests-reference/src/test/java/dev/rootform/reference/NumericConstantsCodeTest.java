@@ -4,8 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.rootform.export.JavaRenderer;
 import dev.rootform.export.Report;
+import dev.rootform.export.code.JavaRenderer;
 import java.lang.reflect.Method;
 import java.net.URLClassLoader;
 import java.nio.file.Files;
@@ -41,7 +41,7 @@ class NumericConstantsCodeTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("cases")
     void generatedJavaMatchesTheKnownSolution(String input, DoubleUnaryOperator known) throws Exception {
-        Report report = Answers.report(input, 30, List.of());
+        Report report = Answers.codeReport(input, 30);
         String source = JavaRenderer.render(report, "gen", "Numeric");
         assertTrue(source.contains("Constants fixed numerically"), source);
         Path gen = Files.createDirectories(dir.resolve("gen"));

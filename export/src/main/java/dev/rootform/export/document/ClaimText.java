@@ -1,6 +1,6 @@
 package dev.rootform.export.document;
 
-import dev.rootform.export.Formulas;
+import dev.rootform.export.notation.Formulas;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
 import java.util.ArrayList;

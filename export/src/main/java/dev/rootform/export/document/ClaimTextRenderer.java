@@ -1,6 +1,6 @@
 package dev.rootform.export.document;
 
-import dev.rootform.export.Formulas;
+import dev.rootform.export.notation.Formulas;
 import dev.rootform.symbolic.claim.ConditionFinding;
 import dev.rootform.symbolic.claim.Decision;
 import dev.rootform.symbolic.claim.EquationFinding;

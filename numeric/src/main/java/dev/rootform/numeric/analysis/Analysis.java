@@ -1,6 +1,7 @@
 package dev.rootform.numeric.analysis;
 
 import dev.rootform.numeric.diagnostics.Diagnostics;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.solve.Check;
 import java.math.BigDecimal;
 import java.util.List;

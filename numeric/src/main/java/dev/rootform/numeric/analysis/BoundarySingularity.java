@@ -10,7 +10,8 @@ import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
 /**
- * Explains a boundary-value system that is singular at the working precision, as one line: either
+ * Explains a boundary-value system that is singular at the working precision, as a
+ * {@link ConditionsException} with a one-line message: either
  * the conditions contradict each other (a zero row with a nonzero right side), or they leave a
  * solution free, given by the kernel vector of the reduced matrix; when its entries (scaled so
  * the largest is 1) are small rationals to the working precision, that free solution is returned

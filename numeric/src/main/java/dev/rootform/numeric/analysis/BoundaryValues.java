@@ -1,15 +1,14 @@
 package dev.rootform.numeric.analysis;
 
-import dev.rootform.numeric.check.ForcingFunction;
-import dev.rootform.numeric.check.OdeReference;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
-import dev.rootform.symbolic.parse.InputException;
 import dev.rootform.symbolic.solve.Check;
+import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -58,21 +57,13 @@ final class BoundaryValues {
     }
 
     /**
-     * @throws InputException if the system is singular at the working precision
+     * @throws ConditionsException if the system is singular at the working precision
      * @throws IllegalStateException if the constants do not settle within the precision budget
      */
     static BoundaryValues solve(Solution solution, int digits, RootCache cache) {
-        int working = digits + Analyzer.GUARD_DIGITS;
-        while (working <= Analyzer.MAX_WORKING_DIGITS) {
-            BoundaryValues low = at(solution, working, cache);
-            BoundaryValues high = at(solution, working + Analyzer.GUARD_DIGITS, cache);
-            if (agree(low.constants, high.constants, digits + 2)) {
-                return high;
-            }
-            working *= 2;
-        }
-        throw new IllegalStateException("the boundary-value constants did not settle within "
-                + Analyzer.MAX_WORKING_DIGITS + " digits");
+        return WorkingPrecision.settle(digits, working -> at(solution, working, cache),
+                (low, high, working) -> agree(low.constants, high.constants, digits + 2),
+                (working, high) -> working * 2, "the boundary-value constants");
     }
 
     /**
@@ -90,6 +81,7 @@ final class BoundaryValues {
         LinearEquation eq = solution.problem().equation();
         Apfloat[][] a = new Apfloat[n][n + 1];
         for (int row = 0; row < n; row++) {
+            Deadline.checkCurrent();
             boolean condition = row < conditions.size();
             Condition c = condition ? conditions.get(row) : null;
             Apfloat t = condition ? point(c, working) : new Apfloat(COLLOCATION[row - conditions.size()], working);
@@ -179,6 +171,7 @@ final class BoundaryValues {
             swap(a, scales, p, rank);
             for (int r = 0; r < k; r++) {
                 if (r != rank) {
+                    Deadline.checkCurrent();
                     Apfloat f = a[r][c].divide(a[rank][c]);
                     for (int j = c; j <= k; j++) {
                         a[r][j] = a[r][j].subtract(f.multiply(a[rank][j]));
@@ -219,7 +212,7 @@ final class BoundaryValues {
     private static boolean agree(Map<String, Apfloat> x, Map<String, Apfloat> y, int digits) {
         for (Map.Entry<String, Apfloat> e : y.entrySet()) {
             Apfloat d = ApfloatMath.abs(x.get(e.getKey()).subtract(e.getValue()));
-            Apfloat unit = new Apfloat("1e-" + digits, digits + Analyzer.GUARD_DIGITS);
+            Apfloat unit = new Apfloat("1e-" + digits, digits + WorkingPrecision.GUARD_DIGITS);
             if (d.compareTo(ApfloatMath.abs(e.getValue()).add(unit).multiply(unit)) > 0) {
                 return false;
             }
@@ -281,9 +274,8 @@ final class BoundaryValues {
     }
 
     /**
-     * Integrates the equation with Dormand–Prince 8(5,3) from the first condition point, starting
-     * from this solution's derivatives there, and compares with the solution at the other
-     * condition points and at t0 + {@link Analyzer#CHECK_OFFSETS}.
+     * The integrator cross-check from the first condition point t0, starting from this solution's
+     * derivatives there, at the other condition points and at t0 + {@link IntegratorCheck#OFFSETS}.
      */
     Check integratorCheck() {
         List<Condition> conditions = solution.problem().conditions();
@@ -300,23 +292,12 @@ final class BoundaryValues {
                 points.add(point(c, precision));
             }
         }
-        for (double offset : Analyzer.CHECK_OFFSETS) {
+        for (double offset : IntegratorCheck.OFFSETS) {
             points.add(Decimals.toApfloat(t0, precision).add(new Apfloat(offset, precision)));
         }
         double[] at = points.stream().mapToDouble(Apfloat::doubleValue).toArray();
-        double[] reference = OdeReference.values(solution.problem().equation().coefficients(),
-                ForcingFunction.of(solution.problem().equation().forcing()), t0, initial, at);
-        double worst = 0;
-        double scale = 1;
-        for (int i = 0; i < at.length; i++) {
-            double closed = derivative(0, points.get(i)).doubleValue();
-            worst = Math.max(worst, Math.abs(reference[i] - closed));
-            scale = Math.max(scale, Math.abs(closed));
-        }
-        boolean passed = worst <= Analyzer.CHECK_TOLERANCE * scale;
-        return new Check("agrees with numerical integration", passed, String.format(
-                "Dormand-Prince 8(5,3) (Commons Math) from t = %s to the other condition points and t0 + %s: "
-                        + "largest difference %.2e (tolerance %.0e relative)", conditions.get(0).point(),
-                java.util.Arrays.toString(Analyzer.CHECK_OFFSETS), worst, Analyzer.CHECK_TOLERANCE));
+        double[] closed = points.stream().mapToDouble(p -> derivative(0, p).doubleValue()).toArray();
+        return IntegratorCheck.compare(solution.problem().equation(), t0, initial, at, closed, "from t = "
+                + conditions.get(0).point() + " to the other condition points and t0 + " + IntegratorCheck.offsets());
     }
 }

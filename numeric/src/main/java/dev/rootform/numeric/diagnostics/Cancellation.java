@@ -1,11 +1,11 @@
 package dev.rootform.numeric.diagnostics;
 
-import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
+import java.math.BigDecimal;
 import java.util.List;
 import java.util.Optional;
 
@@ -27,14 +27,14 @@ final class Cancellation {
     }
 
     /** A warning for the worst sample point, when it loses more than {@link #WARN_DIGITS} digits. */
-    static Optional<String> warning(ExactSolution s, List<RootEntry> roots, List<PointValue> samples) {
+    static Optional<String> warning(ExactSolution s, List<FactorRoot> roots, List<SampleValue> samples) {
         double worst = 0;
-        PointValue where = null;
-        for (PointValue p : samples) {
+        SampleValue where = null;
+        for (SampleValue p : samples) {
             if (p.value().signum() == 0) {
                 continue;
             }
-            double lost = largestTerm(s, roots, p.at()) - Approx.log10(p.value());
+            double lost = largestTerm(s, roots, p.at()) - log10(p.value());
             if (lost > worst) {
                 worst = lost;
                 where = p;
@@ -50,13 +50,13 @@ final class Cancellation {
     }
 
     /** log10 of the largest |term| at the point. */
-    private static double largestTerm(ExactSolution s, List<RootEntry> roots, Rational at) {
+    private static double largestTerm(ExactSolution s, List<FactorRoot> roots, Rational at) {
         boolean discrete = s.domain() == Domain.DIFFERENCE;
         double x = discrete ? at.doubleValue() : at.subtract(s.origin()).doubleValue();
         double logX = Math.log10(Math.abs(x));
         double largest = Double.NEGATIVE_INFINITY;
         for (Component c : s.components()) {
-            for (RootEntry r : roots) {
+            for (FactorRoot r : roots) {
                 if (!r.factor().equals(c.factor())) {
                     continue;
                 }
@@ -81,5 +81,12 @@ final class Cancellation {
             a = na;
         }
         return Math.log10(Math.hypot(a, b));
+    }
+
+    /** log10 |x| of a nonzero decimal of any size. */
+    private static double log10(BigDecimal x) {
+        BigDecimal a = x.abs();
+        int exponent = a.precision() - a.scale();
+        return exponent + Math.log10(a.movePointLeft(exponent).doubleValue());
     }
 }

@@ -15,14 +15,14 @@ final class CloseRoots {
     private CloseRoots() {
     }
 
-    static Optional<String> warning(List<RootEntry> roots) {
+    static Optional<String> warning(List<FactorRoot> roots) {
         int pairs = 0;
         double closest = Double.POSITIVE_INFINITY;
-        RootEntry first = null;
+        FactorRoot first = null;
         for (int i = 0; i < roots.size(); i++) {
             for (int j = i + 1; j < roots.size(); j++) {
-                RootEntry a = roots.get(i);
-                RootEntry b = roots.get(j);
+                FactorRoot a = roots.get(i);
+                FactorRoot b = roots.get(j);
                 double scale = Math.max(a.modulus(), b.modulus());
                 double distance = Math.hypot(a.re() - b.re(), a.im() - b.im()) / scale;
                 if (scale > 0 && distance < RELATIVE_DISTANCE) {
@@ -39,7 +39,7 @@ final class CloseRoots {
         }
         return Optional.of(String.format("nearly repeated roots: %d pair%s of distinct roots closer than %.0e relative "
                 + "(closest %.1e, near λ ≈ %s%s); the fitted constants are then large and cancel",
-                pairs, pairs == 1 ? "" : "s", RELATIVE_DISTANCE, closest, Approx.text(first.re()),
-                first.im() == 0 ? "" : (first.im() < 0 ? " - " : " + ") + Approx.text(Math.abs(first.im())) + "i"));
+                pairs, pairs == 1 ? "" : "s", RELATIVE_DISTANCE, closest, ShortDecimal.text(first.re()),
+                first.im() == 0 ? "" : (first.im() < 0 ? " - " : " + ") + ShortDecimal.text(Math.abs(first.im())) + "i"));
     }
 }

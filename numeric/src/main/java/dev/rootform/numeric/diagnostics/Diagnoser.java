@@ -1,7 +1,6 @@
 package dev.rootform.numeric.diagnostics;
 
-import dev.rootform.numeric.analysis.PointValue;
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
@@ -37,9 +36,9 @@ public final class Diagnoser {
      * @param roots numeric values of {@code solution.roots()}, in the same order
      * @param samples values of the fitted solution at sample points, for the cancellation estimate
      */
-    public Diagnostics diagnose(Solution solution, List<RootApproximation> roots, List<PointValue> samples) {
+    public Diagnostics diagnose(Solution solution, List<RootApproximation> roots, List<SampleValue> samples) {
         LinearEquation eq = solution.problem().equation();
-        List<RootEntry> entries = RootEntry.of(solution.factors(), roots);
+        List<FactorRoot> entries = FactorRoot.of(solution.factors(), roots);
         Stability stability = new StabilityJudge(eq.domain(), digits).judge(entries);
         DominantMode dominant = new DominantMode(eq.domain(), solution.closedForm().variable(), digits);
         Growth growth = dominant.of(entries, solution.exact().map(Diagnoser::effectivePowers)

@@ -31,10 +31,10 @@ final class DominantMode {
     }
 
     /** @param powers effective multiplicity per factor; factors absent or 0 contribute nothing */
-    Growth of(List<RootEntry> roots, Map<RationalPolynomial, Integer> powers) {
-        RootEntry best = null;
+    Growth of(List<FactorRoot> roots, Map<RationalPolynomial, Integer> powers) {
+        FactorRoot best = null;
         int bestPower = 0;
-        for (RootEntry r : roots) {
+        for (FactorRoot r : roots) {
             int m = powers.getOrDefault(r.factor().polynomial(), 0);
             if (m == 0) {
                 continue;
@@ -51,7 +51,7 @@ final class DominantMode {
         return new Growth(Optional.of(best.approximation()), bestPower - 1, rate, theta(bestPower - 1, rate));
     }
 
-    private double rate(RootEntry r) {
+    private double rate(FactorRoot r) {
         return domain == Domain.DIFFERENTIAL ? r.re() : r.modulus();
     }
 
@@ -67,10 +67,10 @@ final class DominantMode {
         String polynomial = power == 0 ? "" : power == 1 ? variable : variable + "^" + power;
         String exponential;
         if (domain == Domain.DIFFERENTIAL) {
-            String sigma = Approx.text(rate);
+            String sigma = ShortDecimal.text(rate);
             exponential = Math.abs(rate) <= tolerance ? "" : "e^(" + (sigma.equals("1") ? "" : sigma.equals("-1") ? "-" : sigma) + variable + ")";
         } else {
-            exponential = Math.abs(rate - 1) <= tolerance ? "" : Approx.text(rate) + "^" + variable;
+            exponential = Math.abs(rate - 1) <= tolerance ? "" : ShortDecimal.text(rate) + "^" + variable;
         }
         String body = polynomial.isEmpty() ? exponential : exponential.isEmpty() ? polynomial : polynomial + "·" + exponential;
         return "Θ(" + (body.isEmpty() ? "1" : body) + ")";

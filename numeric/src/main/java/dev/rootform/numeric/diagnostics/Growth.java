@@ -1,6 +1,6 @@
 package dev.rootform.numeric.diagnostics;
 
-import dev.rootform.numeric.analysis.RootApproximation;
+import dev.rootform.numeric.roots.RootApproximation;
 import java.util.Objects;
 import java.util.Optional;
 

@@ -22,9 +22,9 @@ final class ModeFacts {
     }
 
     /** One mode per real root and per conjugate pair, in root order. */
-    static List<Mode> of(Domain domain, List<RootEntry> roots) {
+    static List<Mode> of(Domain domain, List<FactorRoot> roots) {
         List<Mode> modes = new ArrayList<>();
-        for (RootEntry r : roots) {
+        for (FactorRoot r : roots) {
             if (r.im() < 0 || (domain == Domain.DIFFERENCE && r.modulus() == 0)) {
                 continue;
             }
@@ -34,7 +34,7 @@ final class ModeFacts {
         return modes;
     }
 
-    private static List<Quantity> continuous(RootEntry r) {
+    private static List<Quantity> continuous(FactorRoot r) {
         List<Quantity> q = new ArrayList<>();
         double sigma = r.re();
         double omega = Math.abs(r.im());
@@ -53,7 +53,7 @@ final class ModeFacts {
         return q;
     }
 
-    private static List<Quantity> discrete(RootEntry r) {
+    private static List<Quantity> discrete(FactorRoot r) {
         List<Quantity> q = new ArrayList<>();
         double rho = r.modulus();
         double angle = Math.abs(Math.atan2(r.im(), r.re()));

@@ -24,7 +24,7 @@ final class StabilityJudge {
         this.digits = digits;
     }
 
-    Stability judge(List<RootEntry> roots) {
+    Stability judge(List<FactorRoot> roots) {
         BoundarySide boundary = new BoundarySide(domain);
         List<Judged> judged = roots.stream().map(r -> new Judged(r, boundary.of(r.approximation().root(),
                 new Enclosure(r.approximation().re(), r.approximation().im(), r.approximation().radius()), digits))).toList();
@@ -52,7 +52,7 @@ final class StabilityJudge {
                 : "every root has " + axis + " < " + limit + "; this one is the slowest");
     }
 
-    private record Judged(RootEntry root, Side side) {
+    private record Judged(FactorRoot root, Side side) {
     }
 
     /** The matching root with the largest Re λ or |λ|, preferring Im λ &ge; 0 within a pair. */

@@ -1,7 +1,7 @@
 package dev.rootform.symbolic.claim;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;

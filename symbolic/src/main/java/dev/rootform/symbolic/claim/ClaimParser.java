@@ -5,7 +5,7 @@ import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.claim.ClaimToken.Kind;
 import dev.rootform.symbolic.claim.Expr.Binary.Op;
 import dev.rootform.symbolic.model.Domain;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;

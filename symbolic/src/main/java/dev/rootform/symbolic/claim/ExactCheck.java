@@ -9,6 +9,7 @@ import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -190,6 +191,7 @@ final class ExactCheck {
         int order = r.order();
         Rational at = r.blocks().keySet().iterator().next().origin();
         for (int i = 0; i < order; i++) {
+            Deadline.checkCurrent();
             ExactValue v = domain == Domain.DIFFERENCE ? r.valueAt(n0 + i) : r.derivativeAt(i, at);
             if (!v.isZero()) {
                 return false;
@@ -209,6 +211,7 @@ final class ExactCheck {
         int k = eq.order();
         ExpSum g = evaluator.evaluate(Expressions.forcing(eq));
         for (long m = firstIndex(); m < end; m++) {
+            Deadline.checkCurrent();
             ExactValue sum = g.valueAt(m - eq.shift()).negate();
             boolean complete = true;
             for (int j = 0; j <= k && complete; j++) {
@@ -290,6 +293,7 @@ final class ExactCheck {
         long from = Math.max(c.from(), x.validFrom());
         long last = Math.max(from + c.formula().order() + solutionOrder() - 1, c.lastValue());
         for (long n = first; n <= last; n++) {
+            Deadline.checkCurrent();
             ExactValue claimed = c.at(n);
             if (claimed != null && !claimed.subtract(solutionValue(n)).isZero()) {
                 return Optional.of(n);

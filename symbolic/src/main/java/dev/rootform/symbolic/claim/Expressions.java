@@ -70,7 +70,7 @@ public final class Expressions {
                     times(coefficient(o.sine()), new Expr.Call(Expr.Call.Function.SIN, angle, NOWHERE)));
             return times(times(wave, power(u, o.power())), growth(surd(o.growth()), u, sequence));
         }
-        Term.RootSum r = (Term.RootSum) t;
+        Term.ConjugateSum r = (Term.ConjugateSum) t;
         Expr lambda = new Expr.Constant(Expr.Constant.Kind.LAMBDA, NOWHERE);
         Expr c = number(Rational.ZERO);
         List<Coefficient> cs = r.coefficients();

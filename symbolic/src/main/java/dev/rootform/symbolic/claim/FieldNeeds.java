@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.claim;
 
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
@@ -40,6 +41,7 @@ final class FieldNeeds {
      */
     <T> T run(java.util.function.Function<ExactRing, T> job) {
         for (int attempt = 0; attempt < MAX_GROWTH; attempt++) {
+            Deadline.checkCurrent();
             try {
                 return job.apply(ring());
             } catch (FieldTooSmall missing) {

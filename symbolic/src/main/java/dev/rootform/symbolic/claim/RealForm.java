@@ -8,6 +8,7 @@ import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
@@ -120,6 +121,7 @@ final class RealForm {
         int bound = 2 * dimension * dimension + 2;
         Algebraic power = u;
         for (int n = 1; n <= bound; n++) {
+            Deadline.checkCurrent();
             if (power.equals(ring.one())) {
                 return n;
             }
@@ -170,7 +172,7 @@ final class RealForm {
                 }
                 cs.add(new Coefficient.Exact(c.get()));
             }
-            Term.RootSum t = new Term.RootSum(f, cs, i);
+            Term.ConjugateSum t = new Term.ConjugateSum(f, cs, i);
             if (!t.vanishes()) {
                 terms.add(t);
             }

@@ -2,7 +2,7 @@ package dev.rootform.symbolic.claim;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 
 /** The rational polynomial in λ written under a root sum, such as {@code λ^3 - λ - 1}. */
 final class RootPolynomial {

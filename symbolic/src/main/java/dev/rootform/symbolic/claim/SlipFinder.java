@@ -5,6 +5,7 @@ import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.HashMap;
@@ -190,6 +191,7 @@ final class SlipFinder {
 
     /** Adds the slip when the corrected candidate holds and the kind is not reported yet. */
     private void report(Slip.Kind kind, Candidate corrected, Supplier<String> explanation) {
+        Deadline.checkCurrent();
         if (found.contains(kind) || !check.holds(corrected)) {
             return;
         }

@@ -10,11 +10,11 @@ import java.util.Objects;
  *
  * @since 0.1
  */
-public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.RootSum {
+public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.ConjugateSum {
     /** The power i of the factor v^i. */
     int power();
 
-    /** The coefficients of the term, in order (cos before sin; α^0, α^1, … for a root sum). */
+    /** The coefficients of the term, in order (cos before sin; α^0, α^1, … for a conjugate sum). */
     List<Coefficient> coefficients();
 
     /** The same term with other coefficients, in the order of {@link #coefficients()}. */
@@ -68,18 +68,20 @@ public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.Ro
     }
 
     /**
-     * Σ over the roots α of the irreducible {@code factor} of c(α)·v^power·e^{αv} (or α^v), with
-     * c(α) = Σ_j coefficients[j]·α^j; real because the sum runs over all conjugates.
+     * A conjugate sum: Σ over the roots α of the irreducible {@code factor} (all conjugates of one
+     * algebraic number) of c(α)·v^power·e^{αv} (or α^v), with c(α) = Σ_j coefficients[j]·α^j; real
+     * because the sum runs over all conjugates. Used for factors of degree &ge; 3, and for any factor of
+     * degree &ge; 2 whose coefficients carry a second square root √r from the forcing.
      */
-    record RootSum(RationalPolynomial factor, List<Coefficient> coefficients, int power) implements Term {
-        public RootSum {
+    record ConjugateSum(RationalPolynomial factor, List<Coefficient> coefficients, int power) implements Term {
+        public ConjugateSum {
             Objects.requireNonNull(factor, "factor");
             coefficients = List.copyOf(coefficients);
         }
 
         @Override
         public Term withCoefficients(List<Coefficient> replacement) {
-            return new RootSum(factor, replacement, power);
+            return new ConjugateSum(factor, replacement, power);
         }
     }
 }

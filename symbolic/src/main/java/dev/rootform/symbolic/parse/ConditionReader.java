@@ -3,6 +3,7 @@ package dev.rootform.symbolic.parse;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;

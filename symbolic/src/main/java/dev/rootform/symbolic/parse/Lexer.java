@@ -1,6 +1,7 @@
 package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.model.InputException;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;

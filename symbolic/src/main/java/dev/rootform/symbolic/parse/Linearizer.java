@@ -3,6 +3,7 @@ package dev.rootform.symbolic.parse;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm.Oscillation;
+import dev.rootform.symbolic.model.InputException;
 import java.util.Optional;
 
 /**

@@ -2,6 +2,7 @@ package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.LinearEquation;
 import java.util.ArrayList;
 import java.util.List;

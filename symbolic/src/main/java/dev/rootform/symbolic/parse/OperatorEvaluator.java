@@ -3,6 +3,7 @@ package dev.rootform.symbolic.parse;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 
 /**
  * Reads an operator expression such as {@code (D+1)^2 (D^2+4)} or {@code E^2 - E - 1} as an exact

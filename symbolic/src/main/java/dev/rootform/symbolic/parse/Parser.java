@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.parse;
 
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.parse.Node.Binary.Op;
 import dev.rootform.symbolic.parse.Token.Kind;
 import java.util.List;

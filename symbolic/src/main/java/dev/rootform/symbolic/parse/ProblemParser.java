@@ -1,6 +1,7 @@
 package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import java.util.ArrayList;

@@ -1,6 +1,7 @@
 package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;

@@ -1,7 +1,7 @@
 package dev.rootform.symbolic.solve;
 
 import dev.rootform.symbolic.closedform.ClosedForm;
-import dev.rootform.symbolic.parse.InputException;
+import dev.rootform.symbolic.model.InputException;
 import java.util.Optional;
 
 /**

@@ -2,8 +2,8 @@ package dev.rootform.symbolic.solve;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.ForcingTerm;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.LinearEquation;
-import dev.rootform.symbolic.parse.InputException;
 
 /**
  * Exact values of the right-hand side g of the normalised equation Σ a_j L^j y = g:

@@ -11,8 +11,8 @@ import java.util.Objects;
  *
  * @since 0.1
  */
-public record InitialState(Rational origin, List<Rational> values) {
-    public InitialState {
+record InitialState(Rational origin, List<Rational> values) {
+    InitialState {
         Objects.requireNonNull(origin, "origin");
         values = List.copyOf(values);
     }

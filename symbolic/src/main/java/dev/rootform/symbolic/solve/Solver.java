@@ -11,6 +11,7 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
@@ -32,7 +33,7 @@ public final class Solver {
      * Solves a problem exactly: the fitted solution when conditions are given, else the general
      * solution with free constants C1..Ck (plus a particular solution for a forced equation).
      *
-     * @throws dev.rootform.symbolic.parse.InputException if the forcing has no exact annihilator or
+     * @throws dev.rootform.symbolic.model.InputException if the forcing has no exact annihilator or
      *     rational values, or the conditions are wrong in number, inconsistent or do not determine
      *     the solution
      */
@@ -52,16 +53,16 @@ public final class Solver {
         }
         ExactSolution exact = fitted(eq, mu, problem.conditions(), ForcingPart.RATIONAL);
         List<Check> checks = new ArrayList<>(ExactVerifier.verify(exact, problem.conditions()));
-        ClosedForm general = Presenter.general(eq, factors);
+        ClosedForm general = ClosedFormBuilder.general(eq, factors);
         if (radicand == 1) {
-            return new Solution(problem, chi, factors, Presenter.roots(factors), Presenter.fitted(exact, factors),
+            return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), ClosedFormBuilder.fitted(exact, factors),
                     general, Optional.of(exact), Optional.empty(), Optional.empty(), false, checks);
         }
         List<Condition> zero = zeroed(problem.conditions());
         RadicalSolution both = new RadicalSolution(radicand, exact, fitted(eq, mu, zero, ForcingPart.RADICAL));
         checks.addAll(radicalChecks(both.radical(), zero, radicand));
-        return new Solution(problem, chi, factors, Presenter.roots(factors),
-                Presenter.fitted(exact, Optional.of(both), factors), general, Optional.empty(), Optional.empty(),
+        return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors),
+                ClosedFormBuilder.fitted(exact, Optional.of(both), factors), general, Optional.empty(), Optional.empty(),
                 Optional.of(both), false, checks);
     }
 
@@ -79,8 +80,8 @@ public final class Solver {
         if (!problem.conditions().isEmpty()) {
             ConditionFitter.validate(eq, problem.conditions());
         }
-        ClosedForm general = Presenter.general(eq, factors);
-        return new Solution(problem, chi, factors, Presenter.roots(factors), TrialForm.of(eq, general, factors), general,
+        ClosedForm general = ClosedFormBuilder.general(eq, factors);
+        return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), TrialForm.of(eq, general, factors), general,
                 Optional.empty(), Optional.empty(), Optional.empty(), true, List.of(basisCheck(eq, factors)));
     }
 
@@ -122,10 +123,10 @@ public final class Solver {
         if (!problem.conditions().isEmpty()) {
             ConditionFitter.validate(eq, problem.conditions());
         }
-        ClosedForm general = Presenter.general(eq, factors);
+        ClosedForm general = ClosedFormBuilder.general(eq, factors);
         List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
         if (eq.isHomogeneous()) {
-            return new Solution(problem, chi, factors, Presenter.roots(factors), general, general, Optional.empty(),
+            return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), general, general, Optional.empty(),
                     Optional.empty(), Optional.empty(), false, checks);
         }
         List<Condition> zero = zeroConditions(eq);
@@ -137,8 +138,8 @@ public final class Solver {
             checks.addAll(radicalChecks(radical, List.of(), mu.radicand()));
             both = Optional.of(new RadicalSolution(mu.radicand(), particular, radical));
         }
-        return new Solution(problem, chi, factors, Presenter.roots(factors),
-                Presenter.withParticular(general, Presenter.fitted(particular, both, factors)), general,
+        return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors),
+                ClosedFormBuilder.withParticular(general, ClosedFormBuilder.fitted(particular, both, factors)), general,
                 Optional.empty(), Optional.of(particular), Optional.empty(), false, checks);
     }
 
@@ -149,7 +150,7 @@ public final class Solver {
         } catch (UnderdeterminedConditions e) {
             ExactSolution free = ExactSolver.solve(eq.homogeneous(), ForcingPart.RATIONAL, mu.polynomial(), mu.factors(),
                     e.freeState());
-            throw ConditionsException.underdetermined(e.getMessage(), Presenter.fitted(free, mu.characteristic()));
+            throw ConditionsException.underdetermined(e.getMessage(), ClosedFormBuilder.fitted(free, mu.characteristic()));
         }
     }
 
@@ -209,7 +210,7 @@ public final class Solver {
     private static ExactSolution withoutTransient(ExactSolution s, List<Factor> characteristic) {
         List<Component> result = new ArrayList<>();
         for (Component c : s.components()) {
-            int homogeneous = Presenter.multiplicity(characteristic, c.factor().polynomial());
+            int homogeneous = ClosedFormBuilder.multiplicity(characteristic, c.factor().polynomial());
             List<RationalPolynomial> kept = new ArrayList<>(c.coefficients());
             for (int i = 0; i < Math.min(homogeneous, kept.size()); i++) {
                 kept.set(i, RationalPolynomial.ZERO);
@@ -228,6 +229,7 @@ public final class Solver {
             NumberField k = new NumberField(f.polynomial());
             for (int i = 0; i < f.multiplicity(); i++) {
                 for (int j = 0; j < f.degree(); j++) {
+                    Deadline.checkCurrent();
                     List<RationalPolynomial> c = new ArrayList<>();
                     for (int l = 0; l < f.multiplicity(); l++) {
                         c.add(l == i ? k.pow(k.generator(), j) : RationalPolynomial.ZERO);

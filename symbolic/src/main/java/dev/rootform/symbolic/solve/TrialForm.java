@@ -73,6 +73,6 @@ final class TrialForm {
         Rational w = t.oscillation() == ForcingTerm.Oscillation.NONE ? Rational.ZERO : t.frequency();
         RationalPolynomial f = w.isZero() ? RationalPolynomial.of(a.negate(), Rational.ONE)
                 : RationalPolynomial.of(a.multiply(a).add(w.multiply(w)), a.multiply(-2), Rational.ONE);
-        return Presenter.multiplicity(characteristic, f);
+        return ClosedFormBuilder.multiplicity(characteristic, f);
     }
 }

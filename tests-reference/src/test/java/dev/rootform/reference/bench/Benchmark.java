@@ -36,6 +36,7 @@ public final class Benchmark {
         System.out.printf("rootform benchmark — Java %s, %d CPUs%n", System.getProperty("java.version"),
                 Runtime.getRuntime().availableProcessors());
         warm();
+        RecoverBenchmark.run();
         cold(Path.of(args.length > 0 ? args[0] : "../rootform"));
         scaling();
         CheckBenchmark.run();

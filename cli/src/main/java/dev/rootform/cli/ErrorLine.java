@@ -1,0 +1,54 @@
+package dev.rootform.cli;
+
+import dev.rootform.api.Result;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.symbolic.model.InputException;
+
+/** Formats problems for stderr: one line naming the problem, then the input with a caret under the place. */
+final class ErrorLine {
+    private ErrorLine() {
+    }
+
+    /** The error line of a result that carries no answer. */
+    static String describe(Result result) {
+        if (result instanceof Result.Refused r) {
+            return describe(r.message(), r.source(), r.position());
+        }
+        if (result instanceof Result.Contradictory c) {
+            return "rootform: " + c.explanation();
+        }
+        if (result instanceof Result.Underdetermined u) {
+            return "rootform: " + u.explanation() + u.freeSolution()
+                    .map(f -> "; adding any multiple of " + Formulas.plain(f) + " keeps every condition").orElse("");
+        }
+        if (result instanceof Result.OutOfTime t) {
+            return "rootform: gave up after " + t.limit().toSeconds() + " s (raise --time-limit to allow more)";
+        }
+        throw new AssertionError(result);
+    }
+
+    static String describe(InputException e) {
+        return describe(e.getMessage(), e.source(), e.position());
+    }
+
+    /**
+     * The message, and when it has a place, the input line with a caret under it: a source of
+     * several lines (a file) is cut to the line of the place, which is then named.
+     */
+    private static String describe(String message, String source, int position) {
+        StringBuilder sb = new StringBuilder("rootform: ").append(message);
+        if (position >= 0 && source != null && !source.isEmpty()) {
+            int at = Math.min(position, source.length());
+            int from = source.lastIndexOf('\n', at - 1) + 1;
+            int to = source.indexOf('\n', at);
+            String line = source.substring(from, to < 0 ? source.length() : to);
+            int column = at - from;
+            boolean several = from > 0 || to >= 0;
+            sb.append(several ? " (at line " + (source.substring(0, from).chars().filter(c -> c == '\n').count() + 1) + ", column "
+                    : " (at column ").append(column + 1).append(')').append(System.lineSeparator())
+                    .append("  ").append(line).append(System.lineSeparator())
+                    .append("  ").append(" ".repeat(column)).append('^');
+        }
+        return sb.toString();
+    }
+}

@@ -1,0 +1,169 @@
+package dev.rootform.cli;
+
+import dev.rootform.api.Exporters;
+import dev.rootform.api.Options;
+import dev.rootform.api.Result;
+import dev.rootform.export.CodeNames;
+import dev.rootform.export.Exporter;
+import dev.rootform.export.Rendering;
+import dev.rootform.export.Report;
+import dev.rootform.export.code.Identifiers;
+import dev.rootform.symbolic.model.InputException;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.Duration;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.UnaryOperator;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+
+/**
+ * The options of every command that prints a solve answer: digits, values, format, output file,
+ * names for generated code and the time limit; checked before any work, so a bad option fails fast.
+ */
+final class OutputOptions {
+    @Option(names = "--digits", paramLabel = "N", description = "Significant digits of numeric output (default ${DEFAULT-VALUE}).")
+    int digits = Options.DEFAULT_DIGITS;
+
+    @Option(names = "--values-at", paramLabel = "LIST", description = "Comma-separated points at which to print the solution's value, e.g. 0,10,1e3.")
+    String valuesAt;
+
+    @Option(names = "--numeric", description = "Show the constants and roots as decimals to --digits instead of exact forms.")
+    boolean numeric;
+
+    @Option(names = "--format", paramLabel = "FORMAT", completionCandidates = FormatNames.class,
+            description = "Output format: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
+    String format = "text";
+
+    @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write the answer to FILE instead of standard output.")
+    Path output;
+
+    @Option(names = "--package", paramLabel = "NAME", description = "Java package of the generated class (default: none).")
+    String packageName;
+
+    @Option(names = "--class", paramLabel = "NAME", description = "Name of the generated Java class (default ${DEFAULT-VALUE}).")
+    String className = CodeNames.DEFAULT_CLASS;
+
+    @Option(names = "--function", paramLabel = "NAME", description = "Name of the generated C function (default ${DEFAULT-VALUE}).")
+    String function = CodeNames.DEFAULT_FUNCTION;
+
+    @Option(names = "--header", paramLabel = "FILE", description = "Write the C header to FILE (the source, on stdout or -o, includes it).")
+    Path header;
+
+    @Option(names = "--time-limit", paramLabel = "SECONDS",
+            description = "Give up after this many seconds (default ${DEFAULT-VALUE}); exit code 1.")
+    int timeLimit = 300;
+
+    /**
+     * Checks the format and the code names before any work.
+     *
+     * @throws InputException for an unknown format or a bad name
+     */
+    void check() {
+        exporter();
+        codeNames();
+    }
+
+    /**
+     * Prints the answer of {@code result}, passed through {@code decorate}, to -o or standard output,
+     * or the one-line error of a result without one to standard error; returns the exit code.
+     */
+    int print(Result result, UnaryOperator<Rendering> decorate, CommandSpec spec) throws IOException {
+        Optional<Report> answer = result.answer();
+        if (answer.isEmpty()) {
+            PrintWriter err = spec.commandLine().getErr();
+            err.println(ErrorLine.describe(result));
+            err.flush();
+            return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+        }
+        Exporter exporter = exporter();
+        refuse(exporter.refusal(answer.get()));
+        write(decorate.apply(exporter.render(answer.get(), codeNames())), spec.commandLine().getOut());
+        return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
+    }
+
+    /** @throws InputException for an unknown format */
+    private Exporter exporter() {
+        return Exporters.byName(format).orElseThrow(() -> new InputException(
+                "--format " + format + " is not one of " + String.join(", ", Exporters.names()), "", -1));
+    }
+
+    /**
+     * The solve options, with {@code variable} for a differential equation (null for the default).
+     *
+     * @throws InputException for digits or a time limit out of range
+     */
+    Options options(String variable) {
+        if (digits < 1 || digits > Options.MAX_DIGITS) {
+            throw new InputException("--digits " + digits + " is out of range 1.." + Options.MAX_DIGITS, "", -1);
+        }
+        if (timeLimit < 1) {
+            throw new InputException("--time-limit " + timeLimit + " must be at least 1 second", "", -1);
+        }
+        return Options.builder().digits(digits).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
+                .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable)
+                .code(format.equals("java") || format.equals("c")).build();
+    }
+
+    /** @throws InputException for a bad class, package, function or header name */
+    private CodeNames codeNames() {
+        refuse(Identifiers.javaClassRefusal(className));
+        if (packageName != null) {
+            refuse(Identifiers.javaPackageRefusal(packageName));
+        }
+        refuse(Identifiers.cFunctionRefusal("--function", function));
+        if (header != null) {
+            if (!format.equals("c")) {
+                throw new InputException("--header is for --format c", "", -1);
+            }
+            refuse(Identifiers.cHeaderRefusal(header.getFileName().toString()));
+        }
+        return new CodeNames(Optional.ofNullable(packageName), className, function,
+                Optional.ofNullable(header).map(h -> h.getFileName().toString()));
+    }
+
+    /** @throws InputException with the refusal's message, when there is one */
+    private static void refuse(Optional<String> refusal) {
+        refusal.ifPresent(message -> {
+            throw new InputException(message, "", -1);
+        });
+    }
+
+    /** Writes the rendering: its text to -o or {@code out}, a C header to --header. */
+    private void write(Rendering rendering, PrintWriter out) throws IOException {
+        if (header != null) {
+            write(header, rendering.header().orElseThrow(), out);
+        }
+        write(output, rendering.text(), out);
+    }
+
+    private static void write(Path output, String answer, PrintWriter out) throws IOException {
+        String text = answer.endsWith("\n") ? answer : answer + System.lineSeparator();
+        if (output == null) {
+            out.print(text);
+            out.flush();
+            return;
+        }
+        Path target = output.toAbsolutePath();
+        Path temp = Files.createTempFile(target.getParent(), ".rootform-", ".tmp");
+        try {
+            Files.writeString(temp, text, StandardCharsets.UTF_8);
+            Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+
+    /** The format names, for the help text. */
+    static final class FormatNames implements Iterable<String> {
+        @Override
+        public java.util.Iterator<String> iterator() {
+            return Exporters.names().iterator();
+        }
+    }
+}

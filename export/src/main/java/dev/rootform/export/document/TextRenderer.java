@@ -1,0 +1,172 @@
+package dev.rootform.export.document;
+
+import dev.rootform.export.Report;
+import dev.rootform.export.notation.BasisCoefficient;
+import dev.rootform.export.notation.EquationText;
+import dev.rootform.export.notation.Formulas;
+import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.RootText;
+import dev.rootform.numeric.analysis.PointValue;
+import dev.rootform.numeric.analysis.SteadyState;
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.ExactRoot;
+import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.solve.Check;
+import dev.rootform.symbolic.solve.Solution;
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+
+/**
+ * The answer for a person on a terminal: equation, conditions, characteristic polynomial, roots,
+ * solution with its range of validity, verification, values and warnings, each under an aligned
+ * label.
+ *
+ * @since 0.1
+ */
+public final class TextRenderer {
+    /** Exact values longer than this are shown as rounded decimals. */
+    private static final int EXACT_LIMIT = 60;
+
+    private TextRenderer() {
+    }
+
+    /** The whole answer, one line per fact, ending in a newline. */
+    public static String render(Report r) {
+        Solution s = r.solution();
+        LinearEquation eq = s.problem().equation();
+        Layout out = new Layout()
+                .section("equation", List.of(EquationText.equation(eq), EquationText.kind(eq)))
+                .line("conditions", conditions(eq, s.problem().conditions()))
+                .line("characteristic", s.characteristic().toString(EquationText.LAMBDA))
+                .line("factored", EquationText.factorisation(s.characteristic(), s.factors()))
+                .section("roots", roots(s.roots(), r))
+                .line("basis", BasisCoefficient.of(s.general()).stream().map(BasisCoefficient::basis)
+                        .collect(Collectors.joining(", ")))
+                .section("solution", r.numeric() ? numericSolution(s.closedForm(), r) : solution(s.closedForm(), r))
+                .section("verification", verification(r));
+        r.diagnostics().ifPresent(d -> out.section("diagnostics", DiagnosticsText.lines(d, r)));
+        if (!r.values().isEmpty()) {
+            out.section("values", r.values().stream().map(v -> value(s.closedForm(), v, r.digits())).toList());
+        }
+        if (!r.steadyStates().isEmpty()) {
+            out.section("steady state", r.steadyStates().stream().map(st -> steadyState(s, st, r.digits())).toList());
+        }
+        if (!r.warnings().isEmpty()) {
+            out.section("warnings", r.warnings());
+        }
+        return out.toString();
+    }
+
+    /** e.g. {@code input 2·sin(3t): amplitude 0.25, gain 0.125, phase -180°}. */
+    private static String steadyState(Solution s, SteadyState st, int digits) {
+        return "input " + EquationText.forcingTerm(s.problem().equation(), st.input())
+                + ": amplitude " + Numbers.decimal(st.amplitude(), digits)
+                + ", gain " + Numbers.decimal(st.gain(), digits)
+                + ", phase " + Numbers.decimal(st.phaseDegrees(), digits) + "°";
+    }
+
+    private static String conditions(LinearEquation eq, List<Condition> conditions) {
+        return conditions.isEmpty() ? "none (general solution)"
+                : conditions.stream().map(c -> EquationText.condition(eq, c)).collect(Collectors.joining(", "));
+    }
+
+    private static List<String> roots(List<ExactRoot> roots, Report r) {
+        List<String> exact = roots.stream().map(x -> r.numeric() ? "" : RootText.exact(x)).toList();
+        int width = exact.stream().mapToInt(String::length).max().orElse(0);
+        List<String> decimals = new ArrayList<>();
+        for (int i = 0; i < roots.size(); i++) {
+            String approx = i < r.roots().size() ? "≈ " + RootText.decimal(r.roots().get(i), r.digits()) : "";
+            decimals.add(approx);
+        }
+        int decimalWidth = decimals.stream().mapToInt(String::length).max().orElse(0);
+        List<String> lines = new ArrayList<>();
+        for (int i = 0; i < roots.size(); i++) {
+            lines.add(pad(exact.get(i), width) + "  " + pad(decimals.get(i), decimalWidth)
+                    + "  multiplicity " + roots.get(i).multiplicity());
+        }
+        return lines;
+    }
+
+    /** The formula, where it holds, and what is free or fixed before that. */
+    private static List<String> solution(ClosedForm f, Report r) {
+        List<String> lines = new ArrayList<>();
+        lines.add(EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f));
+        if (!f.particularTerms().isEmpty()) {
+            lines.add("transient (homogeneous) part: " + Formulas.plain(f.withTerms(f.transientTerms())));
+            lines.add("steady (particular) part: " + Formulas.plain(f.withTerms(f.particularTerms())));
+        }
+        if (f.domain() == Domain.DIFFERENCE) {
+            lines.add("for " + f.variable() + " ≥ " + f.validFrom());
+            long first = f.origin().toBigInteger().longValueExact();
+            for (int i = 0; i < f.leadingValues().size(); i++) {
+                lines.add(EquationText.unknownAt(f, Long.toString(first + i)) + " = " + f.leadingValues().get(i));
+            }
+            if (f.leadingValues().isEmpty() && f.validFrom() > first) {
+                String range = f.validFrom() - 1 == first ? Long.toString(first) : first + ".." + (f.validFrom() - 1);
+                lines.add(EquationText.unknownAt(f, range) + " free (any values)");
+            }
+        } else {
+            lines.add("for all " + f.variable());
+        }
+        Map<String, BigDecimal> values = r.analysis().constantValues();
+        if (!values.isEmpty()) {
+            lines.add("constants fixed numerically (not exact rationals; solved to " + r.digits() + " digits):");
+            values.forEach((name, value) -> lines.add("  " + name + " ≈ " + Numbers.decimal(value, r.digits())));
+        }
+        List<String> free = f.freeConstants().stream().filter(n -> !values.containsKey(n)).toList();
+        if (!free.isEmpty()) {
+            lines.add("general solution: " + String.join(", ", free) + (free.size() == 1 ? " is a free constant" : " are free constants"));
+        }
+        return lines;
+    }
+
+    /** With --numeric: the solution as Σ decimal·basis, then the same range lines as the exact form. */
+    private static List<String> numericSolution(ClosedForm f, Report r) {
+        int digits = r.digits();
+        List<String> lines = new ArrayList<>(solution(f, r));
+        String sum = BasisCoefficient.of(f).stream().filter(c -> !c.value().isZero())
+                .map(c -> "(" + c.decimal(digits) + ")·" + c.basis()).collect(Collectors.joining(" + "));
+        lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.isEmpty() ? "0" : sum));
+        return lines;
+    }
+
+    private static List<String> verification(Report r) {
+        List<Check> checks = Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).toList();
+        List<String> lines = new ArrayList<>();
+        for (Check c : checks) {
+            lines.add(pad(c.passed() ? "[ok]" : "[FAILED]", 9) + c.name() + ": " + c.detail());
+        }
+        List<String> failed = checks.stream().filter(c -> !c.passed()).map(Check::name).toList();
+        lines.add(failed.isEmpty() ? "verified" : "NOT verified: " + String.join(", ", failed));
+        return lines;
+    }
+
+    private static String value(ClosedForm f, PointValue v, int digits) {
+        String at = EquationText.unknownAt(f, Numbers.point(v.at()));
+        return at + exactOrDecimal(v, digits);
+    }
+
+    /** {@code " = 55"} when the exact value is known and short, else {@code " ≈ 0.2231"}. */
+    private static String exactOrDecimal(PointValue v, int digits) {
+        String exact = v.exact().filter(TextRenderer::fitsShort).map(Rational::toString)
+                .or(() -> v.exactSurd().filter(q -> fitsShort(q.rational()) && fitsShort(q.coefficient())).map(Object::toString))
+                .orElse("");
+        return !exact.isEmpty() && exact.length() <= EXACT_LIMIT ? " = " + exact : " ≈ " + Numbers.decimal(v.value(), digits);
+    }
+
+    /** Whether the exact value may fit {@link #EXACT_LIMIT} characters, judged without writing it out. */
+    private static boolean fitsShort(Rational q) {
+        return (q.numerator().bitLength() + q.denominator().bitLength()) * Math.log10(2) <= EXACT_LIMIT + 2;
+    }
+
+    private static String pad(String s, int width) {
+        return s + " ".repeat(Math.max(0, width - s.length()));
+    }
+}

@@ -1,0 +1,67 @@
+package dev.rootform.export.notation;
+
+/**
+ * The atoms of one written notation for formulas. {@link FormulaWriter} decides the structure
+ * (signs, order of factors, which parts are grouped); a notation only spells each atom. Every
+ * method is pure and takes already-written operands.
+ *
+ * @since 0.1
+ */
+public interface Notation {
+    /** The fraction numerator/denominator, both already written. */
+    String fraction(String numerator, String denominator);
+
+    /** The square root of a positive integer radicand. */
+    String sqrt(String radicand);
+
+    /** An explicit product of two factors. */
+    String times(String left, String right);
+
+    /** A product written by juxtaposition, such as 2t or πn. */
+    String implicit(String left, String right);
+
+    /** base raised to exponent; the base is already grouped if it needs to be. */
+    String power(String base, String exponent);
+
+    /** A named function (cos, sin, arccos) applied to an argument. */
+    String function(String name, String argument);
+
+    /** Parentheses that the meaning requires. */
+    String parens(String inner);
+
+    /** Parentheses that only help reading; a notation may leave them out. */
+    String clarify(String inner);
+
+    /** The joiner for a positive summand after the first. */
+    String plus();
+
+    /** The joiner for a negative summand after the first. */
+    String minus();
+
+    /** The conjugate sum of summand over the roots λ of polynomial. */
+    String conjugateSum(String polynomial, String summand);
+
+    /** The name of a free constant, such as C1. */
+    String constant(String name);
+
+    /** The constant π. */
+    String pi();
+
+    /** The bound variable λ of a conjugate sum. */
+    String lambda();
+
+    /** A non-negative integer written in decimal digits; as is, unless the notation marks up numbers. */
+    default String number(String digits) {
+        return digits;
+    }
+
+    /** A single-letter or short name: a variable, a function or the base e; as is by default. */
+    default String name(String identifier) {
+        return identifier;
+    }
+
+    /** The negation -body of an already written operand. */
+    default String negate(String body) {
+        return "-" + body;
+    }
+}

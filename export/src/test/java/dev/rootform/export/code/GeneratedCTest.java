@@ -1,0 +1,86 @@
+package dev.rootform.export.code;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.rootform.export.Corpus;
+import dev.rootform.export.CodeFacts;
+import dev.rootform.export.NumericForm;
+import dev.rootform.export.Report;
+import dev.rootform.symbolic.algebra.Rational;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Compiles the generated C of every corpus equation with gcc (strict C99) and checks its values. */
+class GeneratedCTest {
+    /** Allowance for a C math library that differs from StrictMath in the last bits. */
+    private static final double LIBM_SLACK = 1e-15;
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void compilesStrictlyAndMatchesTheStatedAccuracy() throws Exception {
+        List<String> all = new ArrayList<>(Corpus.SEQUENCES);
+        all.addAll(Corpus.FUNCTIONS);
+        List<String> sources = new ArrayList<>(List.of("main.c"));
+        StringBuilder main = new StringBuilder("#include <stdio.h>\n");
+        StringBuilder calls = new StringBuilder();
+        List<double[]> expected = new ArrayList<>();
+        for (int i = 0; i < all.size(); i++) {
+            Report r = Corpus.codeReport(all.get(i));
+            NumericForm form = r.code().orElseThrow().form();
+            CodeFacts facts = r.code().orElseThrow().facts();
+            String f = "case" + i;
+            boolean separate = i % 2 == 0;
+            CSource c = CRenderer.render(r, f, separate ? Optional.of(f + ".h") : Optional.empty());
+            Files.writeString(dir.resolve(f + ".c"), c.source());
+            c.header().ifPresent(h -> write(dir.resolve(f + ".h"), h));
+            sources.add(f + ".c");
+            main.append(separate ? "#include \"" + f + ".h\"\n" : "double " + f + (form.differential() ? "(double);\n" : "(long);\n"));
+            for (int p = 0; p < facts.points().size(); p++) {
+                Rational at = facts.points().get(p);
+                String arg = form.differential() ? Double.toString(at.doubleValue()) : at.toBigInteger() + "L";
+                calls.append("    printf(\"%.17g\\n\", ").append(f).append('(').append(arg).append("));\n");
+                expected.add(new double[] {facts.exact().get(p).doubleValue(), facts.maxRelativeError(), i});
+            }
+        }
+        main.append("int main(void) {\n").append(calls).append("    return 0;\n}\n");
+        Files.writeString(dir.resolve("main.c"), main);
+        List<String> gcc = new ArrayList<>(List.of("gcc", "-std=c99", "-Wall", "-Wextra", "-Werror", "-pedantic", "-O2", "-o", "check"));
+        gcc.addAll(sources);
+        gcc.add("-lm");
+        assertEquals("", run(gcc).strip());
+        List<String> lines = run(List.of(dir.resolve("check").toString())).lines().toList();
+        assertEquals(expected.size(), lines.size());
+        for (int i = 0; i < lines.size(); i++) {
+            double[] e = expected.get(i);
+            double got = Double.parseDouble(lines.get(i));
+            double error = e[0] == 0 ? 0 : Math.abs(got - e[0]) / Math.abs(e[0]);
+            assertTrue(error <= 2 * e[1] + LIBM_SLACK, all.get((int) e[2]) + ": C value " + got + " vs " + e[0]);
+        }
+    }
+
+    private static void write(Path p, String text) {
+        try {
+            Files.writeString(p, text);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    /** Runs a command in the temp dir; its output, or an assertion failure with the output. */
+    private String run(List<String> command) throws Exception {
+        Process p = new ProcessBuilder(command).directory(dir.toFile()).redirectErrorStream(true).start();
+        String out = new String(p.getInputStream().readAllBytes());
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS), "timeout: " + command);
+        assertEquals(0, p.exitValue(), command + ": " + out);
+        return out;
+    }
+}

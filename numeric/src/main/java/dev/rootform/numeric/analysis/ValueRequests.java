@@ -1,0 +1,54 @@
+package dev.rootform.numeric.analysis;
+
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.solve.ExactSolution;
+import dev.rootform.symbolic.solve.RadicalSolution;
+import dev.rootform.symbolic.solve.Solution;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The precondition of {@link Analyzer#analyze}: whether a solution has values at the requested
+ * points. A general solution (free constants, no conditions) has none; a sequence has values only
+ * at integer indices from its first index on. Callers run this check first and report a refusal as
+ * bad input; the analyzer rejects a request that fails it.
+ *
+ * @since 0.2
+ */
+public final class ValueRequests {
+    private ValueRequests() {
+    }
+
+    /**
+     * Why values at {@code points} cannot be given, as one line naming the first offending request
+     * (e.g. {@code "value at 3/2: a sequence has values only at integer indices"}); empty when all
+     * can.
+     */
+    public static Optional<String> refusal(Solution solution, List<Rational> points) {
+        if (!points.isEmpty() && solution.exact().isEmpty() && solution.radical().isEmpty()
+                && solution.problem().conditions().isEmpty()) {
+            return Optional.of("values need conditions: the general solution has free constants");
+        }
+        Optional<Rational> first = firstIndex(solution);
+        if (first.isPresent()) {
+            for (Rational at : points) {
+                if (!at.isInteger()) {
+                    return Optional.of("value at " + at + ": a sequence has values only at integer indices");
+                }
+                if (at.compareTo(first.get()) < 0) {
+                    return Optional.of("value at " + at.toBigInteger() + ": below the first index " + first.get());
+                }
+            }
+        }
+        return Optional.empty();
+    }
+
+    /** The first index of a fitted sequence, exact or in Q(√r) parts; empty for functions and general solutions. */
+    private static Optional<Rational> firstIndex(Solution s) {
+        if (s.problem().equation().domain() != Domain.DIFFERENCE) {
+            return Optional.empty();
+        }
+        return s.exact().or(() -> s.radical().map(RadicalSolution::rational)).map(ExactSolution::origin);
+    }
+}

@@ -1,0 +1,40 @@
+package dev.rootform.numeric.diagnostics;
+
+import dev.rootform.numeric.roots.RootApproximation;
+import dev.rootform.symbolic.algebra.Factor;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A root of the characteristic polynomial with the irreducible factor it belongs to (and so its
+ * multiplicity), and its value in double precision (approximate).
+ */
+record FactorRoot(Factor factor, RootApproximation approximation) {
+    double re() {
+        return approximation.re().doubleValue();
+    }
+
+    double im() {
+        return approximation.im().doubleValue();
+    }
+
+    double modulus() {
+        return Math.hypot(re(), im());
+    }
+
+    int multiplicity() {
+        return factor.multiplicity();
+    }
+
+    /** Pairs each root with its factor; the roots come factor by factor, deg f of them per factor. */
+    static List<FactorRoot> of(List<Factor> factors, List<RootApproximation> roots) {
+        List<FactorRoot> entries = new ArrayList<>();
+        int next = 0;
+        for (Factor f : factors) {
+            for (int j = 0; j < f.degree(); j++) {
+                entries.add(new FactorRoot(f, roots.get(next++)));
+            }
+        }
+        return entries;
+    }
+}
