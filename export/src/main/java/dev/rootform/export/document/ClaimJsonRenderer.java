@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.rootform.export.notation.EquationText;
 import dev.rootform.export.notation.Formulas;
 import dev.rootform.symbolic.claim.ConditionFinding;
 import dev.rootform.symbolic.claim.Decision;
@@ -27,6 +28,12 @@ public final class ClaimJsonRenderer {
     private ClaimJsonRenderer() {
     }
 
+    /**
+     * The report as JSON text.
+     *
+     * @param r the check's report
+     * @return one pretty-printed JSON object
+     */
     public static String render(ClaimReport r) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("verdict", r.holds() ? "holds" : "fails");
@@ -41,7 +48,7 @@ public final class ClaimJsonRenderer {
         equation.put("detail", r.equation().detail());
         ArrayNode conditions = root.putArray("conditions");
         for (ConditionFinding c : r.conditions()) {
-            ObjectNode node = conditions.addObject().put("condition", ClaimTextRenderer.condition(r, c.condition()))
+            ObjectNode node = conditions.addObject().put("condition", EquationText.condition(r.problem(), c.condition()))
                     .put("claimed", c.claimed()).put("required", c.condition().value().toString());
             holds(node, c.decision());
         }
@@ -61,10 +68,10 @@ public final class ClaimJsonRenderer {
             slips.addObject().put("kind", s.kind().name().toLowerCase(Locale.ROOT).replace('_', '-'))
                     .put("explanation", s.explanation()).put("corrected", ClaimText.of(s.corrected()));
         }
+        JsonRenderer.solution(root.putObject("solution"), r.solution().solution().closedForm(), r.solution());
+        ArrayNode notes = root.putArray("notes");
+        r.notes().forEach(notes::add);
         try {
-            root.set("solution", MAPPER.readTree(JsonRenderer.render(r.solution())).get("solution"));
-            ArrayNode notes = root.putArray("notes");
-            r.notes().forEach(notes::add);
             return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root);
         } catch (JsonProcessingException e) {
             throw new UncheckedIOException(e);

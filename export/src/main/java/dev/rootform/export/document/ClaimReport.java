@@ -7,6 +7,7 @@ import dev.rootform.symbolic.claim.Mismatch;
 import dev.rootform.symbolic.claim.Slip;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.LinearEquation;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -46,6 +47,11 @@ public record ClaimReport(Report solution, String claim, String reading, Optiona
 
     /** True for a sequence (difference equation), false for a function. */
     public boolean sequence() {
-        return solution.solution().problem().equation().domain() == Domain.DIFFERENCE;
+        return problem().domain() == Domain.DIFFERENCE;
+    }
+
+    /** The equation the claim is about. */
+    public LinearEquation problem() {
+        return solution.solution().problem().equation();
     }
 }

@@ -1,5 +1,6 @@
 package dev.rootform.export.document;
 
+import dev.rootform.export.notation.EquationText;
 import dev.rootform.export.notation.Formulas;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
@@ -16,15 +17,22 @@ public final class ClaimText {
     private ClaimText() {
     }
 
+    /**
+     * The claim text of a closed form.
+     *
+     * @param f a closed form without free constants
+     * @return {@code x[n] = … for n ≥ K} with the values before K, or {@code y(t) = …}
+     */
     public static String of(ClosedForm f) {
+        String formula = EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f);
         if (f.domain() == Domain.DIFFERENTIAL) {
-            return f.function() + "(" + f.variable() + ") = " + Formulas.plain(f);
+            return formula;
         }
         List<String> parts = new ArrayList<>();
-        parts.add(f.function() + "[" + f.variable() + "] = " + Formulas.plain(f) + " for " + f.variable() + " ≥ " + f.validFrom());
+        parts.add(formula + " for " + f.variable() + " ≥ " + f.validFrom());
         long first = f.origin().toBigInteger().longValueExact();
         for (int i = 0; i < f.leadingValues().size(); i++) {
-            parts.add(f.function() + "[" + (first + i) + "] = " + f.leadingValues().get(i));
+            parts.add(EquationText.unknownAt(f, Long.toString(first + i)) + " = " + f.leadingValues().get(i));
         }
         return String.join("; ", parts);
     }

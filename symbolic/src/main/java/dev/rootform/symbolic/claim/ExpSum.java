@@ -3,7 +3,6 @@ package dev.rootform.symbolic.claim;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
-import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -65,7 +64,7 @@ final class ExpSum {
     static ExpSum rootSum(ExactRing ring, Domain domain, Block block, List<Algebraic> coefficients) {
         ExpSum zero = zero(ring, domain);
         Map<Block, List<Algebraic>> b = new LinkedHashMap<>();
-        List<Algebraic> trimmed = trim(coefficients);
+        List<Algebraic> trimmed = Polynomials.trim(coefficients);
         if (!trimmed.isEmpty()) {
             b.put(block, trimmed);
         }
@@ -122,10 +121,10 @@ final class ExpSum {
     ExpSum scale(Algebraic c) {
         ExpSum r = zero(ring, domain);
         for (Map.Entry<Mode, List<Algebraic>> e : modes.entrySet()) {
-            r = r.plusMode(e.getKey(), times(e.getValue(), c));
+            r = r.plusMode(e.getKey(), Polynomials.times(e.getValue(), c));
         }
         for (Map.Entry<Block, List<Algebraic>> e : blocks.entrySet()) {
-            r = r.plusBlock(e.getKey(), times(e.getValue(), blockRing(e.getKey()).lift(c)));
+            r = r.plusBlock(e.getKey(), Polynomials.times(e.getValue(), blockRing(e.getKey()).lift(c)));
         }
         return r;
     }
@@ -142,7 +141,7 @@ final class ExpSum {
             for (Map.Entry<Mode, List<Algebraic>> b : other.modes.entrySet()) {
                 Mode m = new Mode(domain == Domain.DIFFERENCE ? a.getKey().rate().multiply(b.getKey().rate())
                         : a.getKey().rate().add(b.getKey().rate()), a.getKey().phase().add(b.getKey().phase()));
-                r = r.plusMode(m, times(a.getValue(), b.getValue()));
+                r = r.plusMode(m, Polynomials.times(a.getValue(), b.getValue()));
             }
         }
         if (!blocks.isEmpty() || !other.blocks.isEmpty()) {
@@ -162,7 +161,7 @@ final class ExpSum {
         for (Map.Entry<Block, List<Algebraic>> e : a.blocks.entrySet()) {
             ExactRing k = a.blockRing(e.getKey());
             List<Algebraic> lifted = p.stream().map(k::lift).toList();
-            r = r.plusBlock(e.getKey(), times(e.getValue(), taylorShift(lifted, k.rational(e.getKey().origin()), k)));
+            r = r.plusBlock(e.getKey(), Polynomials.times(e.getValue(), Polynomials.taylorShift(lifted, k.rational(e.getKey().origin()), k)));
         }
         return r;
     }
@@ -227,12 +226,12 @@ final class ExpSum {
         ExpSum r = zero(ring, domain);
         for (Map.Entry<Mode, List<Algebraic>> e : modes.entrySet()) {
             Algebraic factor = e.getKey().rate().pow(k);
-            r = r.plusMode(e.getKey(), times(taylorShift(e.getValue(), ring.rational(Rational.of(k)), ring), factor));
+            r = r.plusMode(e.getKey(), Polynomials.times(Polynomials.taylorShift(e.getValue(), ring.rational(Rational.of(k)), ring), factor));
         }
         for (Map.Entry<Block, List<Algebraic>> e : blocks.entrySet()) {
             ExactRing b = blockRing(e.getKey());
             Algebraic factor = b.lambda().pow(k);
-            r = r.plusBlock(e.getKey(), times(taylorShift(e.getValue(), b.rational(Rational.of(k)), b), factor));
+            r = r.plusBlock(e.getKey(), Polynomials.times(Polynomials.taylorShift(e.getValue(), b.rational(Rational.of(k)), b), factor));
         }
         return r;
     }
@@ -241,10 +240,10 @@ final class ExpSum {
     ExpSum derivative() {
         ExpSum r = zero(ring, domain);
         for (Map.Entry<Mode, List<Algebraic>> e : modes.entrySet()) {
-            r = r.plusMode(e.getKey(), derive(e.getValue(), e.getKey().rate()));
+            r = r.plusMode(e.getKey(), Polynomials.derive(e.getValue(), e.getKey().rate()));
         }
         for (Map.Entry<Block, List<Algebraic>> e : blocks.entrySet()) {
-            r = r.plusBlock(e.getKey(), derive(e.getValue(), blockRing(e.getKey()).lambda()));
+            r = r.plusBlock(e.getKey(), Polynomials.derive(e.getValue(), blockRing(e.getKey()).lambda()));
         }
         return r;
     }
@@ -272,11 +271,11 @@ final class ExpSum {
         ExactValue v = ExactValue.zero(ring);
         Algebraic nn = ring.rational(Rational.of(n));
         for (Map.Entry<Mode, List<Algebraic>> e : modes.entrySet()) {
-            v = v.plus(e.getKey().phase(), evaluate(e.getValue(), nn, ring).multiply(e.getKey().rate().pow(n)));
+            v = v.plus(e.getKey().phase(), Polynomials.evaluate(e.getValue(), nn, ring).multiply(e.getKey().rate().pow(n)));
         }
         for (Map.Entry<Block, List<Algebraic>> e : blocks.entrySet()) {
             ExactRing b = blockRing(e.getKey());
-            Algebraic inBlock = evaluate(e.getValue(), b.lift(nn), b).multiply(b.lambda().pow(n));
+            Algebraic inBlock = Polynomials.evaluate(e.getValue(), b.lift(nn), b).multiply(b.lambda().pow(n));
             v = v.plus(ring.zero(), inBlock.trace());
         }
         return v;
@@ -297,8 +296,8 @@ final class ExpSum {
             List<Algebraic> p = e.getValue();
             Rational binomial = Rational.ONE;
             for (int i = 0; i <= r && !p.isEmpty(); i++) {
-                sum = sum.add(evaluate(p, tt, ring).multiply(binomial).multiply(rate.pow(r - i)));
-                p = derive(p, ring.zero());
+                sum = sum.add(Polynomials.evaluate(p, tt, ring).multiply(binomial).multiply(rate.pow(r - i)));
+                p = Polynomials.derive(p, ring.zero());
                 binomial = binomial.multiply(Rational.of(r - i, i + 1));
             }
             v = v.plus(rate.multiply(tt).add(e.getKey().phase()), sum);
@@ -338,88 +337,22 @@ final class ExpSum {
     // ---- internals ----
 
     private ExpSum plusMode(Mode mode, List<Algebraic> p) {
-        Map<Mode, List<Algebraic>> m = new LinkedHashMap<>(modes);
-        List<Algebraic> sum = trim(m.containsKey(mode) ? plus(m.get(mode), p) : p);
-        if (sum.isEmpty()) {
-            m.remove(mode);
-        } else {
-            m.put(mode, sum);
-        }
-        return new ExpSum(ring, domain, m, blocks);
+        return new ExpSum(ring, domain, merged(modes, mode, p), blocks);
     }
 
     private ExpSum plusBlock(Block block, List<Algebraic> p) {
-        Map<Block, List<Algebraic>> m = new LinkedHashMap<>(blocks);
-        List<Algebraic> sum = trim(m.containsKey(block) ? plus(m.get(block), p) : p);
+        return new ExpSum(ring, domain, modes, merged(blocks, block, p));
+    }
+
+    /** The map with p added to the polynomial at key; a sum that is zero leaves the map. */
+    private static <K> Map<K, List<Algebraic>> merged(Map<K, List<Algebraic>> map, K key, List<Algebraic> p) {
+        Map<K, List<Algebraic>> m = new LinkedHashMap<>(map);
+        List<Algebraic> sum = Polynomials.trim(m.containsKey(key) ? Polynomials.plus(m.get(key), p) : p);
         if (sum.isEmpty()) {
-            m.remove(block);
+            m.remove(key);
         } else {
-            m.put(block, sum);
+            m.put(key, sum);
         }
-        return new ExpSum(ring, domain, modes, m);
-    }
-
-    static List<Algebraic> trim(List<Algebraic> p) {
-        int n = p.size();
-        while (n > 0 && p.get(n - 1).isZero()) {
-            n--;
-        }
-        return List.copyOf(p.subList(0, n));
-    }
-
-    private static List<Algebraic> plus(List<Algebraic> a, List<Algebraic> b) {
-        List<Algebraic> r = new ArrayList<>();
-        for (int i = 0; i < Math.max(a.size(), b.size()); i++) {
-            r.add(i >= a.size() ? b.get(i) : i >= b.size() ? a.get(i) : a.get(i).add(b.get(i)));
-        }
-        return r;
-    }
-
-    private static List<Algebraic> times(List<Algebraic> p, Algebraic c) {
-        return p.stream().map(x -> x.multiply(c)).toList();
-    }
-
-    private static List<Algebraic> times(List<Algebraic> a, List<Algebraic> b) {
-        if (a.isEmpty() || b.isEmpty()) {
-            return List.of();
-        }
-        List<Algebraic> r = new ArrayList<>();
-        for (int k = 0; k < a.size() + b.size() - 1; k++) {
-            r.add(null);
-        }
-        for (int i = 0; i < a.size(); i++) {
-            for (int j = 0; j < b.size(); j++) {
-                Algebraic t = a.get(i).multiply(b.get(j));
-                r.set(i + j, r.get(i + j) == null ? t : r.get(i + j).add(t));
-            }
-        }
-        return r;
-    }
-
-    /** P' + rate·P. */
-    private static List<Algebraic> derive(List<Algebraic> p, Algebraic rate) {
-        List<Algebraic> r = new ArrayList<>();
-        for (int i = 0; i < p.size(); i++) {
-            Algebraic d = i + 1 < p.size() ? p.get(i + 1).multiply(Rational.of(i + 1)) : rate.ring().zero();
-            r.add(d.add(rate.multiply(p.get(i))));
-        }
-        return trim(r);
-    }
-
-    /** P(v + s) by Horner's rule. */
-    static List<Algebraic> taylorShift(List<Algebraic> p, Algebraic s, ExactRing ring) {
-        List<Algebraic> r = List.of();
-        for (int i = p.size() - 1; i >= 0; i--) {
-            r = plus(times(r, List.of(s, ring.one())), List.of(p.get(i)));
-        }
-        return trim(r);
-    }
-
-    private static Algebraic evaluate(List<Algebraic> p, Algebraic x, ExactRing ring) {
-        Algebraic v = ring.zero();
-        for (int i = p.size() - 1; i >= 0; i--) {
-            v = v.multiply(x).add(p.get(i));
-        }
-        return v;
+        return m;
     }
 }

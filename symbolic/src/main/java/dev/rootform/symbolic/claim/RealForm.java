@@ -47,7 +47,7 @@ final class RealForm {
             if (!done.add(mode)) {
                 continue;
             }
-            List<Algebraic> q = ExpSum.taylorShift(e.getValue(), ring.rational(s0), ring);
+            List<Algebraic> q = Polynomials.taylorShift(e.getValue(), ring.rational(s0), ring);
             Algebraic rate = mode.rate();
             if (rate.isReal()) {
                 Optional<Surd> r = rate.toSurd();
@@ -67,7 +67,7 @@ final class RealForm {
                 return Optional.empty();
             }
             boolean upper = imaginary.get().signum() > 0;
-            List<Algebraic> upperPoly = upper ? q : ExpSum.taylorShift(other, ring.rational(s0), ring);
+            List<Algebraic> upperPoly = upper ? q : Polynomials.taylorShift(other, ring.rational(s0), ring);
             Optional<Wave> wave = sequence ? sequenceWave(upper ? rate : rate.conjugate())
                     : functionWave(upper ? rate : rate.conjugate());
             if (wave.isEmpty() || !oscillations(upperPoly, wave.get(), terms)) {
@@ -217,7 +217,7 @@ final class RealForm {
                 Algebraic phase = s.domain() == Domain.DIFFERENCE ? ring.zero()
                         : alpha.multiply(ring.rational(e.getKey().origin())).negate();
                 List<Algebraic> inU = e.getValue().stream().map(c -> c.at(alpha)).toList();
-                List<Algebraic> inV = ExpSum.taylorShift(inU, ring.rational(e.getKey().origin().negate()), ring);
+                List<Algebraic> inV = Polynomials.taylorShift(inU, ring.rational(e.getKey().origin().negate()), ring);
                 result = result.add(ExpSum.of(ring, s.domain(), new ExpSum.Mode(alpha, phase), inV));
             }
         }
