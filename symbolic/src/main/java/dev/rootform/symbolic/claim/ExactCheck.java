@@ -266,10 +266,8 @@ final class ExactCheck {
                     return new ConditionFinding(condition, "not claimed", Decision.UNDECIDED, true);
                 }
             } else {
-                if (condition.atTimesPi()) {
-                    throw new NotExact("a condition at a multiple of π");
-                }
-                claimed = c.formula().derivativeAt(condition.derivative(), condition.at());
+                claimed = condition.atTimesPi() ? c.formula().derivativeAtPiMultiple(condition.derivative(), condition.at())
+                        : c.formula().derivativeAt(condition.derivative(), condition.at());
             }
             boolean holds = claimed.subtract(ExactValue.of(ring.rational(condition.value()))).isZero();
             return new ConditionFinding(condition, ValueText.of(claimed), Decision.of(holds), true);

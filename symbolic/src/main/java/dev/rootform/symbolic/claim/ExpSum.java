@@ -318,6 +318,29 @@ final class ExpSum {
         return v;
     }
 
+    /**
+     * The exact r-th derivative at t = qπ, when every mode is c·e^{iωt + κ} with c constant and ω
+     * rational (then e^{iωqπ} is a root of unity); π itself never enters the value.
+     *
+     * @throws NotExact for any other sum
+     */
+    ExactValue derivativeAtPiMultiple(int r, Rational q) {
+        if (!blocks.isEmpty()) {
+            throw new NotExact("a root sum at a multiple of π");
+        }
+        ExactValue v = ExactValue.zero(ring);
+        for (Map.Entry<Mode, List<Algebraic>> e : modes.entrySet()) {
+            Algebraic rate = e.getKey().rate();
+            Optional<Rational> omega = rate.realPart().isZero() ? rate.imaginaryPart().toRational() : Optional.empty();
+            if (omega.isEmpty() || e.getValue().size() > 1) {
+                throw new NotExact("a value at a multiple of π of a term other than c·cos(ωt) or c·sin(ωt) with rational ω");
+            }
+            Algebraic unit = ring.expIPi(omega.get().multiply(q));
+            v = v.plus(e.getKey().phase(), e.getValue().get(0).multiply(rate.pow(r)).multiply(unit));
+        }
+        return v;
+    }
+
     // ---- rewriting (slips) ----
 
     /** The same sum with every mode's rate replaced. */
