@@ -1,6 +1,7 @@
 package dev.rootform.api;
 
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
@@ -22,14 +23,15 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Properties of check over seeded random problems of order 1 to 8 from {@link RandomProblems} (all
- * root kinds, forced and unforced): solve's own answers hold exactly, and the same answers with
+ * root kinds, forced and unforced): solve's own answers hold exactly (and so does the claim as the
+ * check read it back), and the same answers with
  * one coefficient moved by 1/1000 fail exactly (no false "holds"). The seed is printed on failure;
  * -Dtests.multiplier scales the counts (10 gives the 500 perturbed answers of the issue).
  */
 class CheckPropertyTest {
     private static final long SEED = 20261210L;
     private static final int MULTIPLIER = Integer.getInteger("tests.multiplier", 1);
-    private static final int ROUND_TRIPS = 40 * MULTIPLIER;
+    private static final int ROUND_TRIPS = 50 * MULTIPLIER;
     private static final int MUTATIONS = 50 * MULTIPLIER;
     private static final Rational NUDGE = Rational.of(1, 1000);
     private static final int LABEL_WIDTH = 16;
@@ -52,6 +54,9 @@ class CheckPropertyTest {
                 return;
             }
             assertTrue(h.checked().exact(), g.label() + ": not exact: " + h.checked().notes());
+            String readBack = h.checked().asRead().map(ClaimText::of).orElseThrow();
+            assertInstanceOf(CheckResult.Holds.class, Rootform.check(CheckRequest.of(g.text(), readBack)),
+                    g.label() + ": the claim as read, " + readBack);
             checked++;
         }
         assertTrue(checked >= ROUND_TRIPS * 3 / 4, "only " + checked + " of " + ROUND_TRIPS + " solved (seed " + SEED + ")");
