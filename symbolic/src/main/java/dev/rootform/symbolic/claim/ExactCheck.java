@@ -39,6 +39,8 @@ final class ExactCheck {
     private final ClaimEvaluator evaluator;
     /** Why a part was left undecided, for the findings. */
     private String inexact;
+    /** The right-hand side in exact form, once read. */
+    private ExpSum forcing;
 
     ExactCheck(ExactRing ring, Solution solution, Claim claim) {
         this.ring = ring;
@@ -135,9 +137,17 @@ final class ExactCheck {
 
     // ---- the equation ----
 
+    /** g, the equation's right-hand side, read once. */
+    ExpSum forcing() {
+        if (forcing == null) {
+            forcing = evaluator.evaluate(Expressions.forcing(eq));
+        }
+        return forcing;
+    }
+
     /** L(formula) − g in the equation's own variable. */
     ExpSum residual(ExpSum formula) {
-        ExpSum r = evaluator.evaluate(Expressions.forcing(eq)).negate();
+        ExpSum r = forcing().negate();
         ExpSum derivative = formula;
         for (int j = 0; j < eq.coefficients().size(); j++) {
             Rational a = eq.coefficients().get(j);
@@ -209,7 +219,7 @@ final class ExactCheck {
     private Optional<String> mixedWindows(Candidate c) {
         long end = firstFormulaWindow(c);
         int k = eq.order();
-        ExpSum g = evaluator.evaluate(Expressions.forcing(eq));
+        ExpSum g = forcing();
         for (long m = firstIndex(); m < end; m++) {
             Deadline.checkCurrent();
             ExactValue sum = g.valueAt(m - eq.shift()).negate();

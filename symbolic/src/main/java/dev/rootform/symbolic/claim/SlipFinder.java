@@ -108,7 +108,7 @@ final class SlipFinder {
     /** "λ = 2 is a root of multiplicity 2 …", "the forcing resonates with …", or both. */
     private String why(Algebraic rate) {
         int m = multiplicity(rate);
-        boolean resonance = m > 0 && check.evaluator().evaluate(Expressions.forcing(eq)).modes().keySet().stream()
+        boolean resonance = m > 0 && check.forcing().modes().keySet().stream()
                 .anyMatch(mode -> mode.rate().equals(rate));
         String repeated = rootText(rate) + " is a root of multiplicity " + m + " of the characteristic polynomial";
         String resonant = "the forcing resonates with the characteristic root " + rootText(rate);
