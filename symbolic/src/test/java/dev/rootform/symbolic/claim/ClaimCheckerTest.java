@@ -45,6 +45,8 @@ class ClaimCheckerTest {
         x[n+1] = 2x[n]; x[0] = 1               | 2^n for n >= 1; x[0] = 2 | FAILS
         x[n+2] = 3x[n+1]; x[0] = 5; x[1] = 1   | 3^(n-1) for n >= 1; x[0] = 5 | HOLDS
         y'' + y = 0; y(0) = 0; y(pi/2) = 1     | sin(t)              | HOLDS
+        y'' + 9y = 0; y(0) = 8; y'(0) = 18     | 10cos(3t - arctan(3/4)) | HOLDS
+        y'' + 9y = 0; y(0) = 8; y'(0) = 18     | 10cos(3t + arctan(3/4)) | FAILS
         y'' + y = 0; y(0) = 0; y(pi/2) = 1     | sin(t) + cos(t)     | FAILS
         y'' + 4y = 0; y(0) = 1; y(pi/8) = 0    | sqrt(2) cos(2t - pi/4) | FAILS
         y'' + 4y = 0; y(0) = 1; y(pi/8) = 0    | sqrt(2) cos(2t + pi/4) | HOLDS
