@@ -14,6 +14,7 @@ import java.util.Objects;
  * @since 0.3
  */
 public record CheckRequest(String problem, List<String> given, String claim, Options options) {
+    /** @throws NullPointerException if an argument or a condition is null */
     public CheckRequest {
         Objects.requireNonNull(problem, "problem");
         given = List.copyOf(given);
@@ -21,12 +22,23 @@ public record CheckRequest(String problem, List<String> given, String claim, Opt
         Objects.requireNonNull(options, "options");
     }
 
-    /** The problem as text with its conditions, and the claim. */
+    /**
+     * The problem as text with its conditions, and the claim, with the default options.
+     *
+     * @param problem the equation, optionally followed by conditions separated by {@code ;}
+     * @param claim the claimed closed form
+     * @return the request
+     */
     public static CheckRequest of(String problem, String claim) {
         return new CheckRequest(problem, List.of(), claim, Options.defaults());
     }
 
-    /** This request with other options. */
+    /**
+     * This request with other options.
+     *
+     * @param options digits, time limit, variable
+     * @return a new request
+     */
     public CheckRequest with(Options options) {
         return new CheckRequest(problem, given, claim, options);
     }

@@ -18,44 +18,65 @@ import java.util.Optional;
  *
  * @since 0.3
  */
-public sealed interface CheckResult permits CheckResult.Holds, CheckResult.Fails, CheckResult.Unchecked {
+public sealed interface CheckResult permits CheckResult.Checked, CheckResult.Unchecked {
 
-    /** The check's report, when the claim was checked. */
+    /**
+     * The check's report, when the claim was checked.
+     *
+     * @return the report of {@link Holds} and {@link Fails}; empty for {@link Unchecked}
+     */
     default Optional<ClaimReport> report() {
         return Optional.empty();
     }
 
-    /** The claim is the solution (exactly, or to the stated digits when the report says numeric). */
-    record Holds(ClaimReport checked) implements CheckResult {
-        public Holds {
-            Objects.requireNonNull(checked, "checked");
-        }
+    /** A claim that was checked: {@link Holds} or {@link Fails}. */
+    sealed interface Checked extends CheckResult permits Holds, Fails {
+        /**
+         * The check's findings.
+         *
+         * @return the report
+         */
+        ClaimReport checked();
 
         @Override
-        public Optional<ClaimReport> report() {
-            return Optional.of(checked);
-        }
-    }
-
-    /** The claim is not the solution; the report explains where and why. */
-    record Fails(ClaimReport checked) implements CheckResult {
-        public Fails {
-            Objects.requireNonNull(checked, "checked");
-        }
-
-        @Override
-        public Optional<ClaimReport> report() {
-            return Optional.of(checked);
+        default Optional<ClaimReport> report() {
+            return Optional.of(checked());
         }
     }
 
     /**
-     * The claim was not checked: {@code reason} is a {@link Result} without a checked claim —
-     * {@link Result.Refused} (bad problem or claim, with its position), {@link Result.Contradictory},
-     * {@link Result.Underdetermined}, {@link Result.CheckFailed} (the solver's own answer did not
-     * verify) or {@link Result.OutOfTime}.
+     * The claim is the solution (exactly, or to the stated digits when the report says numeric).
+     *
+     * @param checked the findings
+     */
+    record Holds(ClaimReport checked) implements Checked {
+        /** @throws NullPointerException if the report is null */
+        public Holds {
+            Objects.requireNonNull(checked, "checked");
+        }
+    }
+
+    /**
+     * The claim is not the solution; the report explains where and why.
+     *
+     * @param checked the findings
+     */
+    record Fails(ClaimReport checked) implements Checked {
+        /** @throws NullPointerException if the report is null */
+        public Fails {
+            Objects.requireNonNull(checked, "checked");
+        }
+    }
+
+    /**
+     * The claim was not checked.
+     *
+     * @param reason a {@link Result} without a checked claim: {@link Result.Refused} (bad problem or
+     *     claim, with its position), {@link Result.Contradictory}, {@link Result.Underdetermined},
+     *     {@link Result.CheckFailed} (the solver's own answer did not verify) or {@link Result.OutOfTime}
      */
     record Unchecked(Result reason) implements CheckResult {
+        /** @throws NullPointerException if the reason is null */
         public Unchecked {
             Objects.requireNonNull(reason, "reason");
         }
