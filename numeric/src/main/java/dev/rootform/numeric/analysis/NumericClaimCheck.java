@@ -108,7 +108,8 @@ public final class NumericClaimCheck {
      */
     public static Optional<Mismatch> largestDifference(Solution solution, Map<String, BigDecimal> constants, Claim claim,
             int digits) {
-        return new NumericClaimCheck(solution, constants, claim, digits).largestDifference(samplePoints(solution));
+        // a figure to show: its values to SHOWN_DIGITS, the difference to 3 digits
+        return new NumericClaimCheck(solution, constants, claim, Math.min(digits, SHOWN_DIGITS)).largestDifference(samplePoints(solution));
     }
 
     /** The solution's formula as an expression, its free constants replaced by their values. */

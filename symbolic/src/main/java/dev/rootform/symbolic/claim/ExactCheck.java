@@ -126,10 +126,9 @@ final class ExactCheck {
             if (domain == Domain.DIFFERENCE && hasValues()) {
                 return firstMismatch(c).isEmpty();
             }
-            if (equation(c).decision() != Decision.HOLDS) {
-                return false;
-            }
-            return conditions(c).stream().allMatch(f -> f.decision() == Decision.HOLDS);
+            // the conditions first: they are cheaper than the residual and rule out most candidates
+            return conditions(c).stream().allMatch(f -> f.decision() == Decision.HOLDS)
+                    && equation(c).decision() == Decision.HOLDS;
         } catch (NotExact e) {
             return false;
         }
