@@ -2,12 +2,10 @@ package dev.rootform.symbolic.claim;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.InputException;
-import java.math.BigDecimal;
+import dev.rootform.symbolic.parse.NumberLiteral;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * Splits a claimed closed form into tokens. Besides ASCII it reads the tool's own text output and
@@ -17,9 +15,6 @@ import java.util.regex.Pattern;
  * the parser splits runs such as {@code pin} into known names.
  */
 final class ClaimLexer {
-    private static final Pattern NUMBER = Pattern.compile("(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
-    /** Bound on the decimal exponent of a literal, which keeps exact values small. */
-    private static final int MAX_SCALE = 1000;
     private static final String SUPERSCRIPTS = "⁰¹²³⁴⁵⁶⁷⁸⁹";
     private static final Map<Character, ClaimToken.Kind> SINGLE = Map.ofEntries(
             Map.entry('+', ClaimToken.Kind.PLUS), Map.entry('-', ClaimToken.Kind.MINUS),
@@ -87,18 +82,10 @@ final class ClaimLexer {
     }
 
     private ClaimToken number() {
-        Matcher m = NUMBER.matcher(source).region(position, source.length());
-        if (!m.lookingAt()) {
-            throw new InputException("malformed number in the claim", source, position);
-        }
-        String text = m.group();
-        BigDecimal decimal = new BigDecimal(text);
-        if (Math.abs(decimal.scale()) > MAX_SCALE) {
-            throw new InputException("number " + text + " is too large", source, position);
-        }
+        NumberLiteral n = NumberLiteral.read(source, position, source.length(), "number in the claim");
         int start = position;
-        position = m.end();
-        return new ClaimToken(ClaimToken.Kind.NUMBER, text, start, position, Rational.of(decimal));
+        position = n.end();
+        return new ClaimToken(ClaimToken.Kind.NUMBER, n.text(), start, position, n.value());
     }
 
     /** t² → t ^ 2: a caret token and the number of the superscript digits. */
