@@ -73,7 +73,7 @@ final class CheckCommand implements Callable<Integer> {
             Options options = Options.builder().digits(digits).timeLimit(Duration.ofSeconds(timeLimit)).variable(variable).build();
             CheckResult result = Rootform.check(new CheckRequest(input, given, claim, options));
             if (result instanceof CheckResult.Unchecked u) {
-                err.println(describe(u.reason()));
+                err.println(ErrorLine.describe(u.reason()));
                 err.flush();
                 return u.reason() instanceof Result.OutOfTime || u.reason() instanceof Result.CheckFailed
                         ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
@@ -88,12 +88,5 @@ final class CheckCommand implements Callable<Integer> {
             err.flush();
             return ExitCode.BAD_INPUT;
         }
-    }
-
-    private static String describe(Result reason) {
-        if (reason instanceof Result.CheckFailed f) {
-            return "rootform: internal error: the solver's own answer failed its checks (" + String.join(", ", f.failed()) + ")";
-        }
-        return ErrorLine.describe(reason);
     }
 }
