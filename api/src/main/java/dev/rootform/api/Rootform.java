@@ -58,6 +58,16 @@ public final class Rootform {
     }
 
     /**
+     * Analyses a state-space model exactly: e^(At) or A^n entry by entry, the transfer matrix, the
+     * response to x0 and the input, stability and the Kalman ranks, all verified.
+     *
+     * @since 0.3
+     */
+    public static SystemResult system(SystemRequest request) {
+        return SystemJob.run(request);
+    }
+
+    /**
      * Checks a claimed solution of a problem: exactly where the claim's numbers are exact, else
      * numerically to {@link Options#digits()} digits; with the equation part, each condition,
      * where claim and solution differ, named slips and the correct solution.
