@@ -17,9 +17,12 @@ import java.util.Optional;
  *     choice; the solution is still computed and verified exactly)
  * @param variable the independent variable of a differential equation, when not the default
  *     {@code t} and not named in the equation
+ * @param plots also compute the plot data of the report page ({@code Report.plots()}): samples of
+ *     the solution over its own time scales and of the frequency response
  * @since 0.2
  */
-public record Options(int digits, List<String> points, Duration timeLimit, boolean numeric, Optional<String> variable) {
+public record Options(int digits, List<String> points, Duration timeLimit, boolean numeric, Optional<String> variable,
+        boolean plots) {
     /** Default significant digits. */
     public static final int DEFAULT_DIGITS = 30;
     /** Largest number of significant digits accepted. */
@@ -40,7 +43,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         Objects.requireNonNull(variable, "variable");
     }
 
-    /** 30 digits, no points, 300 s, exact presentation, default variable. */
+    /** 30 digits, no points, 300 s, exact presentation, default variable, no plot data. */
     public static Options defaults() {
         return builder().build();
     }
@@ -52,7 +55,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
     /** A builder starting from these options. */
     public Builder toBuilder() {
         return new Builder().digits(digits).points(points).timeLimit(timeLimit).numeric(numeric)
-                .variable(variable.orElse(null));
+                .variable(variable.orElse(null)).plots(plots);
     }
 
     /** Collects options; {@link #build()} validates them. Not thread-safe; the built options are. */
@@ -62,6 +65,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         private Duration timeLimit = DEFAULT_TIME_LIMIT;
         private boolean numeric;
         private String variable;
+        private boolean plots;
 
         private Builder() {
         }
@@ -98,8 +102,14 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
             return this;
         }
 
+        /** Also compute the plot data of the report page. */
+        public Builder plots(boolean plots) {
+            this.plots = plots;
+            return this;
+        }
+
         public Options build() {
-            return new Options(digits, points, timeLimit, numeric, Optional.ofNullable(variable));
+            return new Options(digits, points, timeLimit, numeric, Optional.ofNullable(variable), plots);
         }
     }
 }

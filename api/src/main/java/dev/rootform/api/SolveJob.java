@@ -35,7 +35,7 @@ final class SolveJob {
             if (refusal.isPresent()) {
                 return new Result.Refused(refusal.get(), "", -1);
             }
-            Analysis analysis = new Analyzer(options.digits()).analyze(solution, points);
+            Analysis analysis = new Analyzer(options.digits(), options.plots()).analyze(solution, points);
             return classify(new Report(solution, analysis, options.digits(), options.numeric()));
         } catch (ConditionsException e) {
             return e.contradictory() ? new Result.Contradictory(e.getMessage())

@@ -2,6 +2,7 @@ package dev.rootform.numeric.analysis;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -10,10 +11,12 @@ import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import java.util.function.IntFunction;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
@@ -237,6 +240,33 @@ final class BoundaryValues {
             sum = sum.add(values.get(j).multiply(basis.get(first + j).derivative(d, t)));
         }
         return sum;
+    }
+
+    /**
+     * The particular (steady) part at t: the exact particular solution plus the numerically fixed
+     * constants of the closed form's particular terms (a trial form's P1..).
+     */
+    Apfloat steady(Apfloat t) {
+        Set<String> particularNames = new HashSet<>();
+        solution.closedForm().particularTerms().forEach(term -> term.coefficients().forEach(c -> {
+            if (c instanceof Coefficient.Free free) {
+                particularNames.add(free.name());
+            }
+        }));
+        Apfloat sum = particular.map(p -> p.derivative(0, t)).orElse(Apfloat.ZERO);
+        List<String> names = List.copyOf(constants.keySet());
+        List<Apfloat> values = List.copyOf(constants.values());
+        for (int j = 0; j < values.size(); j++) {
+            if (particularNames.contains(names.get(j))) {
+                sum = sum.add(values.get(j).multiply(basis.get(first + j).derivative(0, t)));
+            }
+        }
+        return sum;
+    }
+
+    /** The working precision of the constants. */
+    long precision() {
+        return precision;
     }
 
     /** Each condition re-evaluated with the solved constants at the working precision. */
