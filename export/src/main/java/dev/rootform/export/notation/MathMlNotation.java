@@ -1,5 +1,11 @@
 package dev.rootform.export.notation;
 
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
 /**
  * Presentation MathML (the MathML Core elements mrow, mi, mn, mo, msup, msub, mfrac, msqrt,
  * munder): every atom is an element, every operand of a two-child element is wrapped in an
@@ -13,6 +19,13 @@ public final class MathMlNotation implements Notation {
     private static final String INVISIBLE_TIMES = "<mo>&#x2062;</mo>";
     /** U+2061 FUNCTION APPLICATION, between a function name and its argument. */
     private static final String APPLY = "<mo>&#x2061;</mo>";
+
+    private static final String FENCE_OPEN = "<mo fence=\"true\" form=\"prefix\" lspace=\"0\" rspace=\"0\">(</mo>";
+    private static final String FENCE_CLOSE = "<mo fence=\"true\" form=\"postfix\" lspace=\"0\" rspace=\"0\">)</mo>";
+    /** Primes U+2032, U+2033, U+2034 for the first three derivatives. */
+    /** An element tag: closing slash, name, self-closing slash. */
+    private static final Pattern TAG = Pattern.compile("<(/?)([a-z]+)[^>]*?(/?)>");
+    private static final String[] PRIMES = {"&#x2032;", "&#x2033;", "&#x2034;"};
 
     private MathMlNotation() {
     }
@@ -47,9 +60,10 @@ public final class MathMlNotation implements Notation {
         return "<mi>" + name + "</mi>" + APPLY + parens(argument);
     }
 
+    /** Fences with no side spacing, so {@code cos(3t)} and {@code y(t)} sit tight. */
     @Override
     public String parens(String inner) {
-        return "<mrow><mo>(</mo>" + inner + "<mo>)</mo></mrow>";
+        return "<mrow>" + FENCE_OPEN + inner + FENCE_CLOSE + "</mrow>";
     }
 
     @Override
@@ -109,5 +123,63 @@ public final class MathMlNotation implements Notation {
 
     private static String row(String inner) {
         return "<mrow>" + inner + "</mrow>";
+    }
+
+    @Override
+    public String derivative(String function, int order) {
+        if (order == 0) {
+            return function;
+        }
+        String mark = order <= 3 ? "<mo lspace=\"0\" rspace=\"0\">" + PRIMES[order - 1] + "</mo>" : parens(number(Integer.toString(order)));
+        return "<msup>" + row(function) + row(mark) + "</msup>";
+    }
+
+    @Override
+    public String applied(String function, String argument) {
+        return function + APPLY + parens(argument);
+    }
+
+    @Override
+    public String indexed(String sequence, String index) {
+        return sequence + "<mrow><mo fence=\"true\" lspace=\"0\" rspace=\"0\">[</mo>" + index
+                + "<mo fence=\"true\" lspace=\"0\" rspace=\"0\">]</mo></mrow>";
+    }
+
+    @Override
+    public String shifted(String variable, int k) {
+        return k == 0 ? variable : variable + (k > 0 ? plus() : minus()) + number(Integer.toString(Math.abs(k)));
+    }
+
+    @Override
+    public String relation(String left, String symbol, String right) {
+        return left + "<mo>" + Xml.escape(symbol) + "</mo>" + right;
+    }
+
+    /** Allowed where every open element is an {@code mrow}, which can be closed and reopened. */
+    @Override
+    public Optional<Integer> openGroups(String written) {
+        Deque<String> open = new ArrayDeque<>();
+        Matcher tag = TAG.matcher(written);
+        while (tag.find()) {
+            if (tag.group(3).equals("/")) {
+                continue;
+            }
+            if (tag.group(1).equals("/")) {
+                open.pop();
+            } else {
+                open.push(tag.group(2));
+            }
+        }
+        return open.stream().allMatch("mrow"::equals) ? Optional.of(open.size()) : Optional.empty();
+    }
+
+    @Override
+    public String closeGroups(int count) {
+        return "</mrow>".repeat(count);
+    }
+
+    @Override
+    public String reopenGroups(int count) {
+        return "<mrow>".repeat(count);
     }
 }
