@@ -12,6 +12,7 @@ import dev.rootform.export.document.JsonRenderer;
 import dev.rootform.export.document.LatexRenderer;
 import dev.rootform.export.document.MathMlRenderer;
 import dev.rootform.export.document.TextRenderer;
+import dev.rootform.export.html.HtmlRenderer;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -20,7 +21,8 @@ import java.util.function.BiFunction;
 
 /**
  * The exporters by format name: {@code text}, {@code json}, {@code latex}, {@code mathml},
- * {@code java}, {@code c}.
+ * {@code html}, {@code java}, {@code c}. The report page ({@code html}) draws plots from
+ * {@code Report.plots()}, present when the solve ran with {@code Options.plots}.
  *
  * <pre>{@code
  * String json = Exporters.byName("json").orElseThrow().render(report, CodeNames.defaults()).text();
@@ -29,13 +31,7 @@ import java.util.function.BiFunction;
  * @since 0.2
  */
 public final class Exporters {
-    private static final Map<String, Exporter> BY_NAME = index(List.of(
-            new Named("text", false, (r, n) -> Rendering.of(TextRenderer.render(r))),
-            new Named("json", false, (r, n) -> Rendering.of(JsonRenderer.render(r))),
-            new Named("latex", false, (r, n) -> Rendering.of(LatexRenderer.render(r))),
-            new Named("mathml", false, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
-            new Named("java", true, (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
-            new Named("c", true, Exporters::c)));
+    private static final Map<String, Exporter> BY_NAME = table(DocumentOptions.defaults());
 
     private Exporters() {
     }
@@ -43,6 +39,11 @@ public final class Exporters {
     /** The exporter of {@code format}, or empty for an unknown name. */
     public static Optional<Exporter> byName(String format) {
         return Optional.ofNullable(BY_NAME.get(format));
+    }
+
+    /** The exporter of {@code format} laid out as {@code options} say, or empty for an unknown name. */
+    public static Optional<Exporter> byName(String format, DocumentOptions options) {
+        return Optional.ofNullable(table(options).get(format));
     }
 
     /** Every format name, in a fixed order. */
@@ -55,13 +56,24 @@ public final class Exporters {
         return new Rendering(c.source(), c.header());
     }
 
+    private static Map<String, Exporter> table(DocumentOptions o) {
+        return index(List.of(
+                new Named("text", false, (r, n) -> Rendering.of(TextRenderer.render(r))),
+                new Named("json", false, (r, n) -> Rendering.of(JsonRenderer.render(r))),
+                new Named("latex", false, (r, n) -> Rendering.of(o.standalone() ? LatexRenderer.document(r) : LatexRenderer.render(r))),
+                new Named("mathml", false, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
+                new Named("html", o.withCode().isPresent(), (r, n) -> Rendering.of(HtmlRenderer.render(r, o.withCode(), n))),
+                new Named("java", true, (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
+                new Named("c", true, Exporters::c)));
+    }
+
     private static Map<String, Exporter> index(List<Exporter> exporters) {
         Map<String, Exporter> map = new LinkedHashMap<>();
         exporters.forEach(e -> map.put(e.format(), e));
         return java.util.Collections.unmodifiableMap(map);
     }
 
-    /** An exporter that delegates to a renderer; code formats need a fitted solution. */
+    /** An exporter that delegates to a renderer; code formats (and a page with code) need a fitted solution. */
     private record Named(String format, boolean code, BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
         @Override
         public Optional<String> refusal(Report report) {

@@ -20,8 +20,6 @@ public final class MathMlNotation implements Notation {
     /** U+2061 FUNCTION APPLICATION, between a function name and its argument. */
     private static final String APPLY = "<mo>&#x2061;</mo>";
 
-    private static final String FENCE_OPEN = "<mo fence=\"true\" form=\"prefix\" lspace=\"0\" rspace=\"0\">(</mo>";
-    private static final String FENCE_CLOSE = "<mo fence=\"true\" form=\"postfix\" lspace=\"0\" rspace=\"0\">)</mo>";
     /** Primes U+2032, U+2033, U+2034 for the first three derivatives. */
     /** An element tag: closing slash, name, self-closing slash. */
     private static final Pattern TAG = Pattern.compile("<(/?)([a-z]+)[^>]*?(/?)>");
@@ -40,9 +38,11 @@ public final class MathMlNotation implements Notation {
         return "<msqrt>" + radicand + "</msqrt>";
     }
 
+    /** A dot only before a number or a fraction, where juxtaposition would misread; else invisible times. */
     @Override
     public String times(String left, String right) {
-        return left + "<mo>&#x22C5;</mo>" + right;
+        boolean number = right.startsWith("<mn") || right.startsWith("<mfrac") || right.startsWith("<mrow><mn");
+        return left + (number ? "<mo>&#x22C5;</mo>" : INVISIBLE_TIMES) + right;
     }
 
     @Override
@@ -60,10 +60,15 @@ public final class MathMlNotation implements Notation {
         return "<mi>" + name + "</mi>" + APPLY + parens(argument);
     }
 
-    /** Fences with no side spacing, so {@code cos(3t)} and {@code y(t)} sit tight. */
+    /**
+     * Fences that stretch only around a fraction: a stretchy fence without a math font gets side
+     * space in browsers, so {@code cos(3t)} and {@code y(t)} keep plain, tight parentheses.
+     */
     @Override
     public String parens(String inner) {
-        return "<mrow>" + FENCE_OPEN + inner + FENCE_CLOSE + "</mrow>";
+        String stretchy = inner.contains("<mfrac") ? "true" : "false";
+        return "<mrow><mo fence=\"true\" stretchy=\"" + stretchy + "\" form=\"prefix\">(</mo>" + inner
+                + "<mo fence=\"true\" stretchy=\"" + stretchy + "\" form=\"postfix\">)</mo></mrow>";
     }
 
     @Override
@@ -130,7 +135,7 @@ public final class MathMlNotation implements Notation {
         if (order == 0) {
             return function;
         }
-        String mark = order <= 3 ? "<mo lspace=\"0\" rspace=\"0\">" + PRIMES[order - 1] + "</mo>" : parens(number(Integer.toString(order)));
+        String mark = order <= 3 ? "<mo>" + PRIMES[order - 1] + "</mo>" : parens(number(Integer.toString(order)));
         return "<msup>" + row(function) + row(mark) + "</msup>";
     }
 
@@ -141,8 +146,8 @@ public final class MathMlNotation implements Notation {
 
     @Override
     public String indexed(String sequence, String index) {
-        return sequence + "<mrow><mo fence=\"true\" lspace=\"0\" rspace=\"0\">[</mo>" + index
-                + "<mo fence=\"true\" lspace=\"0\" rspace=\"0\">]</mo></mrow>";
+        return sequence + "<mrow><mo fence=\"true\" stretchy=\"false\">[</mo>" + index
+                + "<mo fence=\"true\" stretchy=\"false\">]</mo></mrow>";
     }
 
     @Override
