@@ -18,7 +18,8 @@ import java.util.Objects;
 /**
  * The mathematical rows of an answer in one notation, each a label and its lines (long rows
  * broken at + and − by a {@link LineBreaker}): the equation, the conditions, the characteristic
- * polynomial and its factors, the solution, the numerically fixed constants with their accuracy,
+ * polynomial and its factors, the solution, the numerically fixed constants with their accuracy
+ * (significant digits, all correct),
  * and where the solution holds. LaTeX, MathML and the report page lay these rows out.
  *
  * @since 0.3
@@ -67,8 +68,8 @@ public final class FormulaRows {
         if (!r.analysis().constantValues().isEmpty()) {
             List<String> constants = new ArrayList<>();
             r.analysis().constantValues().forEach((name, value) -> constants.add(n.relation(n.constant(name), "≈",
-                    decimal(n, Numbers.decimal(value, r.digits())))));
-            rows.add(new Row("constants (" + r.digits() + " significant digits)", constants));
+                    decimal(n, Numbers.decimal(value, r.digits()))) + n.text(" (" + r.digits() + " digits)")));
+            rows.add(new Row("constants", constants));
         }
         rows.add(new Row("valid for", List.of(validity(f, n, written, separator))));
         return rows;

@@ -19,7 +19,7 @@ import java.util.List;
  */
 public final class LatexRenderer {
     /** The widest line of a row, in characters of the plain form (A4 at 10 pt, after the label column). */
-    static final int WIDTH = 44;
+    static final int WIDTH = 50;
 
     private LatexRenderer() {
     }

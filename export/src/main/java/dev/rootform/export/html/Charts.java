@@ -41,6 +41,8 @@ final class Charts {
     static final Color MARK = new Color(0xb3, 0x1d, 0x28);
     static final Color BOUNDARY = new Color(0x6e, 0x77, 0x81);
     private static final int WIDTH = 720;
+    /** The complex plane is drawn square, so the unit circle stays round. */
+    private static final int SQUARE = 440;
     private static final Font FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 13);
 
     private Charts() {
@@ -84,6 +86,7 @@ final class Charts {
                 plot.setRenderer(index++, dots);
             } else {
                 XYLineAndShapeRenderer line = new XYLineAndShapeRenderer(true, p.stems());
+                line.setDrawSeriesLineAsPath(true);
                 line.setSeriesPaint(0, color);
                 line.setSeriesStroke(0, new BasicStroke(s.name().startsWith("solution") ? 2.2f : 1.5f));
                 line.setSeriesShape(0, new Ellipse2D.Double(-2.5, -2.5, 5, 5));
@@ -93,7 +96,7 @@ final class Charts {
         if (!p.logScale()) {
             plot.addRangeMarker(new ValueMarker(0, BOUNDARY, new BasicStroke(0.8f)));
         }
-        return svg(chart(plot, true), 330, "time");
+        return svg(chart(plot, true), WIDTH, 330, "time");
     }
 
     /**
@@ -151,7 +154,7 @@ final class Charts {
             plot.addDomainMarker(axis);
         }
         plot.addRangeMarker(new ValueMarker(0, BOUNDARY, new BasicStroke(0.6f)));
-        return svg(chart(plot, true), 420, "roots");
+        return svg(chart(plot, true), SQUARE, SQUARE + 40, "roots");
     }
 
     /** Magnitude (dB) above phase (degrees) against frequency, the input frequencies marked. */
@@ -161,7 +164,7 @@ final class Charts {
         plot.setGap(12);
         plot.add(panel(p.magnitudeDb(), "|H| (dB)", p.inputs()), 1);
         plot.add(panel(p.phaseDegrees(), "arg H (°)", p.inputs()), 1);
-        return svg(chart(plot, false), 420, "frequency");
+        return svg(chart(plot, false), WIDTH, 420, "frequency");
     }
 
     /** A log axis ticked once per decade, labelled as plain numbers. */
@@ -176,6 +179,7 @@ final class Charts {
         NumberAxis axis = new NumberAxis(label);
         axis.setAutoRangeIncludesZero(false);
         XYLineAndShapeRenderer line = new XYLineAndShapeRenderer(true, false);
+        line.setDrawSeriesLineAsPath(true);
         line.setSeriesPaint(0, SOLUTION);
         line.setSeriesStroke(0, new BasicStroke(2f));
         XYPlot plot = new XYPlot(collection(List.of(new Series(label, samples))), null, axis, line);
@@ -247,10 +251,12 @@ final class Charts {
         plot.setOutlinePaint(BOUNDARY);
     }
 
-    private static String svg(JFreeChart chart, int height, String prefix) {
-        SVGGraphics2D g2 = new SVGGraphics2D(WIDTH, height);
+    /** The chart as an SVG element that scales down to the page width, at most its own width. */
+    private static String svg(JFreeChart chart, int width, int height, String prefix) {
+        SVGGraphics2D g2 = new SVGGraphics2D(width, height);
         g2.setDefsKeyPrefix(prefix);
-        chart.draw(g2, new Rectangle(0, 0, WIDTH, height));
-        return g2.getSVGElement(prefix + "-plot", false, new ViewBox(0, 0, WIDTH, height), null, null);
+        chart.draw(g2, new Rectangle(0, 0, width, height));
+        String svg = g2.getSVGElement(prefix + "-plot", false, new ViewBox(0, 0, width, height), null, null);
+        return svg.replaceFirst("<svg ", "<svg style=\"max-width: " + width + "px\" ");
     }
 }

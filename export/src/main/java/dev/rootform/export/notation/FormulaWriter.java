@@ -149,7 +149,7 @@ public final class FormulaWriter {
         if (negative) {
             parts.replaceAll(Signed::flipped);
         }
-        String group = sum(parts);
+        String group = (marked ? LineBreaker.MARK : "") + sum(parts);
         boolean bare = !negative && outer.stream().allMatch(String::isEmpty);
         return product(ONE, arrange(bare ? group : n.parens(group), outer, basisFirst))
                 .map(s -> new Signed(negative, s.body()));

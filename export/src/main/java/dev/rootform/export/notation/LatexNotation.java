@@ -141,4 +141,9 @@ public final class LatexNotation implements Notation {
         }
         return found;
     }
+
+    @Override
+    public String text(String words) {
+        return "\\text{" + words + "}";
+    }
 }

@@ -68,13 +68,13 @@ public final class LineBreaker {
         StringBuilder line = new StringBuilder(parts[0]);
         StringBuilder sofar = new StringBuilder(parts[0]);
         int used = lead + widths[0].length();
-        String reopen = "";
+        boolean split = false;
         for (int i = 1; i < parts.length; i++) {
             Optional<Integer> open = n.openGroups(sofar.toString());
             if (used + widths[i].length() > width && open.isPresent() && used > lead) {
                 lines.add(line + n.closeGroups(open.get()));
-                reopen = n.reopenGroups(open.get());
-                line = new StringBuilder(reopen);
+                line = new StringBuilder(n.reopenGroups(open.get()));
+                split |= open.get() > 0;
                 used = 0;
             }
             line.append(parts[i]);
@@ -82,6 +82,6 @@ public final class LineBreaker {
             used += widths[i].length();
         }
         lines.add(line.toString());
-        return lines;
+        return split ? lines.stream().map(n::unpairedFences).toList() : lines;
     }
 }

@@ -187,4 +187,15 @@ public final class MathMlNotation implements Notation {
     public String reopenGroups(int count) {
         return "<mrow>".repeat(count);
     }
+
+    @Override
+    public String text(String words) {
+        return "<mtext>" + Xml.escape(words) + "</mtext>";
+    }
+
+    /** A stretchy fence stretches to its own row only, so a fence split from its partner is fixed-size. */
+    @Override
+    public String unpairedFences(String line) {
+        return line.replace("stretchy=\"true\"", "stretchy=\"false\"");
+    }
 }

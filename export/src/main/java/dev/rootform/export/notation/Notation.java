@@ -110,4 +110,17 @@ public interface Notation {
     default String reopenGroups(int count) {
         return "";
     }
+
+    /** Words inside a formula, e.g. {@code (30 digits)}. */
+    default String text(String words) {
+        return words;
+    }
+
+    /**
+     * A line of a formula broken inside parentheses, with fences that no longer pair up across
+     * lines made fixed-size where the notation needs it; as is by default.
+     */
+    default String unpairedFences(String line) {
+        return line;
+    }
 }

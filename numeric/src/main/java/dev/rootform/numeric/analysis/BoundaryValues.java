@@ -17,6 +17,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.function.DoubleUnaryOperator;
 import java.util.function.IntFunction;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
@@ -243,30 +244,29 @@ final class BoundaryValues {
     }
 
     /**
-     * The particular (steady) part at t: the exact particular solution plus the numerically fixed
-     * constants of the closed form's particular terms (a trial form's P1..).
+     * The solution in double precision, for plots: the whole of it, or only its particular
+     * (steady) part — the exact particular solution plus the numerically fixed constants of the
+     * closed form's particular terms (a trial form's P1..).
      */
-    Apfloat steady(Apfloat t) {
+    DoubleUnaryOperator inDoubles(boolean steadyOnly) {
         Set<String> particularNames = new HashSet<>();
         solution.closedForm().particularTerms().forEach(term -> term.coefficients().forEach(c -> {
             if (c instanceof Coefficient.Free free) {
                 particularNames.add(free.name());
             }
         }));
-        Apfloat sum = particular.map(p -> p.derivative(0, t)).orElse(Apfloat.ZERO);
+        List<DoubleUnaryOperator> parts = new ArrayList<>();
+        particular.ifPresent(p -> parts.add(p.inDoubles()));
         List<String> names = List.copyOf(constants.keySet());
         List<Apfloat> values = List.copyOf(constants.values());
         for (int j = 0; j < values.size(); j++) {
-            if (particularNames.contains(names.get(j))) {
-                sum = sum.add(values.get(j).multiply(basis.get(first + j).derivative(0, t)));
+            if (!steadyOnly || particularNames.contains(names.get(j))) {
+                double c = values.get(j).doubleValue();
+                DoubleUnaryOperator f = basis.get(first + j).inDoubles();
+                parts.add(t -> c * f.applyAsDouble(t));
             }
         }
-        return sum;
-    }
-
-    /** The working precision of the constants. */
-    long precision() {
-        return precision;
+        return t -> parts.stream().mapToDouble(f -> f.applyAsDouble(t)).sum();
     }
 
     /** Each condition re-evaluated with the solved constants at the working precision. */

@@ -18,7 +18,7 @@ import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.function.Function;
+import java.util.function.DoubleUnaryOperator;
 import java.util.function.LongFunction;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
@@ -29,11 +29,12 @@ import org.apfloat.ApfloatMath;
  * Samples a solution for the report page's plots: over a {@link TimeRange}, the whole solution
  * and, for a forced equation, its transient and steady parts (the closed form's split: powers
  * below a root's multiplicity in χ are transient); sequences exactly at each index, functions by
- * their mode sums at {@value #PRECISION} digits; and the frequency response around the natural and
- * input frequencies. Approximate (double precision), for drawing only.
+ * their mode sums (weights and rates from {@value #PRECISION}-digit roots, summed in double
+ * precision); and the frequency response around the natural and input frequencies. Approximate
+ * (double precision), for drawing only.
  */
 final class PlotSampler {
-    /** Working digits of the function samples: far beyond what a picture resolves. */
+    /** Working digits of the roots and weights behind the function samples. */
     static final long PRECISION = 30;
     static final int FUNCTION_SAMPLES = 500;
     static final int FREQUENCY_SAMPLES = 300;
@@ -113,29 +114,22 @@ final class PlotSampler {
     /** [total] or [total, steady] at {@link #FUNCTION_SAMPLES} evenly spaced points. */
     private static List<List<Sample>> function(Solution s, Optional<BoundaryValues> bvp, TimeRange range, boolean forced,
             RootCache cache) {
-        Function<Apfloat, Apfloat> total;
-        Optional<Function<Apfloat, Apfloat>> steady;
-        long precision;
+        DoubleUnaryOperator total;
+        Optional<DoubleUnaryOperator> steady;
         if (bvp.isPresent()) {
-            BoundaryValues b = bvp.get();
-            precision = b.precision();
-            total = t -> b.derivative(0, t);
-            steady = forced ? Optional.of(b::steady) : Optional.empty();
+            total = bvp.get().inDoubles(false);
+            steady = forced ? Optional.of(bvp.get().inDoubles(true)) : Optional.empty();
         } else {
             ExactSolution e = s.exact().orElseThrow(() -> new IllegalStateException("no values for " + s.closedForm()));
-            precision = PRECISION;
-            ModeSum all = ModeSum.of(e, cache, PRECISION);
-            total = t -> all.derivative(0, t);
-            steady = forced ? Optional.of(ModeSum.of(steadyPart(s, e), cache, PRECISION)).map(m -> t -> m.derivative(0, t))
-                    : Optional.empty();
+            total = ModeSum.of(e, cache, PRECISION).inDoubles();
+            steady = forced ? Optional.of(ModeSum.of(steadyPart(s, e), cache, PRECISION).inDoubles()) : Optional.empty();
         }
         List<Sample> all = new ArrayList<>();
         List<Sample> particular = new ArrayList<>();
         for (int i = 0; i < FUNCTION_SAMPLES; i++) {
             double x = range.from() + (range.to() - range.from()) * i / (FUNCTION_SAMPLES - 1);
-            Apfloat t = new Apfloat(x, precision);
-            all.add(new Sample(x, total.apply(t).doubleValue()));
-            steady.ifPresent(f -> particular.add(new Sample(x, f.apply(t).doubleValue())));
+            all.add(new Sample(x, total.applyAsDouble(x)));
+            steady.ifPresent(f -> particular.add(new Sample(x, f.applyAsDouble(x))));
         }
         return steady.isPresent() ? List.of(all, particular) : List.of(all);
     }
