@@ -31,7 +31,7 @@ import java.util.stream.Stream;
  */
 public final class ReportPage {
     /** The widest line of a formula row, in plain characters (the page's text column). */
-    static final int WIDTH = 62;
+    static final int WIDTH = 76;
     private static final List<String> PROBLEM_ROWS = List.of("equation", "conditions", "characteristic", "factored");
 
     private ReportPage() {

@@ -20,7 +20,7 @@ public final class MathMlNotation implements Notation {
     /** U+2061 FUNCTION APPLICATION, between a function name and its argument. */
     private static final String APPLY = "<mo>&#x2061;</mo>";
 
-    /** Primes U+2032, U+2033, U+2034 for the first three derivatives. */
+    /** Primes U+2032, U+2033, U+2034 for the first three derivatives (the glyphs are already raised). */
     /** An element tag: closing slash, name, self-closing slash. */
     private static final Pattern TAG = Pattern.compile("<(/?)([a-z]+)[^>]*?(/?)>");
     private static final String[] PRIMES = {"&#x2032;", "&#x2033;", "&#x2034;"};
@@ -135,8 +135,10 @@ public final class MathMlNotation implements Notation {
         if (order == 0) {
             return function;
         }
-        String mark = order <= 3 ? "<mo>" + PRIMES[order - 1] + "</mo>" : parens(number(Integer.toString(order)));
-        return "<msup>" + row(function) + row(mark) + "</msup>";
+        if (order <= 3) {
+            return "<mrow>" + function + "<mo lspace=\"0\" rspace=\"0\">" + PRIMES[order - 1] + "</mo></mrow>";
+        }
+        return "<msup>" + row(function) + row(parens(number(Integer.toString(order)))) + "</msup>";
     }
 
     @Override
