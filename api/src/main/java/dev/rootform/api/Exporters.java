@@ -22,10 +22,18 @@ import java.util.function.BiFunction;
 /**
  * The exporters by format name: {@code text}, {@code json}, {@code latex}, {@code mathml},
  * {@code html}, {@code java}, {@code c}. The report page ({@code html}) draws plots from
- * {@code Report.plots()}, present when the solve ran with {@code Options.plots}.
+ * {@code Report.plots()}, present when the solve ran with {@code Options.plots}; how LaTeX and the
+ * page are laid out ({@code --standalone}, {@code --with-code}) is a {@link DocumentOptions}. Each exporter only formats a finished {@link Report}; all of them are
+ * stateless and thread-safe. The code formats ({@code java}, {@code c}) cannot write every answer
+ * (a general solution has free constants): {@link Exporter#refusal(Report)} says why, and
+ * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report.
+ *
+ * <p>The sum of the first n odd numbers, solved and written as LaTeX:
  *
  * <pre>{@code
- * String json = Exporters.byName("json").orElseThrow().render(report, CodeNames.defaults()).text();
+ * Report report = Rootform.solve(SolveRequest.of("x[n+1] = x[n] + 2n + 1; x[0] = 0")).answer().orElseThrow();
+ * Exporter latex = Exporters.byName("latex").orElseThrow();
+ * System.out.println(latex.render(report, CodeNames.defaults()).text());
  * }</pre>
  *
  * @since 0.2
@@ -36,17 +44,32 @@ public final class Exporters {
     private Exporters() {
     }
 
-    /** The exporter of {@code format}, or empty for an unknown name. */
+    /**
+     * The exporter of one format.
+     *
+     * @param format a name from {@link #names()}, e.g. {@code "json"}
+     * @return the exporter, or empty for an unknown name
+     */
     public static Optional<Exporter> byName(String format) {
         return Optional.ofNullable(BY_NAME.get(format));
     }
 
-    /** The exporter of {@code format} laid out as {@code options} say, or empty for an unknown name. */
+    /**
+     * The exporter of one format, laid out as {@code options} say.
+     *
+     * @param format a name from {@link #names()}, e.g. {@code "latex"}
+     * @param options a standalone LaTeX document, the code on the report page
+     * @return the exporter, or empty for an unknown name
+     */
     public static Optional<Exporter> byName(String format, DocumentOptions options) {
         return Optional.ofNullable(table(options).get(format));
     }
 
-    /** Every format name, in a fixed order. */
+    /**
+     * Every format name.
+     *
+     * @return the names in a fixed order, {@code text} first
+     */
     public static List<String> names() {
         return List.copyOf(BY_NAME.keySet());
     }
