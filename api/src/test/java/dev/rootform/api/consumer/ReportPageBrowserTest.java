@@ -5,6 +5,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import dev.rootform.api.DocumentOptions;
+import dev.rootform.api.Exporters;
+import dev.rootform.api.Options;
+import dev.rootform.api.Rootform;
+import dev.rootform.api.SolveRequest;
+import dev.rootform.export.CodeNames;
 import dev.rootform.export.Report;
 import dev.rootform.numeric.plot.TimePlot;
 import java.nio.file.Files;
@@ -50,7 +55,11 @@ class ReportPageBrowserTest {
 
     @Test
     void pageWithCodeShowsItInABlock() throws Exception {
-        String html = PageCorpus.render(PageCorpus.UNDERDAMPED, "html", new DocumentOptions(false, Optional.of("c")));
+        PageCorpus.Case c = PageCorpus.UNDERDAMPED;
+        Report report = Rootform.solve(SolveRequest.of(c.problem()).with(Options.builder().points(c.points()).plots(true).code(true)
+                .build())).answer().orElseThrow();
+        String html = Exporters.byName("html", new DocumentOptions(false, Optional.of("c"))).orElseThrow()
+                .render(report, CodeNames.defaults()).text();
         assertTrue(html.contains("<pre class=\"code\" data-language=\"c\">"), "no code block");
         assertTrue(html.contains("double rootform_value(double t)"), "the C function is missing");
         BrowserProbe.load("html", "forced-underdamped-with-c", html);

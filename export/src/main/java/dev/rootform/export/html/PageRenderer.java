@@ -6,14 +6,14 @@ import gg.jte.output.StringOutput;
 
 /**
  * Writes a {@link Page} as one self-contained HTML file from the precompiled jte template
- * {@code page.jte} (src/main/jte): inline CSS for screen and print (A4 and Letter), MathML and SVG
+ * {@code page.jte} (src/main/jte, compiled by jte's Maven plugin into
+ * {@code gg.jte.generated.precompiled}): inline CSS for screen and print (A4 and Letter), MathML and SVG
  * inline, no scripts and no network access.
  *
  * @since 0.3
  */
 public final class PageRenderer {
-    private static final TemplateEngine ENGINE = TemplateEngine.createPrecompiled(null, ContentType.Html, null,
-            "dev.rootform.export.html.templates");
+    private static final TemplateEngine ENGINE = TemplateEngine.createPrecompiled(ContentType.Html);
 
     private PageRenderer() {
     }
