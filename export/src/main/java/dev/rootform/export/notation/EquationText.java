@@ -1,23 +1,18 @@
 package dev.rootform.export.notation;
 
 import dev.rootform.symbolic.algebra.Factor;
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
-import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.closedform.ClosedForm;
-import dev.rootform.symbolic.closedform.Coefficient;
-import dev.rootform.symbolic.closedform.Surd;
-import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
-import java.util.ArrayList;
 import java.util.List;
 
 /**
  * The problem in ordinary notation: {@code y'' + 2y' + 5y = 0}, {@code x[n+2] - x[n+1] - x[n] = 0},
- * conditions such as {@code y'(0) = 0}, and the factored characteristic polynomial in λ.
+ * conditions such as {@code y'(0) = 0}, and the factored characteristic polynomial in λ: the plain
+ * text form of {@link EquationFormula}.
  *
  * @since 0.1
  */

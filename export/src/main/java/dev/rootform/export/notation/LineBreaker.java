@@ -1,5 +1,8 @@
 package dev.rootform.export.notation;
 
+import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.model.LinearEquation;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -31,18 +34,18 @@ public final class LineBreaker {
     }
 
     /** The right-hand side of a closed form in lines. */
-    public List<String> formula(dev.rootform.symbolic.closedform.ClosedForm f) {
-        return lines(new FormulaWriter(PlainNotation.INSTANCE, f, true).formula(), new FormulaWriter(n, f, true).formula(), 0);
+    public List<String> formula(ClosedForm f) {
+        return lines(new FormulaWriter(PlainNotation.INSTANCE, f, true).formula(), new FormulaWriter(n, f, true).formula());
     }
 
     /** The equation in lines. */
-    public List<String> equation(dev.rootform.symbolic.model.LinearEquation eq) {
-        return lines(new EquationFormula(PlainNotation.INSTANCE, true).equation(eq), new EquationFormula(n, true).equation(eq), 0);
+    public List<String> equation(LinearEquation eq) {
+        return lines(new EquationFormula(PlainNotation.INSTANCE, true).equation(eq), new EquationFormula(n, true).equation(eq));
     }
 
     /** A polynomial in descending powers of λ, in lines. */
-    public List<String> polynomial(dev.rootform.symbolic.algebra.RationalPolynomial p) {
-        return lines(EquationFormula.polynomial(PlainNotation.INSTANCE, p), EquationFormula.polynomial(n, p), 0);
+    public List<String> polynomial(RationalPolynomial p) {
+        return lines(EquationFormula.polynomial(PlainNotation.INSTANCE, p), EquationFormula.polynomial(n, p));
     }
 
     /**
@@ -50,15 +53,14 @@ public final class LineBreaker {
      * is measured by the pieces' plain forms.
      */
     public List<String> list(List<String> plain, List<String> written, String separator) {
-        return lines(String.join(", " + MARK, plain), String.join(separator + MARK, written), 0);
+        return lines(String.join(", " + MARK, plain), String.join(separator + MARK, written));
     }
 
     /**
      * @param plain the plain form with marks
      * @param written the same in the notation, with marks in the same places
-     * @param lead characters already on the first line before the formula
      */
-    private List<String> lines(String plain, String written, int lead) {
+    private List<String> lines(String plain, String written) {
         String[] widths = plain.split(MARK, -1);
         String[] parts = written.split(MARK, -1);
         if (widths.length != parts.length) {
@@ -67,11 +69,11 @@ public final class LineBreaker {
         List<String> lines = new ArrayList<>();
         StringBuilder line = new StringBuilder(parts[0]);
         StringBuilder sofar = new StringBuilder(parts[0]);
-        int used = lead + widths[0].length();
+        int used = widths[0].length();
         boolean split = false;
         for (int i = 1; i < parts.length; i++) {
             Optional<Integer> open = n.openGroups(sofar.toString());
-            if (used + widths[i].length() > width && open.isPresent() && used > lead) {
+            if (used + widths[i].length() > width && open.isPresent() && used > 0) {
                 lines.add(line + n.closeGroups(open.get()));
                 line = new StringBuilder(n.reopenGroups(open.get()));
                 split |= open.get() > 0;
