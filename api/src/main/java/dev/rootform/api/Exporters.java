@@ -26,7 +26,10 @@ import java.util.function.BiFunction;
  * page are laid out ({@code --standalone}, {@code --with-code}) is a {@link DocumentOptions}. Each exporter only formats a finished {@link Report}; all of them are
  * stateless and thread-safe. The code formats ({@code java}, {@code c}) cannot write every answer
  * (a general solution has free constants): {@link Exporter#refusal(Report)} says why, and
- * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report.
+ * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report. The C exporter
+ * writes the variant that {@link CodeNames#c()} names ({@code double} or {@code float}, with or
+ * without the math library); {@link Exporter#refusal(Report, CodeNames)} also says when that variant
+ * cannot evaluate the answer (C without libm for a closed form that needs cos or exp).
  *
  * <p>The sum of the first n odd numbers, solved and written as LaTeX:
  *
@@ -39,6 +42,7 @@ import java.util.function.BiFunction;
  * @since 0.2
  */
 public final class Exporters {
+    private static final BiFunction<Report, CodeNames, Optional<String>> ANY = (r, n) -> Optional.empty();
     private static final Map<String, Exporter> BY_NAME = table(DocumentOptions.defaults());
 
     private Exporters() {
@@ -75,19 +79,22 @@ public final class Exporters {
     }
 
     private static Rendering c(Report report, CodeNames names) {
-        CSource c = CRenderer.render(report, names.function(), names.headerFile());
+        CSource c = CRenderer.render(report, names.function(), names.headerFile(), names.c());
         return new Rendering(c.source(), c.header());
     }
 
     private static Map<String, Exporter> table(DocumentOptions o) {
+        BiFunction<Report, CodeNames, Optional<String>> code = (r, n) -> CodeRequests.refusal(r);
+        BiFunction<Report, CodeNames, Optional<String>> c = (r, n) -> CRenderer.refusal(r, n.c());
         return index(List.of(
-                new Named("text", false, (r, n) -> Rendering.of(TextRenderer.render(r))),
-                new Named("json", false, (r, n) -> Rendering.of(JsonRenderer.render(r))),
-                new Named("latex", false, (r, n) -> Rendering.of(o.standalone() ? LatexRenderer.document(r) : LatexRenderer.render(r))),
-                new Named("mathml", false, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
-                new Named("html", o.withCode().isPresent(), (r, n) -> Rendering.of(HtmlRenderer.render(r, o.withCode(), n))),
-                new Named("java", true, (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
-                new Named("c", true, Exporters::c)));
+                new Named("text", ANY, (r, n) -> Rendering.of(TextRenderer.render(r))),
+                new Named("json", ANY, (r, n) -> Rendering.of(JsonRenderer.render(r))),
+                new Named("latex", ANY, (r, n) -> Rendering.of(o.standalone() ? LatexRenderer.document(r) : LatexRenderer.render(r))),
+                new Named("mathml", ANY, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
+                new Named("html", o.withCode().map(language -> language.equals("c") ? c : code).orElse(ANY),
+                        (r, n) -> Rendering.of(HtmlRenderer.render(r, o.withCode(), n))),
+                new Named("java", code, (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
+                new Named("c", c, Exporters::c)));
     }
 
     private static Map<String, Exporter> index(List<Exporter> exporters) {
@@ -96,11 +103,17 @@ public final class Exporters {
         return java.util.Collections.unmodifiableMap(map);
     }
 
-    /** An exporter that delegates to a renderer; code formats (and a page with code) need a fitted solution. */
-    private record Named(String format, boolean code, BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
+    /** An exporter that delegates to a renderer; code formats (and a page with code) need a fitted solution with its code model. */
+    private record Named(String format, BiFunction<Report, CodeNames, Optional<String>> refusals,
+            BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
         @Override
         public Optional<String> refusal(Report report) {
-            return code ? CodeRequests.refusal(report) : Optional.empty();
+            return refusal(report, CodeNames.defaults());
+        }
+
+        @Override
+        public Optional<String> refusal(Report report, CodeNames names) {
+            return refusals.apply(report, names);
         }
 
         @Override

@@ -1,8 +1,9 @@
 package dev.rootform.export.code;
 
+import dev.rootform.export.CType;
+import dev.rootform.export.CVariant;
 import dev.rootform.export.CodeFacts;
 import dev.rootform.export.NumericForm;
-import dev.rootform.export.Wave;
 import dev.rootform.export.Report;
 import dev.rootform.export.notation.CommentText;
 import dev.rootform.export.notation.Numbers;
@@ -10,12 +11,14 @@ import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.solve.Solution;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Collectors;
 
 /**
  * The opening comment of generated code, as plain ASCII lines that cannot end a comment: the
  * {@link CommentText#summary} (equation, conditions, closed form, validity range), the constants
- * fixed numerically, the input range for double evaluation, the measured accuracy and the caution.
+ * fixed numerically, the input range for floating-point evaluation in the code's variant, the
+ * measured accuracy, lines on further functions (exact terms) and the caution.
  *
  * @since 0.2
  */
@@ -23,29 +26,48 @@ final class CodeHeader {
     private CodeHeader() {
     }
 
-    /** The header lines for code that evaluates {@code form} (facts measured on it); without numeric lines when facts are absent. */
-    static List<String> lines(Report r, NumericForm form, CodeFacts facts) {
+    /** The header lines for the Java code, which evaluates {@code form} in double with StrictMath ({@code facts}), plus {@code more}. */
+    static List<String> lines(Report r, NumericForm form, CodeFacts facts, List<String> more) {
+        return lines(r, form, Optional.of(facts), CVariant.DEFAULT, more);
+    }
+
+    /**
+     * The header lines for code of {@code variant} that evaluates {@code form}: with the numeric lines
+     * of {@code facts} when the code has a floating-point value function, then {@code more} (lines on
+     * further functions), then the caution.
+     */
+    static List<String> lines(Report r, NumericForm form, Optional<CodeFacts> facts, CVariant variant, List<String> more) {
         Solution s = r.solution();
         List<String> out = new ArrayList<>(CommentText.summary(s));
         out.addAll(constants(r));
-        ClosedForm f = s.closedForm();
-        String v = f.variable();
-        if (form.differential()) {
-            out.add("Double evaluation: every term stays finite and the largest a normal double for "
-                    + String.format("%.6g <= %s <= %.6g", facts.low() + form.origin(), v, facts.high() + form.origin())
-                    + (facts.high() >= CodeFacts.CAP ? " (searched to |" + v + " - t0| = 1e15)" : "") + ".");
-        } else {
-            out.add("Double evaluation: every term stays finite and the largest a normal double for "
-                    + form.first() + " <= " + v + " <= " + String.format("%.0f", facts.high())
-                    + (facts.high() >= CodeFacts.CAP ? " (searched to 1e15)" : "") + ".");
-        }
-        out.add(String.format("Accuracy measured by rootform when it generated this code: max relative error %s against "
-                + (r.analysis().constantValues().isEmpty() ? "the exact values" : "values from the closed form at 40 digits")
-                + " at %d points (%s), with StrictMath (a C math library may differ in the last bits; "
-                + "points where the exact value is 0 are left out).", statedError(facts), facts.points().size(),
-                facts.points().stream().map(Numbers::point).collect(Collectors.joining(", "))));
+        facts.ifPresent(f -> out.addAll(numeric(r, form, f, variant)));
+        out.addAll(more);
         out.add(CommentText.CAUTION);
         return CommentText.wrap(out);
+    }
+
+    /** The range and accuracy lines of floating-point evaluation in {@code variant}. */
+    private static List<String> numeric(Report r, NumericForm form, CodeFacts facts, CVariant variant) {
+        CType type = variant.type();
+        String v = r.solution().closedForm().variable();
+        String cap = type == CType.DOUBLE ? "1e15" : "2^24 = 16777216";
+        String opening = (type == CType.DOUBLE ? "Double" : "Float") + " evaluation: every term stays finite and the largest a normal "
+                + type.keyword() + " for ";
+        String range = form.differential()
+                ? opening + String.format("%.6g <= %s <= %.6g", facts.low() + form.origin(), v, facts.high() + form.origin())
+                        + (facts.high() >= type.cap() ? " (searched to |" + v + " - t0| = " + cap + ")" : "") + "."
+                : opening + form.first() + " <= " + v + " <= " + String.format("%.0f", facts.high())
+                        + (facts.high() >= type.cap() ? " (searched to " + cap + ")" : "") + ".";
+        String arithmetic = variant.equals(CVariant.DEFAULT)
+                ? "with StrictMath (a C math library may differ in the last bits; "
+                : (type == CType.FLOAT ? "in float arithmetic as this code computes it, " : "in double arithmetic as this code computes it, ")
+                        + (variant.libm() ? "with powf, expf and cosf taken as correctly rounded to float (a C math library may "
+                                + "differ in the last bits; " : "with the powers formed by repeated squaring as this code forms them "
+                                + "(no math library; ");
+        return List.of(range, String.format("Accuracy measured by rootform when it generated this code: max relative error %s against "
+                + (r.analysis().constantValues().isEmpty() ? "the exact values" : "values from the closed form at 40 digits")
+                + " at %d points (%s), %spoints where the exact value is 0 are left out).", statedError(facts), facts.points().size(),
+                facts.points().stream().map(Numbers::point).collect(Collectors.joining(", ")), arithmetic));
     }
 
     /** The measured error rounded up to 3 significant digits, as stated in the header. */

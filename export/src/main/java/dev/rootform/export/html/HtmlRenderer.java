@@ -25,7 +25,7 @@ public final class HtmlRenderer {
     public static String render(Report r, Optional<String> code, CodeNames names) {
         Optional<Block.Code> block = code.map(language -> new Block.Code(language, switch (language) {
             case "java" -> JavaRenderer.render(r, names.packageName().orElse(null), names.className());
-            case "c" -> CRenderer.render(r, names.function(), Optional.empty()).source();
+            case "c" -> CRenderer.render(r, names.function(), Optional.empty(), names.c()).source();
             default -> throw new IllegalArgumentException("no generated code in " + language);
         }));
         return PageRenderer.render(ReportPage.of(r, block));
