@@ -22,7 +22,7 @@ class DocumentOptionsTest {
         assertEquals(0, r.code(), r.err());
         String html = Files.readString(page);
         assertTrue(html.startsWith("<!DOCTYPE html>"), html.substring(0, 40));
-        for (String part : new String[] {"id=\"time-plot\"", "id=\"roots-plot\"", "id=\"frequency-plot\"", "<math",
+        for (String part : new String[] {"id='time-plot'", "id='roots-plot'", "id='frequency-plot'", "<math",
             "data-language=\"java\"", "public final class Solution"}) {
             assertTrue(html.contains(part), "no " + part);
         }
