@@ -56,4 +56,14 @@ public final class Rootform {
     public static Recovery recover(RecoverRequest request) {
         return RecoverJob.run(request);
     }
+
+    /**
+     * Analyses a state-space model exactly: e^(At) or A^n entry by entry, the transfer matrix, the
+     * response to x0 and the input, stability and the Kalman ranks, all verified.
+     *
+     * @since 0.3
+     */
+    public static SystemResult system(SystemRequest request) {
+        return SystemJob.run(request);
+    }
 }

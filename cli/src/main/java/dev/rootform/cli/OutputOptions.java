@@ -107,6 +107,20 @@ final class OutputOptions {
         return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
     }
 
+    /**
+     * Writes a rendering that the command made itself (an answer other than a solve report) to -o
+     * or standard output, and a C header to --header; returns {@code exitCode}.
+     */
+    int print(Rendering rendering, int exitCode, CommandSpec spec) throws IOException {
+        write(rendering, spec.commandLine().getOut());
+        return exitCode;
+    }
+
+    /** The checked names for generated code. @throws InputException for a bad name */
+    CodeNames names() {
+        return codeNames();
+    }
+
     /** @throws InputException for an unknown format, or a layout option the format does not take */
     private Exporter exporter() {
         if (standalone && !format.equals("latex")) {

@@ -48,4 +48,13 @@ public final class LatexRenderer {
         return fragment.substring(0, body) + "\\documentclass[10pt,a4paper]{article}\n\\usepackage{amsmath}\n"
                 + "\\usepackage{amssymb}\n\\begin{document}\n\\[\n" + fragment.substring(body) + "\\]\n\\end{document}\n";
     }
+
+    /**
+     * Plain text in LaTeX math, for the state-space renderer's polynomials and numbers: {@code ·} as
+     * \cdot, {@code y^(4)} as y^{(4)}, other powers braced.
+     */
+    static String math(String plain) {
+        return plain.replace("·", " \\cdot ").replace("π", "\\pi ").replace("λ", "\\lambda ").replace("√", "\\sqrt ")
+                .replaceAll("\\^\\((\\d+)\\)", "^{($1)}").replaceAll("\\^\\(([^()]*)\\)", "^{$1}");
+    }
 }
