@@ -16,10 +16,11 @@ import java.util.Optional;
 import java.util.function.Function;
 
 /**
- * The renderers of a {@link ResponseReport} by format name, the same names as {@link Exporters}:
- * {@code text}, {@code json}, {@code latex}, {@code mathml}, and {@code java}, {@code c}, which
- * write the code of the solved problem (the response's evaluator) with the transfer function named
- * in its header; they need the answer's code model ({@link Options#code()}).
+ * The renderers of a {@link ResponseReport} by format name: {@code text}, {@code json},
+ * {@code latex}, {@code mathml}, and {@code java}, {@code c}, which write the code of the solved
+ * problem (the response's evaluator) with the transfer function named in its header; they need the
+ * answer's code model ({@link Options#code()}). The report page ({@code html}) is not available for
+ * responses.
  *
  * <pre>{@code
  * ResponseReport report = Rootform.response(ResponseRequest.of("H(s) = 1/(s + 1)").to("step")).answer().orElseThrow();
@@ -55,7 +56,7 @@ public final class ResponseExporters {
         return Optional.ofNullable(BY_NAME.get(format));
     }
 
-    /** Every format name, in the order of {@link Exporters#names()}. */
+    /** Every format name, in a fixed order. */
     public static List<String> names() {
         return List.copyOf(BY_NAME.keySet());
     }

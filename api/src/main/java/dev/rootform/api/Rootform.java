@@ -68,6 +68,19 @@ public final class Rootform {
     }
 
     /**
+     * Checks a claimed solution of a problem: exactly where the claim's numbers are exact, else
+     * numerically to {@link Options#digits()} digits; with the equation part, each condition,
+     * where claim and solution differ, named slips and the correct solution.
+     *
+     * @param request the problem, the claim and the options
+     * @return whether the claim holds, with the explanation, or why it was not checked
+     * @since 0.3
+     */
+    public static CheckResult check(CheckRequest request) {
+        return CheckJob.run(request);
+    }
+
+    /**
      * Analyses a transfer function exactly (lowest terms, poles and zeros, DC gain, properness,
      * stability) and computes its response to the request's input in closed form, verified, with
      * the frequency response and, for a step into a stable system, the step figures.

@@ -48,12 +48,14 @@ final class ResponseCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         try {
             out.check();
+            ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format).orElseThrow(() -> new InputException(
+                    "--format " + out.format + " is not available for a response; use one of "
+                            + String.join(", ", ResponseExporters.names()), "", -1));
             List<String> list = frequencies == null ? List.of() : List.of(frequencies.split(",", -1));
             ResponseResult result = Rootform.response(ResponseRequest.of(transfer).to(to).frequencies(list).with(out.options(null)));
             if (result instanceof ResponseResult.Unanswered u) {
                 return out.print(u.result(), UnaryOperator.identity(), spec);
             }
-            ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format).orElseThrow();
             ResponseReport report = result.answer().orElseThrow();
             OutputOptions.refuse(renderer.refusal(report));
             out.write(renderer.render(report, out.codeNames()), spec.commandLine().getOut());
