@@ -70,8 +70,9 @@ public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.Co
     /**
      * A conjugate sum: Σ over the roots α of the irreducible {@code factor} (all conjugates of one
      * algebraic number) of c(α)·v^power·e^{αv} (or α^v), with c(α) = Σ_j coefficients[j]·α^j; real
-     * because the sum runs over all conjugates. Used for factors of degree &ge; 3, and for any factor of
-     * degree &ge; 2 whose coefficients carry a second square root √r from the forcing.
+     * because the sum runs over all conjugates. Used for factors of degree &ge; 3 other than the
+     * cyclotomic quartics Φ_8 and Φ_12 (which become cos/sin pairs), and for a quadratic or such
+     * quartic factor whose coefficients would need a second square root next to √r from the forcing.
      */
     record ConjugateSum(RationalPolynomial factor, List<Coefficient> coefficients, int power) implements Term {
         public ConjugateSum {
