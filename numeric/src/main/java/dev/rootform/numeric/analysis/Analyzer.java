@@ -41,6 +41,8 @@ public final class Analyzer {
     static final long[] SAMPLE_OFFSETS = {1, 10, 100};
     /** Digits of the sample values: enough to size a double-precision evaluation's error. */
     static final int SAMPLE_DIGITS = 17;
+    /** Largest estimated size, in digits, of an exact sequence value that is computed exactly. */
+    static final int EXACT_SIZE_LIMIT = 20_000;
 
     private final int digits;
 
@@ -83,7 +85,7 @@ public final class Analyzer {
                 checks.add(bvp.integratorCheck());
             }
         }
-        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p))));
+        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p, cache))));
         Optional<ExactSolution> exact = solution.exact();
         if (exact.isPresent()) {
             ExactSolution s = exact.get();
@@ -117,7 +119,7 @@ public final class Analyzer {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
             points.forEach(p -> values.add(boundaryValue(bvp, p)));
         }
-        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p))));
+        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p, cache))));
         solution.exact().ifPresent(s -> points.forEach(p -> values.add(exactValue(s, p, cache))));
         return values;
     }
@@ -127,14 +129,14 @@ public final class Analyzer {
     }
 
     private PointValue exactValue(ExactSolution s, Rational p, RootCache cache) {
-        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p, digits, cache);
+        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p, digits, cache) : functionValue(s, p, digits, cache);
     }
 
     /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
     private List<PointValue> samples(ExactSolution s, RootCache cache) {
         List<PointValue> samples = new ArrayList<>();
         for (long offset : SAMPLE_OFFSETS) {
-            samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset))
+            samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset), SAMPLE_DIGITS, cache)
                     : functionValue(s, s.origin().add(Rational.of(offset)), SAMPLE_DIGITS, cache));
         }
         return samples;
@@ -161,17 +163,49 @@ public final class Analyzer {
         throw new AssertionError(root);
     }
 
-    /** x[n] = a + b·√r exactly; shown exact when b = 0. */
-    private PointValue radicalValue(RadicalSolution r, Rational at) {
-        Surd v = r.valueAt(at.toBigInteger().longValueExact());
-        return new PointValue(at, v.toBigDecimal(new MathContext(digits)),
-                v.isRational() ? Optional.of(v.rational()) : Optional.empty(), v.isRational() ? Optional.empty() : Optional.of(v));
+    /**
+     * x[n] = a + b·√r: exact (shown exact when b = 0) while both parts are small, else evaluated to
+     * the digits asked ({@link #sequenceValue}).
+     */
+    private PointValue radicalValue(RadicalSolution r, Rational at, RootCache cache) {
+        long n = at.toBigInteger().longValueExact();
+        double size = Math.max(SequenceSum.exactDigits(r.rational(), n, cache), SequenceSum.exactDigits(r.radical(), n, cache));
+        if (n < r.rational().validFrom() || size <= Math.max(EXACT_SIZE_LIMIT, digits)) {
+            Surd v = r.valueAt(n);
+            return new PointValue(at, v.toBigDecimal(new MathContext(digits)),
+                    v.isRational() ? Optional.of(v.rational()) : Optional.empty(), v.isRational() ? Optional.empty() : Optional.of(v));
+        }
+        Apfloat[] value = settledSequence(n, digits, working -> {
+            Apfloat root = ApfloatMath.sqrt(new Apfloat(r.radicand(), working));
+            Apfloat[] a = SequenceSum.of(r.rational(), cache, working).valueAndLargest(n);
+            Apfloat[] b = SequenceSum.of(r.radical(), cache, working).valueAndLargest(n);
+            Apfloat scaled = b[1].multiply(root);
+            return new Apfloat[] {a[0].add(root.multiply(b[0])), a[1].compareTo(scaled) > 0 ? a[1] : scaled};
+        });
+        return new PointValue(at, Decimals.toBigDecimal(value[0], digits), Optional.empty());
     }
 
-    /** x[n] exactly, at an index {@link ValueRequests} accepts. */
-    private PointValue sequenceValue(ExactSolution s, Rational at) {
-        Rational v = s.valueAt(at.toBigInteger().longValueExact());
-        return new PointValue(at, v.toBigDecimal(new MathContext(digits)), Optional.of(v));
+    /**
+     * x[n] at an index {@link ValueRequests} accepts, to {@code wanted} digits: exact while the exact
+     * fraction is estimated at no more than {@link #EXACT_SIZE_LIMIT} digits (or the digits asked, when
+     * more), else from the modes in apfloat, confirmed by two working precisions agreeing.
+     */
+    private static PointValue sequenceValue(ExactSolution s, Rational at, int wanted, RootCache cache) {
+        long n = at.toBigInteger().longValueExact();
+        if (n < s.validFrom() || SequenceSum.exactDigits(s, n, cache) <= Math.max(EXACT_SIZE_LIMIT, wanted)) {
+            Rational v = s.valueAt(n);
+            return new PointValue(at, v.toBigDecimal(new MathContext(wanted)), Optional.of(v));
+        }
+        Apfloat[] value = settledSequence(n, wanted, working -> SequenceSum.of(s, cache, working).valueAndLargest(n));
+        return new PointValue(at, Decimals.toBigDecimal(value[0], wanted), Optional.empty());
+    }
+
+    /** {value, largest mode} at the first two working precisions that agree; log10|n| digits more to start with. */
+    private static Apfloat[] settledSequence(long n, int wanted, java.util.function.IntFunction<Apfloat[]> evaluate) {
+        int lost = (int) Math.ceil(Math.log10(Math.abs((double) n) + 1));
+        return WorkingPrecision.settle(wanted + lost, evaluate,
+                (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
+                (working, high) -> working + WorkingPrecision.GUARD_DIGITS + lost, "value at n = " + n);
     }
 
     /** y(t) to {@code wanted} significant digits. */
@@ -181,22 +215,11 @@ public final class Analyzer {
             return new PointValue(t, v.toBigDecimal(new MathContext(wanted)), Optional.of(v));
         }
         Apfloat[] settled = WorkingPrecision.settle(wanted, working -> ModeSum.of(s, cache, working).valueAndLargest(t),
-                (low, high, working) -> agree(low, high, working, wanted),
+                (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
                 (working, high) -> working + WorkingPrecision.GUARD_DIGITS
                         + (int) Math.ceil(ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10)),
                 "value at t = " + t);
         return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
-    }
-
-    /**
-     * Whether two evaluations {value, largest mode magnitude} agree to {@code wanted} digits, or to
-     * the working precision's floor below the largest mode (a value that cancels to about 0).
-     */
-    private static boolean agree(Apfloat[] low, Apfloat[] high, int working, int wanted) {
-        Apfloat difference = ApfloatMath.abs(low[0].subtract(high[0]));
-        Apfloat relative = ApfloatMath.abs(high[0]).multiply(new Apfloat("1e-" + (wanted + 2), working));
-        Apfloat floor = high[1].multiply(new Apfloat("1e-" + (working - WorkingPrecision.GUARD_DIGITS / 2), working));
-        return difference.compareTo(relative) <= 0 || difference.compareTo(floor) <= 0;
     }
 
     /** The integrator cross-check from the exact derivatives at the origin t0, at t0 + {@link IntegratorCheck#OFFSETS}. */

@@ -155,7 +155,8 @@ final class ModeSum {
         return n == 0 ? new Apfloat(1, z.precision()) : org.apfloat.ApcomplexMath.pow(z, n);
     }
 
-    private static List<Apcomplex> roots(RationalPolynomial f, RootCache cache, long precision) {
+    /** The roots of f at the working precision: exact for a linear f, else from certified enclosures. */
+    static List<Apcomplex> roots(RationalPolynomial f, RootCache cache, long precision) {
         if (f.degree() == 1) {
             return List.of(Decimals.toApfloat(f.coefficient(0).negate(), precision));
         }
@@ -163,7 +164,8 @@ final class ModeSum {
                 .map(r -> new Apcomplex(new Apfloat(r.re(), precision), new Apfloat(r.im(), precision))).toList();
     }
 
-    private static Apcomplex polynomialAt(RationalPolynomial c, Apcomplex alpha, long precision) {
+    /** c(α) by Horner's rule at the working precision. */
+    static Apcomplex polynomialAt(RationalPolynomial c, Apcomplex alpha, long precision) {
         Apcomplex v = Apcomplex.ZERO;
         for (int j = c.degree(); j >= 0; j--) {
             v = v.multiply(alpha).add(Decimals.toApfloat(c.coefficient(j), precision));

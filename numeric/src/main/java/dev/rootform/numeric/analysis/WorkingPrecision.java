@@ -2,6 +2,8 @@ package dev.rootform.numeric.analysis;
 
 import dev.rootform.symbolic.work.Deadline;
 import java.util.function.IntFunction;
+import org.apfloat.Apfloat;
+import org.apfloat.ApfloatMath;
 
 /**
  * The working-precision policy of the analysis: {@link #GUARD_DIGITS} digits above the requested
@@ -49,5 +51,16 @@ final class WorkingPrecision {
             working = step.next(working, high);
         }
         throw new IllegalStateException(what + " did not settle within " + MAX_DIGITS + " digits");
+    }
+
+    /**
+     * Whether two evaluations {value, largest mode magnitude} agree to {@code wanted} digits, or to
+     * the working precision's floor below the largest mode (a value that cancels to about 0).
+     */
+    static boolean agree(Apfloat[] low, Apfloat[] high, int working, int wanted) {
+        Apfloat difference = ApfloatMath.abs(low[0].subtract(high[0]));
+        Apfloat relative = ApfloatMath.abs(high[0]).multiply(new Apfloat("1e-" + (wanted + 2), working));
+        Apfloat floor = high[1].multiply(new Apfloat("1e-" + (working - GUARD_DIGITS / 2), working));
+        return difference.compareTo(relative) <= 0 || difference.compareTo(floor) <= 0;
     }
 }
