@@ -41,10 +41,13 @@ public final class CRenderer {
         StringBuilder c = new StringBuilder(comment);
         headerFile.ifPresentOrElse(h -> c.append("#include \"").append(h).append("\"\n"), () -> c.append(declaration));
         c.append("#include <math.h>\n\n");
-        String[][] arrays = WaveLoop.arrays(form);
-        for (int i = 0; i < arrays.length; i++) {
-            c.append("static const ").append(i == 1 ? "int " : "double ").append(array(function, WaveLoop.NAMES[i]))
-                    .append("[] = {").append(String.join(", ", arrays[i])).append("};\n");
+        for (WaveLoop.Array a : WaveLoop.arrays(form)) {
+            c.append("static const ").append(a.type()).append(' ').append(array(function, a.name()))
+                    .append("[] = {").append(String.join(", ", a.elements())).append("};\n");
+        }
+        if (!form.series().isEmpty()) {
+            c.append("static const double ").append(array(function, "SERIES_RADIUS")).append(" = ").append(form.seriesRadius())
+                    .append(";\n");
         }
         if (!form.leading().isEmpty()) {
             c.append("static const double ").append(array(function, "LEADING")).append("[] = {")
@@ -61,7 +64,9 @@ public final class CRenderer {
             }
             c.append("    v = (double) n;\n");
         }
-        c.append(WaveLoop.body(form, "", name -> array(function, name), "    ")).append("}\n");
+        WaveLoop.Dialect dialect = new WaveLoop.Dialect("", "fabs",
+                "((n % MODULUS[i] + MODULUS[i]) % MODULUS[i] * MULTIPLIER[i] % MODULUS[i])", name -> array(function, name));
+        c.append(WaveLoop.body(form, dialect, "    ")).append("}\n");
         Optional<String> header = headerFile.map(h -> comment + "#ifndef " + guard + "\n#define " + guard + "\n\n"
                 + declaration + "\n#endif\n");
         return new CSource(c.toString(), header);

@@ -2,12 +2,14 @@ package dev.rootform.export.code;
 
 import dev.rootform.export.CodeFacts;
 import dev.rootform.export.NumericForm;
-import dev.rootform.export.Wave;
 import dev.rootform.export.Report;
 import dev.rootform.export.notation.CommentText;
 import dev.rootform.export.notation.Numbers;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.solve.Solution;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
@@ -23,35 +25,78 @@ final class CodeHeader {
     private CodeHeader() {
     }
 
-    /** The header lines for code that evaluates {@code form} (facts measured on it); without numeric lines when facts are absent. */
+    /** The header lines for code that evaluates {@code form} (facts measured on it). */
     static List<String> lines(Report r, NumericForm form, CodeFacts facts) {
         Solution s = r.solution();
         List<String> out = new ArrayList<>(CommentText.summary(s));
         out.addAll(constants(r));
-        ClosedForm f = s.closedForm();
-        String v = f.variable();
-        if (form.differential()) {
-            out.add("Double evaluation: every term stays finite and the largest a normal double for "
-                    + String.format("%.6g <= %s <= %.6g", facts.low() + form.origin(), v, facts.high() + form.origin())
-                    + (facts.high() >= CodeFacts.CAP ? " (searched to |" + v + " - t0| = 1e15)" : "") + ".");
-        } else {
-            out.add("Double evaluation: every term stays finite and the largest a normal double for "
-                    + form.first() + " <= " + v + " <= " + String.format("%.0f", facts.high())
-                    + (facts.high() >= CodeFacts.CAP ? " (searched to 1e15)" : "") + ".");
+        String v = s.closedForm().variable();
+        out.add("Valid input range of this code: " + input(form, facts.low()) + " <= " + v + " <= " + input(form, facts.high())
+                + " (" + (form.differential() ? "below: " + limit(facts.lowLimit()) + "; " : "") + "above: "
+                + limit(facts.highLimit()) + ").");
+        if (!form.series().isEmpty()) {
+            out.add("Near t0, for |" + v + " - t0| <= " + form.seriesRadius() + ", the code sums the Taylor series of "
+                    + s.closedForm().function() + " at t0 (" + form.series().size() + " terms, coefficients "
+                    + (s.exact().isPresent() ? "exact, rounded once" : "from the closed form at 40 digits")
+                    + "): there the terms of the closed form cancel.");
         }
-        out.add(String.format("Accuracy measured by rootform when it generated this code: max relative error %s against "
-                + (r.analysis().constantValues().isEmpty() ? "the exact values" : "values from the closed form at 40 digits")
-                + " at %d points (%s), with StrictMath (a C math library may differ in the last bits; "
-                + "points where the exact value is 0 are left out).", statedError(facts), facts.points().size(),
-                facts.points().stream().map(Numbers::point).collect(Collectors.joining(", "))));
+        if (form.reduces()) {
+            out.add("Angles that are rational multiples of pi per step are reduced exactly in integers ((n*k) mod M), "
+                    + "so their phase does not drift however large n is.");
+        }
+        out.add("Accuracy measured by rootform when it generated this code, against values to " + CodeMeasurement.EXACT_DIGITS
+                + " digits (" + (r.analysis().constantValues().isEmpty() ? "from the exact solution" : "from the closed form "
+                + "with the constants above") + ") at " + facts.points().size() + " points chosen from the problem's time scales ("
+                + facts.timeScales().stream().map(CodeHeader::shortNumber).collect(Collectors.joining(", "))
+                + "): dense near " + (form.differential() ? "t0" : "the first index") + ", then log-spaced to the ends of the "
+                + "valid range; with StrictMath (a C math library may differ in the last bits). L below is the largest term "
+                + "the code adds up at an input (" + (form.series().isEmpty() ? "" : "|SERIES[d]*s^d| near t0, else ")
+                + "|AMPLITUDE[i]*v^POWER[i]*" + (form.differential() ? "exp(GROWTH[i]*v)" : "GROWTH[i]^v") + "|); the stated "
+                + "bound is " + (int) CodeFacts.MARGIN + " x the worst measured, for inputs between the sample points.");
+        out.add(accuracy(form.differential() ? "For " + v + " >= t0" : "For every n", v, facts.forward()));
+        facts.backward().ifPresent(a -> out.add(accuracy("For " + v + " < t0", v, a)));
         out.add(CommentText.CAUTION);
         return CommentText.wrap(out);
     }
 
-    /** The measured error rounded up to 3 significant digits, as stated in the header. */
-    static String statedError(CodeFacts facts) {
-        return new java.math.BigDecimal(facts.maxRelativeError()).round(new java.math.MathContext(3, java.math.RoundingMode.UP))
-                .stripTrailingZeros().toString();
+    /** One side's measured errors and stated bound, ending in the bound |value - exact| <= max(R*|exact|, E*L). */
+    private static String accuracy(String side, String v, CodeFacts.Accuracy a) {
+        return side + " (" + a.points() + " points): worst relative error " + shortNumber(a.maxRelativeError()) + " (at " + v
+                + " = " + at(a.worstRelativeAt()) + "; where the value is at least 1/" + (int) CodeFacts.CANCELLATION + " of L), "
+                + "worst absolute error " + shortNumber(a.maxAbsoluteError()) + " (at " + v + " = " + at(a.worstAbsoluteAt())
+                + "), worst error in units of L " + shortNumber(a.maxTermError()) + " (at " + v + " = " + at(a.worstTermAt())
+                + "). Stated bound: |value - exact| <= max(" + statedBound(a.relativeBound()) + "*|exact|, "
+                + statedBound(a.termBound()) + "*L).";
+    }
+
+    /** A bound rounded up to 2 significant digits, as stated in the header ({@code 4.5E-16}, or {@code 0}). */
+    static String statedBound(double bound) {
+        return bound == 0 ? "0" : new BigDecimal(bound).round(new MathContext(2, RoundingMode.UP)).stripTrailingZeros().toString();
+    }
+
+    /** An input of the valid range as written: t0 + v (functions) or the index. */
+    private static String input(NumericForm form, double value) {
+        return form.differential() ? shortNumber(form.origin() + value) : String.format("%.0f", value);
+    }
+
+    private static String limit(CodeFacts.Limit limit) {
+        return switch (limit) {
+            case FIRST_INDEX -> "the first index";
+            case OVERFLOW -> "a term would overflow a double";
+            case UNDERFLOW -> "every term would fall below the smallest normal double";
+            case DRIFT -> "the rounding of a rate or angle would make the phase or growth drift by more than "
+                    + shortNumber(CodeFacts.DRIFT_LIMIT);
+            case CAP -> "searched no farther than " + shortNumber(CodeFacts.CAP) + " from the start";
+        };
+    }
+
+    private static String at(dev.rootform.symbolic.algebra.Rational point) {
+        return point.isInteger() ? point.toString() : shortNumber(point.doubleValue());
+    }
+
+    /** x to 6 significant digits, without trailing zeros. */
+    private static String shortNumber(double x) {
+        return x == 0 ? "0" : new BigDecimal(x).round(new MathContext(6)).stripTrailingZeros().toString();
     }
 
     /**

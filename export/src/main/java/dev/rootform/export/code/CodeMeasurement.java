@@ -1,72 +1,109 @@
 package dev.rootform.export.code;
 
 import dev.rootform.export.CodeFacts;
+import dev.rootform.export.CodeFacts.Limit;
 import dev.rootform.export.NumericForm;
+import dev.rootform.export.Wave;
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.function.LongFunction;
+import java.util.Optional;
 import java.util.TreeSet;
 
 /**
- * Measures the double formula of generated code ({@link CodeFacts}): the input range where every
- * term stays finite and the largest a normal double (searched up to {@link CodeFacts#CAP}), and the
- * largest relative error against exact values (sequences) or 30-digit values (functions) over a
- * sample of points inside that range.
+ * Measures the double formula of generated code ({@link CodeFacts}). The valid range: from the
+ * start (t0, or the first index the formula holds for) outward until a term overflows, every term
+ * underflows, or the rounding of rates and angles would make phase or growth drift by more than
+ * {@link CodeFacts#DRIFT_LIMIT} (searched up to {@link CodeFacts#CAP}). The sample follows the
+ * problem's own time scales (the waves' 1/|σ| and 1/ω; for sequences 1/|ln ρ| and periods 2π/θ):
+ * dense near the start (halving steps down to 2^-44 of the shortest scale for functions, every index
+ * of the first {@link #FIRST_INDICES} for sequences), quarter steps over the shortest and the longest
+ * scale, then log-spaced ({@link #PER_DECADE} per decade) to both ends of the range, which are
+ * included. Reference values come from the analysis to {@link #EXACT_DIGITS} digits (exact
+ * sequence values, or certified evaluation at large n; function values raised until two working
+ * precisions agree); errors are those of the double values the code computes at exactly those
+ * inputs.
  */
 final class CodeMeasurement {
-    /** Significant digits of the reference values of functions. */
+    /** Significant digits of the reference values. */
     static final int EXACT_DIGITS = 30;
+    /** Every index of a sequence from the first one up to this many. */
+    static final int FIRST_INDICES = 64;
+    /** Log-spaced sample points per decade out to the ends of the range. */
+    static final int PER_DECADE = 8;
+    /** Halving steps from the shortest time scale towards t0. */
+    private static final int HALVINGS = 44;
     /** ln(Double.MAX_VALUE) with a margin: a term above it overflows. */
     private static final double LN_MAX = Math.log(Double.MAX_VALUE) - 1;
     /** ln(Double.MIN_NORMAL) with a margin: when every term is below it, the value is subnormal. */
     private static final double LN_MIN = Math.log(Double.MIN_NORMAL) + 1;
-    /** Offsets from the first index (sequences) or from t0 (functions) tried as sample points. */
-    private static final double[] OFFSETS = {0, 0.25, 0.5, 1, 2, 3, 5, 7, 10, 15, 20, 30, 50, 100, 200, 500, 1000, 2000};
+    /** Relative rounding of one double operation. */
+    private static final double UNIT = 0x1p-53;
 
     private CodeMeasurement() {
     }
 
+    /** One end of the valid range. */
+    private record Edge(double at, Limit limit) {
+    }
+
     /** Measures {@code form}, the emitted formula of {@code solution}'s closed form (a fitted solution, see {@link CodeRequests}). */
-    static CodeFacts measure(Solution solution, NumericForm form) {
-        MathContext mc = new MathContext(EXACT_DIGITS);
-        Rational origin = solution.exact().map(ExactSolution::origin).orElse(Rational.ZERO);
-        LongFunction<BigDecimal> sequence = solution.radical().<LongFunction<BigDecimal>>map(r -> n -> r.valueAt(n).toBigDecimal(mc))
-                .orElse(n -> solution.exact().orElseThrow().valueAt(n).toBigDecimal(mc));
+    static CodeFacts measure(Solution solution, NumericForm form, Rational origin) {
         double start = form.differential() ? 0 : form.validFrom();
-        double high = edge(form, start, 1);
-        double low = form.differential() ? edge(form, start, -1) : form.first();
-        TreeSet<Rational> sample = new TreeSet<>();
-        for (double d : OFFSETS) {
-            for (double sign : form.differential() ? new double[] {1, -1} : new double[] {1}) {
-                double v = start + sign * d;
-                if (v <= high && v >= low && (form.differential() || d == Math.rint(d))) {
-                    sample.add(Rational.of(BigDecimal.valueOf(v)).add(form.differential() ? origin : Rational.ZERO));
+        Edge high = edge(form, start, 1);
+        Edge low = form.differential() ? edge(form, start, -1) : new Edge(form.first(), Limit.FIRST_INDEX);
+        List<Double> scales = timeScales(form);
+        List<Rational> points = form.differential() ? functionPoints(form, origin, low.at(), high.at(), scales)
+                : sequencePoints(form, high.at(), scales);
+        List<BigDecimal> exact = new Analyzer(EXACT_DIGITS).values(solution, points).stream().map(PointValue::value).toList();
+        List<Integer> forward = new ArrayList<>();
+        List<Integer> backward = new ArrayList<>();
+        Rational t0 = form.differential() ? Rational.of(new BigDecimal(form.origin())) : Rational.ZERO;
+        for (int i = 0; i < points.size(); i++) {
+            (form.differential() && points.get(i).compareTo(t0) < 0 ? backward : forward).add(i);
+        }
+        Optional<CodeFacts.Accuracy> back = backward.isEmpty() ? Optional.empty()
+                : Optional.of(accuracy(form, points, exact, backward));
+        return new CodeFacts(low.at(), high.at(), low.limit(), high.limit(), scales, points, exact,
+                accuracy(form, points, exact, forward), back);
+    }
+
+    /** The worst errors of the code over the points with the given indices. */
+    private static CodeFacts.Accuracy accuracy(NumericForm form, List<Rational> points, List<BigDecimal> exact, List<Integer> which) {
+        double[] worst = new double[3];
+        Rational first = points.get(which.get(0));
+        Rational[] where = {first, first, first};
+        for (int i : which) {
+            Deadline.checkCurrent();
+            Rational p = points.get(i);
+            BigDecimal difference = new BigDecimal(evaluate(form, p)).subtract(exact.get(i)).abs();
+            double term = largestTerm(form, p);
+            double size = exact.get(i).abs().doubleValue();
+            double[] errors = {
+                size == 0 || size * CodeFacts.CANCELLATION < term ? 0
+                        : difference.divide(exact.get(i).abs(), MathContext.DECIMAL64).doubleValue(),
+                difference.doubleValue(),
+                term == 0 ? 0 : difference.doubleValue() / term,
+            };
+            for (int k = 0; k < 3; k++) {
+                if (errors[k] > worst[k]) {
+                    worst[k] = errors[k];
+                    where[k] = p;
                 }
             }
         }
-        for (long n = form.first(); !form.differential() && n < form.validFrom() + 30 && n <= high; n++) {
-            sample.add(Rational.of(n));
-        }
-        List<Rational> points = List.copyOf(sample);
-        List<BigDecimal> exact = new ArrayList<>();
-        if (form.differential()) {
-            new Analyzer(EXACT_DIGITS).values(solution, points).stream().map(PointValue::value).forEach(exact::add);
-        } else {
-            points.forEach(p -> exact.add(sequence.apply(p.toBigInteger().longValueExact())));
-        }
-        double worst = 0;
-        for (int i = 0; i < points.size(); i++) {
-            worst = Math.max(worst, relativeError(evaluate(form, points.get(i)), exact.get(i)));
-        }
-        boolean bounded = high < CodeFacts.CAP || low > -CodeFacts.CAP;
-        return new CodeFacts(low, high, bounded, points, exact, worst);
+        return new CodeFacts.Accuracy(which.size(), worst[0], where[0], worst[1], where[1], worst[2], where[2]);
+    }
+
+    /** The largest term the code adds up at a sample point ({@link NumericForm#largestTerm}). */
+    static double largestTerm(NumericForm form, Rational point) {
+        return form.differential() ? form.largestTerm(point.doubleValue()) : form.largestTerm(point.toBigInteger().longValueExact());
     }
 
     /** The double value of {@code form} at a sample point, as generated code computes it. */
@@ -74,45 +111,160 @@ final class CodeMeasurement {
         return form.differential() ? form.valueAt(point.doubleValue()) : form.valueAt(point.toBigInteger().longValueExact());
     }
 
-    /** |value − exact|/|exact|; 0 when exact is 0 (such points are compared by the zero count instead). */
-    static double relativeError(double value, BigDecimal exact) {
-        BigDecimal difference = new BigDecimal(value).subtract(exact).abs();
-        if (exact.signum() == 0) {
-            return 0;
+    /**
+     * The time scales of the waves, ascending and distinct: 1/|growth| and 1/|frequency| (functions),
+     * 1/|ln|growth|| and 2π/frequency (sequences); {1} when every wave is constant.
+     */
+    static List<Double> timeScales(NumericForm form) {
+        TreeSet<Double> scales = new TreeSet<>();
+        for (Wave w : form.waves()) {
+            if (w.amplitude() == 0.0) {
+                continue;
+            }
+            double rate = form.differential() ? Math.abs(w.growth()) : Math.abs(Math.log(Math.abs(w.growth())));
+            if (rate > 0 && Double.isFinite(1 / rate)) {
+                scales.add(1 / rate);
+            }
+            if (w.frequency() != 0.0) {
+                double angle = w.reduced() ? w.frequency() * w.multiplier() : Math.abs(w.frequency());
+                scales.add(form.differential() ? 1 / angle : 2 * Math.PI / angle);
+            }
         }
-        return difference.divide(exact.abs(), MathContext.DECIMAL64).doubleValue();
+        return scales.isEmpty() ? List.of(1.0) : List.copyOf(scales);
     }
 
-    /** The farthest v from start in {@code direction} (up to the cap) at which every term is finite and the largest normal. */
-    private static double edge(NumericForm form, double start, int direction) {
+    /** t0 + v for v near 0, over the scales and log-spaced to both ends; each the exact value of the double t. */
+    private static List<Rational> functionPoints(NumericForm form, Rational origin, double low, double high, List<Double> scales) {
+        double shortest = scales.get(0);
+        double longest = scales.get(scales.size() - 1);
+        TreeSet<Double> offsets = new TreeSet<>(List.of(0.0, low, high));
+        for (int k = 1; k <= HALVINGS; k++) {
+            offsets.add(Math.scalb(shortest, -k));
+        }
+        for (int j = 1; j <= 16; j++) {
+            offsets.add(shortest * j / 4);
+            offsets.add(longest * j / 4);
+        }
+        offsets.addAll(logSpaced(shortest, Math.max(Math.abs(low), high)));
+        TreeSet<Rational> points = new TreeSet<>();
+        double t0 = origin.doubleValue();
+        for (double v : offsets) {
+            for (double signed : new double[] {v, -v}) {
+                if (signed >= low && signed <= high) {
+                    double t = t0 + signed;
+                    points.add(Rational.of(new BigDecimal(t)));
+                }
+            }
+        }
+        return List.copyOf(points);
+    }
+
+    /** The first indices, quarter steps over the scales, and log-spaced indices to the end. */
+    private static List<Rational> sequencePoints(NumericForm form, double high, List<Double> scales) {
+        long first = form.first();
+        long start = form.validFrom();
+        long last = (long) high;
+        TreeSet<Long> indices = new TreeSet<>(List.of(last));
+        for (long n = first; n <= Math.min(last, start + FIRST_INDICES); n++) {
+            indices.add(n);
+        }
+        for (double s : List.of(scales.get(0), scales.get(scales.size() - 1))) {
+            for (int j = 1; j <= 16; j++) {
+                indices.add(start + Math.round(s * j / 4));
+            }
+        }
+        for (double d : logSpaced(FIRST_INDICES, last - start)) {
+            indices.add(start + Math.round(d));
+        }
+        List<Rational> points = new ArrayList<>();
+        indices.stream().filter(n -> n >= first && n <= last).forEach(n -> points.add(Rational.of(n)));
+        return points;
+    }
+
+    /** {@link #PER_DECADE} points per decade from {@code from} to {@code to} (both positive), and {@code to}. */
+    private static List<Double> logSpaced(double from, double to) {
+        List<Double> out = new ArrayList<>();
+        if (!(from > 0) || !(to > from)) {
+            return out;
+        }
+        double step = Math.pow(10, 1.0 / PER_DECADE);
+        for (double x = from; x < to; x *= step) {
+            out.add(x);
+        }
+        out.add(to);
+        return out;
+    }
+
+    /** The farthest v from start in {@code direction} (up to the cap) at which the form {@link #fits}, and what ends it there. */
+    private static Edge edge(NumericForm form, double start, int direction) {
         double good = start;
         for (double step = 1; step <= CodeFacts.CAP; step *= 2) {
             double v = start + direction * step;
-            if (!fits(form, v)) {
+            if (misfit(form, v) != null) {
                 return bisect(form, good, v);
             }
             good = v;
         }
-        return start + direction * CodeFacts.CAP;
+        return new Edge(start + direction * CodeFacts.CAP, Limit.CAP);
     }
 
-    private static double bisect(NumericForm form, double good, double bad) {
+    private static Edge bisect(NumericForm form, double good, double bad) {
         while (Math.abs(bad - good) > (form.differential() ? Math.ulp(Math.abs(good)) * 4 + 1e-12 : 1)) {
             double mid = form.differential() ? (good + bad) / 2 : Math.floor((good + bad) / 2);
             if (mid == good || mid == bad) {
                 break;
             }
-            if (fits(form, mid)) {
+            if (misfit(form, mid) == null) {
                 good = mid;
             } else {
                 bad = mid;
             }
         }
-        return good;
+        return new Edge(good, misfit(form, bad));
     }
 
-    private static boolean fits(NumericForm form, double v) {
+    /** Why the form does not fit at v (a term overflows, every term underflows, or it drifts), or null when it fits. */
+    private static Limit misfit(NumericForm form, double v) {
         double m = form.logMagnitude(v);
-        return m < LN_MAX && m > LN_MIN;
+        if (m >= LN_MAX || form.waves().stream().anyMatch(w -> growthExponent(form, w, v) >= LN_MAX)) {
+            return Limit.OVERFLOW;
+        }
+        if (m <= LN_MIN) {
+            return Limit.UNDERFLOW;
+        }
+        return drift(form, v, m) > CodeFacts.DRIFT_LIMIT ? Limit.DRIFT : null;
+    }
+
+    /** ln of the growth factor alone, which the code computes before multiplying by the amplitude. */
+    private static double growthExponent(NumericForm form, Wave w, double v) {
+        return w.amplitude() == 0.0 ? Double.NEGATIVE_INFINITY
+                : form.differential() ? w.growth() * v : v * Math.log(Math.abs(w.growth()));
+    }
+
+    /** Relative rounding of x·v per unit of v: none when x is 0 or a power of two (the product is exact). */
+    private static double productRounding(double x) {
+        return x == 0.0 || Math.abs(x) == Math.scalb(1.0, Math.getExponent(x)) ? 0 : Math.abs(x) * UNIT;
+    }
+
+    /**
+     * The drift at v that the rounding of growth rates and angles causes, weighted by each wave's
+     * size relative to the largest term (ln of it: {@code largest}): |v|·(growth error + ulp of the
+     * exponent) for e^{growth·v}, |n|·growth error/|growth| for growth^n, and |v|·(frequency error +
+     * rounding of frequency·v + phase) for an angle that is not reduced exactly.
+     */
+    private static double drift(NumericForm form, double v, double largest) {
+        double total = 0;
+        for (Wave w : form.waves()) {
+            double size = Math.exp(form.logMagnitude(w, v) - largest);
+            if (size == 0) {
+                continue;
+            }
+            double growth = form.differential() ? w.growthError() + productRounding(w.growth())
+                    : w.growthError() / Math.abs(w.growth());
+            double angle = w.reduced() || w.frequency() == 0.0 ? 0
+                    : w.frequencyError() + (w.phase() == 0.0 ? productRounding(w.frequency()) : Math.abs(w.frequency()) * UNIT);
+            total += size * Math.abs(v) * (growth + angle);
+        }
+        return total;
     }
 }

@@ -5,7 +5,10 @@ import dev.rootform.export.NumericForm;
 import dev.rootform.export.Report;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.export.Wave;
 import java.math.MathContext;
+import java.util.List;
+import java.util.Optional;
 
 /**
  * Builds the {@link CodeModel} of a fitted answer: the closed form with every constant rounded once
@@ -28,9 +31,12 @@ public final class CodeModels {
         ClosedForm f = CodeHeader.codeForm(r);
         boolean sequence = f.domain() == Domain.DIFFERENCE;
         long first = sequence ? f.origin().toBigInteger().longValueExact() : 0;
+        List<Wave> waves = WaveBuilder.of(f);
+        Optional<TaylorSeries.Series> series = sequence ? Optional.empty() : TaylorSeries.of(f, r.solution().exact(), waves);
         NumericForm form = new NumericForm(f.domain(), sequence ? first : f.origin().toBigDecimal(ROUNDING).doubleValue(), first,
                 sequence ? f.validFrom() : 0, f.leadingValues().stream().map(q -> q.toBigDecimal(ROUNDING).doubleValue()).toList(),
-                WaveBuilder.of(f));
-        return new CodeModel(form, CodeMeasurement.measure(r.solution(), form));
+                waves, series.map(TaylorSeries.Series::coefficients).orElse(List.of()),
+                series.map(TaylorSeries.Series::radius).orElse(0.0));
+        return new CodeModel(form, CodeMeasurement.measure(r.solution(), form, f.origin()));
     }
 }

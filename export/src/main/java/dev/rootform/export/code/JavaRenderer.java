@@ -83,6 +83,9 @@ public final class JavaRenderer {
                 }
             """;
 
+    private static final WaveLoop.Dialect JAVA = new WaveLoop.Dialect("StrictMath.", "StrictMath.abs",
+            "Math.floorMod(Math.floorMod(n, MODULUS[i]) * MULTIPLIER[i], MODULUS[i])", name -> name);
+
     private JavaRenderer() {
     }
 
@@ -113,10 +116,12 @@ public final class JavaRenderer {
         }
         out.append("\n/** The closed form evaluated in double precision; see the comment above for range and accuracy. */\n")
                 .append("public final class ").append(className).append(" {\n");
-        String[][] arrays = WaveLoop.arrays(form);
-        for (int i = 0; i < arrays.length; i++) {
-            out.append("    private static final ").append(i == 1 ? "int" : "double").append("[] ").append(WaveLoop.NAMES[i])
-                    .append(" = {").append(String.join(", ", arrays[i])).append("};\n");
+        for (WaveLoop.Array a : WaveLoop.arrays(form)) {
+            out.append("    private static final ").append(a.type()).append("[] ").append(a.name())
+                    .append(" = {").append(String.join(", ", a.elements())).append("};\n");
+        }
+        if (!form.series().isEmpty()) {
+            out.append("    private static final double SERIES_RADIUS = ").append(form.seriesRadius()).append(";\n");
         }
         if (form.differential()) {
             out.append("    private static final double ORIGIN = ").append(form.origin()).append(";\n");
@@ -139,7 +144,7 @@ public final class JavaRenderer {
                     .append("        if (n < VALID_FROM) {\n            return LEADING[(int) (n - FIRST)];\n        }\n")
                     .append("        double v = n;\n");
         }
-        out.append(WaveLoop.body(form, "StrictMath.", name -> name, "        ")).append("    }\n");
+        out.append(WaveLoop.body(form, JAVA, "        ")).append("    }\n");
         exact.ifPresent(e -> out.append(EXACT_METHODS));
         return out.append("}\n").toString();
     }
