@@ -85,21 +85,6 @@ public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit
         public double termBound() {
             return MARGIN * maxTermError;
         }
-
-        /**
-         * Whether {@code value} is within the stated bounds of {@code exact}:
-         * |value − exact| ≤ max(relativeBound·|exact|, termBound·largestTerm).
-         *
-         * @param largestTerm the largest term the code adds up at that input ({@link NumericForm#largestTerm})
-         */
-        public boolean within(double value, BigDecimal exact, double largestTerm) {
-            if (!Double.isFinite(value)) {
-                return false;
-            }
-            BigDecimal error = new BigDecimal(value).subtract(exact).abs();
-            BigDecimal allowed = exact.abs().multiply(new BigDecimal(relativeBound())).max(new BigDecimal(termBound() * largestTerm));
-            return error.compareTo(allowed) <= 0;
-        }
     }
 
     public CodeFacts {

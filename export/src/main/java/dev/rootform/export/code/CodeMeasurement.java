@@ -82,7 +82,7 @@ final class CodeMeasurement {
         for (int i : which) {
             Deadline.checkCurrent();
             Rational p = points.get(i);
-            BigDecimal difference = new BigDecimal(evaluate(form, p)).subtract(exact.get(i)).abs();
+            BigDecimal difference = measurable(new BigDecimal(evaluate(form, p)).subtract(exact.get(i)).abs(), exact.get(i));
             double term = largestTerm(form, p);
             double size = exact.get(i).abs().doubleValue();
             double[] errors = {
@@ -99,6 +99,15 @@ final class CodeMeasurement {
             }
         }
         return new CodeFacts.Accuracy(which.size(), worst[0], where[0], worst[1], where[1], worst[2], where[2]);
+    }
+
+    /**
+     * The difference, or 0 when it is below the resolution of the reference value (its last digit):
+     * the double is then exact as far as can be told, and no bound is stated below that resolution.
+     */
+    static BigDecimal measurable(BigDecimal difference, BigDecimal reference) {
+        BigDecimal resolution = reference.abs().movePointLeft(EXACT_DIGITS - 1);
+        return difference.compareTo(resolution) <= 0 ? BigDecimal.ZERO : difference;
     }
 
     /** The largest term the code adds up at a sample point ({@link NumericForm#largestTerm}). */

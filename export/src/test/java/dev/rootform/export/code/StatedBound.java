@@ -37,7 +37,7 @@ record StatedBound(double relative, double term) {
         if (!Double.isFinite(value)) {
             return false;
         }
-        BigDecimal error = new BigDecimal(value).subtract(exact).abs();
+        BigDecimal error = CodeMeasurement.measurable(new BigDecimal(value).subtract(exact).abs(), exact);
         BigDecimal allowed = exact.abs().multiply(new BigDecimal(relative))
                 .max(new BigDecimal((term + slack) * largestTerm));
         return error.compareTo(allowed) <= 0;
