@@ -43,6 +43,8 @@ public final class Analyzer {
     static final int SAMPLE_DIGITS = 17;
     /** Largest estimated size, in digits, of an exact sequence value that is computed exactly. */
     static final int EXACT_SIZE_LIMIT = 20_000;
+    /** Digits of a state (y, y', …) that starts an integrator window away from t0. */
+    static final int STATE_DIGITS = 30;
 
     private final int digits;
 
@@ -82,7 +84,7 @@ public final class Analyzer {
             }
             if (!solution.problem().conditions().isEmpty()) {
                 checks.add(bvp.conditionsCheck(digits));
-                checks.add(bvp.integratorCheck());
+                checks.add(bvp.integratorCheck(TimeScales.of(solution.problem().equation(), roots)));
             }
         }
         solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p, cache))));
@@ -91,7 +93,7 @@ public final class Analyzer {
             ExactSolution s = exact.get();
             points.forEach(p -> values.add(exactValue(s, p, cache)));
             if (s.domain() == Domain.DIFFERENTIAL) {
-                checks.add(integratorCheck(s, cache));
+                checks.add(integratorCheck(s, roots, cache));
             }
         }
         List<PointValue> samples = new ArrayList<>(values);
@@ -222,20 +224,30 @@ public final class Analyzer {
         return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
     }
 
-    /** The integrator cross-check from the exact derivatives at the origin t0, at t0 + {@link IntegratorCheck#OFFSETS}. */
-    private static Check integratorCheck(ExactSolution s, RootCache cache) {
+    /** The integrator cross-check from the exact derivatives at the origin t0, on the problem's time scales. */
+    private static Check integratorCheck(ExactSolution s, List<RootApproximation> roots, RootCache cache) {
         int k = s.equation().order();
         List<Rational> initial = new ArrayList<>(k);
         for (int d = 0; d < k; d++) {
             initial.add(s.derivativeAtOrigin(d));
         }
-        double t0 = s.origin().doubleValue();
-        double[] points = new double[IntegratorCheck.OFFSETS.length];
-        double[] closed = new double[points.length];
-        for (int i = 0; i < points.length; i++) {
-            points[i] = t0 + IntegratorCheck.OFFSETS[i];
-            closed[i] = functionValue(s, Rational.of(BigDecimal.valueOf(points[i])), 17, cache).value().doubleValue();
-        }
-        return IntegratorCheck.compare(s.equation(), s.origin(), initial, points, closed, "at t0 + " + IntegratorCheck.offsets());
+        IntegratorCheck.Solved closed = new IntegratorCheck.Solved() {
+            @Override
+            public double value(double t) {
+                return functionValue(s, Rational.of(new BigDecimal(t)), SAMPLE_DIGITS, cache).value().doubleValue();
+            }
+
+            @Override
+            public List<Rational> state(Rational t) {
+                ModeSum sum = ModeSum.of(s, cache, STATE_DIGITS + WorkingPrecision.GUARD_DIGITS);
+                List<Rational> state = new ArrayList<>(k);
+                for (int d = 0; d < k; d++) {
+                    state.add(Rational.of(Decimals.toBigDecimal(sum.derivative(d, t), STATE_DIGITS)));
+                }
+                return state;
+            }
+        };
+        return IntegratorCheck.compare(s.equation(), s.origin(), initial, TimeScales.of(s.equation(), roots), List.of(), closed,
+                "t0");
     }
 }

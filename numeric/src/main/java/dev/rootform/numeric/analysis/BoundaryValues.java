@@ -275,29 +275,34 @@ final class BoundaryValues {
 
     /**
      * The integrator cross-check from the first condition point t0, starting from this solution's
-     * derivatives there, at the other condition points and at t0 + {@link IntegratorCheck#OFFSETS}.
+     * derivatives there, on the problem's time scales and at the other condition points.
      */
-    Check integratorCheck() {
+    Check integratorCheck(TimeScales scales) {
         List<Condition> conditions = solution.problem().conditions();
         // the start, rounded to a rational when it is a multiple of π; the derivatives are taken there
         Rational t0 = Rational.of(Decimals.toBigDecimal(point(conditions.get(0), precision), 40));
-        int k = solution.problem().equation().order();
-        List<Rational> initial = new ArrayList<>();
-        for (int d = 0; d < k; d++) {
-            initial.add(Rational.of(Decimals.toBigDecimal(derivative(d, t0), 30)));
-        }
-        List<Apfloat> points = new ArrayList<>();
+        List<Double> others = new ArrayList<>();
         for (Condition c : conditions) {
             if (!c.samePoint(conditions.get(0))) {
-                points.add(point(c, precision));
+                others.add(point(c, precision).doubleValue());
             }
         }
-        for (double offset : IntegratorCheck.OFFSETS) {
-            points.add(Decimals.toApfloat(t0, precision).add(new Apfloat(offset, precision)));
-        }
-        double[] at = points.stream().mapToDouble(Apfloat::doubleValue).toArray();
-        double[] closed = points.stream().mapToDouble(p -> derivative(0, p).doubleValue()).toArray();
-        return IntegratorCheck.compare(solution.problem().equation(), t0, initial, at, closed, "from t = "
-                + conditions.get(0).point() + " to the other condition points and t0 + " + IntegratorCheck.offsets());
+        IntegratorCheck.Solved closed = new IntegratorCheck.Solved() {
+            @Override
+            public double value(double t) {
+                return derivative(0, new Apfloat(new BigDecimal(t), precision)).doubleValue();
+            }
+
+            @Override
+            public List<Rational> state(Rational t) {
+                List<Rational> state = new ArrayList<>();
+                for (int d = 0; d < solution.problem().equation().order(); d++) {
+                    state.add(Rational.of(Decimals.toBigDecimal(derivative(d, t), Analyzer.STATE_DIGITS)));
+                }
+                return state;
+            }
+        };
+        return IntegratorCheck.compare(solution.problem().equation(), t0, closed.state(t0), scales, others, closed,
+                "t = " + conditions.get(0).point());
     }
 }
