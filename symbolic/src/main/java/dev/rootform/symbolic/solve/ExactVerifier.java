@@ -27,6 +27,8 @@ import java.util.function.LongFunction;
  * @since 0.1
  */
 final class ExactVerifier {
+    /** The name of the check of the conditions. */
+    static final String CONDITIONS = "meets the conditions";
     /** How many terms the independent reference compares beyond the order. */
     static final int REFERENCE_TERMS = 40;
     /** Extra points at which L y - g is checked beyond the deg A that prove it. */
@@ -155,11 +157,11 @@ final class ExactVerifier {
                     ? solution.valueAt(c.at().toBigInteger().longValueExact())
                     : solution.derivativeAtOrigin(c.derivative());
             if (!actual.equals(c.value())) {
-                return new Check("meets the conditions", false,
+                return new Check(CONDITIONS, false,
                         "condition at " + c.at() + " gives " + actual + ", expected " + c.value());
             }
         }
-        return new Check("meets the conditions", true, "each condition evaluated exactly");
+        return new Check(CONDITIONS, true, "each condition evaluated exactly");
     }
 
     private static Check iteration(ExactSolution solution) {

@@ -126,8 +126,9 @@ public final class Solver {
         ClosedForm general = ClosedFormBuilder.general(eq, factors);
         List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
         if (eq.isHomogeneous()) {
-            return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), general, general, Optional.empty(),
-                    Optional.empty(), Optional.empty(), false, checks);
+            return exactBoundary(problem, chi, mu, general, general).orElseGet(() -> new Solution(problem, chi, factors,
+                    ClosedFormBuilder.roots(factors), general, general, Optional.empty(), Optional.empty(), Optional.empty(), false,
+                    checks));
         }
         List<Condition> zero = zeroConditions(eq);
         ExactSolution particular = withoutTransient(fitted(eq, mu, zero, ForcingPart.RATIONAL), factors);
@@ -138,9 +139,26 @@ public final class Solver {
             checks.addAll(radicalChecks(radical, List.of(), mu.radicand()));
             both = Optional.of(new RadicalSolution(mu.radicand(), particular, radical));
         }
-        return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors),
-                ClosedFormBuilder.withParticular(general, ClosedFormBuilder.fitted(particular, both, factors)), general,
-                Optional.empty(), Optional.of(particular), Optional.empty(), false, checks);
+        ClosedForm form = ClosedFormBuilder.withParticular(general, ClosedFormBuilder.fitted(particular, both, factors));
+        return exactBoundary(problem, chi, mu, general, form).orElseGet(() -> new Solution(problem, chi, factors,
+                ClosedFormBuilder.roots(factors), form, general, Optional.empty(), Optional.of(particular), Optional.empty(), false,
+                checks));
+    }
+
+    /**
+     * The exact answer to conditions of a differential equation at several points or at a multiple of
+     * π, when the constants are exact ({@link ExactBoundary}); empty when there are no conditions or an
+     * entry of their system is not exact.
+     */
+    private static Optional<Solution> exactBoundary(Problem problem, RationalPolynomial chi, Operator mu, ClosedForm general,
+            ClosedForm form) {
+        LinearEquation eq = problem.equation();
+        if (problem.conditions().isEmpty() || eq.domain() != Domain.DIFFERENTIAL) {
+            return Optional.empty();
+        }
+        return ExactBoundary.solve(problem, chi, mu.characteristic(), general, form,
+                conditions -> fitted(eq, mu, conditions, ForcingPart.RATIONAL),
+                conditions -> fitted(eq.homogeneous(), mu, conditions, ForcingPart.RATIONAL));
     }
 
     /** {@link ConditionFitter#fit}, with a free solution attached when the conditions leave one. */
