@@ -89,12 +89,10 @@ public final class Analyzer {
         }
         solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p, cache))));
         Optional<ExactSolution> exact = solution.exact();
-        if (exact.isPresent()) {
-            ExactSolution s = exact.get();
-            points.forEach(p -> values.add(exactValue(s, p, cache)));
-            if (s.domain() == Domain.DIFFERENTIAL) {
-                checks.add(integratorCheck(s, roots, cache));
-            }
+        exact.ifPresent(s -> points.forEach(p -> values.add(exactValue(s, p, cache))));
+        if (solution.problem().equation().domain() == Domain.DIFFERENTIAL) {
+            exact.map(s -> FittedFunction.of(s, cache)).or(() -> solution.radical().map(r -> FittedFunction.of(r, cache)))
+                    .ifPresent(f -> checks.add(f.integratorCheck(roots)));
         }
         List<PointValue> samples = new ArrayList<>(values);
         exact.ifPresent(s -> samples.addAll(samples(s, cache)));
@@ -131,7 +129,7 @@ public final class Analyzer {
     }
 
     private PointValue exactValue(ExactSolution s, Rational p, RootCache cache) {
-        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p, digits, cache) : functionValue(s, p, digits, cache);
+        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p, digits, cache) : FittedFunction.of(s, cache).value(p, digits);
     }
 
     /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
@@ -139,7 +137,7 @@ public final class Analyzer {
         List<PointValue> samples = new ArrayList<>();
         for (long offset : SAMPLE_OFFSETS) {
             samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset), SAMPLE_DIGITS, cache)
-                    : functionValue(s, s.origin().add(Rational.of(offset)), SAMPLE_DIGITS, cache));
+                    : FittedFunction.of(s, cache).value(s.origin().add(Rational.of(offset)), SAMPLE_DIGITS));
         }
         return samples;
     }
@@ -170,6 +168,9 @@ public final class Analyzer {
      * the digits asked ({@link #sequenceValue}).
      */
     private PointValue radicalValue(RadicalSolution r, Rational at, RootCache cache) {
+        if (r.rational().domain() == Domain.DIFFERENTIAL) {
+            return FittedFunction.of(r, cache).value(at, digits);
+        }
         long n = at.toBigInteger().longValueExact();
         double size = Math.max(SequenceSum.exactDigits(r.rational(), n, cache), SequenceSum.exactDigits(r.radical(), n, cache));
         if (n < r.rational().validFrom() || size <= Math.max(EXACT_SIZE_LIMIT, digits)) {
@@ -208,46 +209,5 @@ public final class Analyzer {
         return WorkingPrecision.settle(wanted + lost, evaluate,
                 (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
                 (working, high) -> working + WorkingPrecision.GUARD_DIGITS + lost, "value at n = " + n);
-    }
-
-    /** y(t) to {@code wanted} significant digits. */
-    private static PointValue functionValue(ExactSolution s, Rational t, int wanted, RootCache cache) {
-        if (t.equals(s.origin())) {
-            Rational v = s.derivativeAtOrigin(0);
-            return new PointValue(t, v.toBigDecimal(new MathContext(wanted)), Optional.of(v));
-        }
-        Apfloat[] settled = WorkingPrecision.settle(wanted, working -> ModeSum.of(s, cache, working).valueAndLargest(t),
-                (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
-                (working, high) -> working + WorkingPrecision.GUARD_DIGITS
-                        + (int) Math.ceil(ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10)),
-                "value at t = " + t);
-        return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
-    }
-
-    /** The integrator cross-check from the exact derivatives at the origin t0, on the problem's time scales. */
-    private static Check integratorCheck(ExactSolution s, List<RootApproximation> roots, RootCache cache) {
-        int k = s.equation().order();
-        List<Rational> initial = new ArrayList<>(k);
-        for (int d = 0; d < k; d++) {
-            initial.add(s.derivativeAtOrigin(d));
-        }
-        IntegratorCheck.Solved closed = new IntegratorCheck.Solved() {
-            @Override
-            public double value(double t) {
-                return functionValue(s, Rational.of(new BigDecimal(t)), SAMPLE_DIGITS, cache).value().doubleValue();
-            }
-
-            @Override
-            public List<Rational> state(Rational t) {
-                ModeSum sum = ModeSum.of(s, cache, STATE_DIGITS + WorkingPrecision.GUARD_DIGITS);
-                List<Rational> state = new ArrayList<>(k);
-                for (int d = 0; d < k; d++) {
-                    state.add(Rational.of(Decimals.toBigDecimal(sum.derivative(d, t), STATE_DIGITS)));
-                }
-                return state;
-            }
-        };
-        return IntegratorCheck.compare(s.equation(), s.origin(), initial, TimeScales.of(s.equation(), roots), List.of(), closed,
-                "t0");
     }
 }

@@ -8,6 +8,7 @@ import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
+import dev.rootform.symbolic.solve.RadicalSolution;
 import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
@@ -48,6 +49,16 @@ final class ModeSum {
             }
         }
         return new ModeSum(s.origin(), modes, precision);
+    }
+
+    /** y = a + √r·b of a radical solution: the modes of a, and those of b with weights times √r. */
+    static ModeSum of(RadicalSolution r, RootCache cache, long precision) {
+        List<Mode> modes = new ArrayList<>(of(r.rational(), cache, precision).modes);
+        Apfloat root = org.apfloat.ApfloatMath.sqrt(new Apfloat(r.radicand(), precision));
+        for (Mode m : of(r.radical(), cache, precision).modes) {
+            modes.add(new Mode(m.weight().multiply(root), m.power(), m.rate()));
+        }
+        return new ModeSum(r.rational().origin(), modes, precision);
     }
 
     /**
