@@ -5,6 +5,7 @@ import dev.rootform.export.NumericForm;
 import dev.rootform.export.Report;
 import dev.rootform.export.notation.CommentText;
 import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.NumericConstants;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
@@ -115,7 +116,7 @@ final class CodeHeader {
         if (r.analysis().constantValues().isEmpty()) {
             return List.of();
         }
-        return List.of("Constants fixed numerically (not exact rationals), to " + r.digits() + " digits: "
+        return List.of("Constants fixed numerically (" + NumericConstants.REASON + "), to " + r.digits() + " digits: "
                 + r.analysis().constantValues().entrySet().stream()
                         .map(e -> e.getKey() + " = " + Numbers.decimal(e.getValue(), r.digits())).collect(Collectors.joining(", ")));
     }

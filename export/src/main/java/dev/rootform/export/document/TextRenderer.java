@@ -5,8 +5,10 @@ import dev.rootform.export.notation.BasisCoefficient;
 import dev.rootform.export.notation.EquationText;
 import dev.rootform.export.notation.Formulas;
 import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.NumericConstants;
 import dev.rootform.export.notation.RootText;
 import dev.rootform.numeric.analysis.PointValue;
+import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.analysis.SteadyState;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
@@ -99,8 +101,9 @@ public final class TextRenderer {
         List<String> lines = new ArrayList<>();
         lines.add(EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f));
         if (!f.particularTerms().isEmpty()) {
-            lines.add("transient (homogeneous) part: " + Formulas.plain(f.withTerms(f.transientTerms())));
-            lines.add("steady (particular) part: " + Formulas.plain(f.withTerms(f.particularTerms())));
+            boolean settles = r.diagnostics().map(Diagnostics::settles).orElse(false);
+            lines.add((settles ? "transient (homogeneous)" : "homogeneous") + " part: " + Formulas.plain(f.withTerms(f.transientTerms())));
+            lines.add((settles ? "steady (particular)" : "particular") + " part: " + Formulas.plain(f.withTerms(f.particularTerms())));
         }
         if (f.domain() == Domain.DIFFERENCE) {
             lines.add("for " + f.variable() + " ≥ " + f.validFrom());
@@ -117,7 +120,7 @@ public final class TextRenderer {
         }
         Map<String, BigDecimal> values = r.analysis().constantValues();
         if (!values.isEmpty()) {
-            lines.add("constants fixed numerically (not exact rationals; solved to " + r.digits() + " digits):");
+            lines.add("constants fixed numerically (" + NumericConstants.REASON + "; solved to " + r.digits() + " digits):");
             values.forEach((name, value) -> lines.add("  " + name + " ≈ " + Numbers.decimal(value, r.digits())));
         }
         List<String> free = f.freeConstants().stream().filter(n -> !values.containsKey(n)).toList();
