@@ -22,6 +22,7 @@ import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
@@ -33,8 +34,10 @@ import java.util.stream.Stream;
  * @since 0.1
  */
 public final class TextRenderer {
-    /** Exact values longer than this are shown as rounded decimals. */
+    /** Exact integers longer than this are shown as rounded decimals. */
     private static final int EXACT_LIMIT = 60;
+    /** Fractions (and each part of a surd) longer than this are shown as rounded decimals. */
+    private static final int SHORT_FRACTION = 15;
 
     private TextRenderer() {
     }
@@ -130,13 +133,22 @@ public final class TextRenderer {
         return lines;
     }
 
-    /** With --numeric: the solution as Σ decimal·basis, then the same range lines as the exact form. */
+    /** With --numeric: the solution as Σ ± decimal·basis, then the same range lines as the exact form. */
     private static List<String> numericSolution(ClosedForm f, Report r) {
         int digits = r.digits();
         List<String> lines = new ArrayList<>(solution(f, r));
-        String sum = BasisCoefficient.of(f).stream().filter(c -> !c.value().isZero())
-                .map(c -> "(" + c.decimal(digits) + ")·" + c.basis()).collect(Collectors.joining(" + "));
-        lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.isEmpty() ? "0" : sum));
+        StringBuilder sum = new StringBuilder();
+        for (BasisCoefficient c : BasisCoefficient.of(f)) {
+            if (c.value().isZero()) {
+                continue;
+            }
+            String decimal = c.decimal(digits);
+            boolean negative = decimal.startsWith("-");
+            String size = negative ? decimal.substring(1) : decimal;
+            String term = c.basis().equals("1") ? size : size.equals("1") ? c.basis() : size + "·" + c.basis();
+            sum.append(sum.length() == 0 ? (negative ? "-" : "") : negative ? " - " : " + ").append(term);
+        }
+        lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.length() == 0 ? "0" : sum));
         return lines;
     }
 
@@ -156,17 +168,39 @@ public final class TextRenderer {
         return at + exactOrDecimal(v, digits);
     }
 
-    /** {@code " = 55"} when the exact value is known and short, else {@code " ≈ 0.2231"}. */
+    /**
+     * {@code " = 55"} for an exact integer, {@code " = 80.15625"} for an exact value whose decimal ends
+     * within the digits asked, {@code " = 1/3"} for a short fraction or surd, else the decimal
+     * {@code " ≈ 0.2231"} (the exact value of a sequence is in JSON): long fractions, such as money
+     * balances, read as decimals.
+     */
     private static String exactOrDecimal(PointValue v, int digits) {
-        String exact = v.exact().filter(TextRenderer::fitsShort).map(Rational::toString)
-                .or(() -> v.exactSurd().filter(q -> fitsShort(q.rational()) && fitsShort(q.coefficient())).map(Object::toString))
-                .orElse("");
-        return !exact.isEmpty() && exact.length() <= EXACT_LIMIT ? " = " + exact : " ≈ " + Numbers.decimal(v.value(), digits);
+        Optional<String> exact = v.exact().filter(q -> fitsShort(q, EXACT_LIMIT)).flatMap(q -> exactText(q, digits))
+                .or(() -> v.exactSurd().filter(q -> fitsShort(q.rational(), SHORT_FRACTION) && fitsShort(q.coefficient(), SHORT_FRACTION))
+                        .map(Object::toString).filter(t -> t.length() <= 2 * SHORT_FRACTION));
+        return exact.map(t -> " = " + t).orElse(" ≈ " + Numbers.decimal(v.value(), digits));
     }
 
-    /** Whether the exact value may fit {@link #EXACT_LIMIT} characters, judged without writing it out. */
-    private static boolean fitsShort(Rational q) {
-        return (q.numerator().bitLength() + q.denominator().bitLength()) * Math.log10(2) <= EXACT_LIMIT + 2;
+    /** An integer as it is, a terminating decimal within {@code digits} significant digits, or a short fraction. */
+    private static Optional<String> exactText(Rational q, int digits) {
+        if (q.isInteger()) {
+            return Optional.of(q.toString());
+        }
+        try {
+            BigDecimal d = new BigDecimal(q.numerator()).divide(new BigDecimal(q.denominator())).stripTrailingZeros();
+            if (d.precision() <= digits) {
+                return Optional.of(d.toPlainString());
+            }
+        } catch (ArithmeticException endless) {
+            // a repeating decimal: only a short fraction is shown exactly
+        }
+        String fraction = q.toString();
+        return fraction.length() <= SHORT_FRACTION ? Optional.of(fraction) : Optional.empty();
+    }
+
+    /** Whether the exact value may fit {@code limit} characters, judged without writing it out. */
+    private static boolean fitsShort(Rational q, int limit) {
+        return (q.numerator().bitLength() + q.denominator().bitLength()) * Math.log10(2) <= limit + 2;
     }
 
     private static String pad(String s, int width) {

@@ -2,6 +2,9 @@ package dev.rootform.numeric.diagnostics;
 
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Factor;
+import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.closedform.ExactRoot;
+import dev.rootform.symbolic.closedform.Surd;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -18,8 +21,24 @@ record FactorRoot(Factor factor, RootApproximation approximation) {
         return approximation.im().doubleValue();
     }
 
+    /** |λ|, exactly 1 for a root of unity or an explicit root with re² + im² = 1 (decided exactly). */
     double modulus() {
-        return Math.hypot(re(), im());
+        return unitModulus() ? 1.0 : Math.hypot(re(), im());
+    }
+
+    private boolean unitModulus() {
+        ExactRoot root = approximation.root();
+        if (root instanceof ExactRoot.OfUnity) {
+            return true;
+        }
+        if (root instanceof ExactRoot.Explicit e) {
+            try {
+                return e.re().multiply(e.re()).add(e.im().multiply(e.im())).equals(Surd.of(Rational.ONE));
+            } catch (ArithmeticException twoRadicands) {
+                return false;
+            }
+        }
+        return false;
     }
 
     int multiplicity() {

@@ -156,6 +156,12 @@ public record Surd(Rational rational, Rational coefficient, BigInteger radicand)
                 outside = outside.multiply(BigInteger.valueOf(p));
             }
         }
+        // what is left has no square of a prime below the trial limit; it may still be a square
+        // of primes above the limit
+        BigInteger rest = inside.sqrt();
+        if (rest.multiply(rest).equals(inside)) {
+            return new BigInteger[] {outside.multiply(rest), BigInteger.ONE};
+        }
         return new BigInteger[] {outside, inside};
     }
 
