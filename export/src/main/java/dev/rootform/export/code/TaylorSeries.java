@@ -81,7 +81,7 @@ final class TaylorSeries {
             } else if (t instanceof Term.ConjugateSum r) {
                 for (Enclosure z : new RootFinder(WaveBuilder.DIGITS).roots(r.factor())) {
                     Apcomplex alpha = new Apcomplex(new Apfloat(z.re(), precision), new Apfloat(z.im(), precision));
-                    add(sum, WaveBuilder.value(r, alpha, false), alpha, r.power(), h);
+                    add(sum, WaveBuilder.value(r, alpha), alpha, r.power(), h);
                 }
             } else {
                 throw new AssertionError(t);

@@ -1,13 +1,9 @@
 package dev.rootform.export.code;
 
-import dev.rootform.export.CodeFacts;
-import dev.rootform.export.NumericForm;
 import dev.rootform.export.Wave;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.numeric.roots.RootFinder;
 import dev.rootform.symbolic.algebra.Cyclotomic;
-import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.Coefficient;
@@ -83,13 +79,13 @@ final class WaveBuilder {
     }
 
     private static void conjugateSum(Term.ConjugateSum r, boolean differential, List<Wave> out) {
-        boolean someVanish = vanishesAtSomeRoots(r);
+        boolean someVanish = r.vanishesAtSomeRoots();
         OptionalInt order = differential ? OptionalInt.empty() : Cyclotomic.order(r.factor());
         for (Enclosure z : new RootFinder(DIGITS).roots(r.factor())) {
             Apcomplex alpha = new Apcomplex(apfloat(z.re()), apfloat(z.im()));
-            Apcomplex c = value(r, alpha, false);
-            if (someVanish && ApcomplexMath.abs(c).compareTo(ApcomplexMath.abs(value(r, alpha, true))) < 0) {
-                continue; // c(α) = 0 exactly at this root (see vanishesAtSomeRoots)
+            Apcomplex c = value(r, alpha);
+            if (someVanish && ApcomplexMath.abs(c).compareTo(ApcomplexMath.abs(value(r.conjugated(), alpha))) < 0) {
+                continue; // c(α) = 0 exactly at this root (Term.ConjugateSum#vanishesAtSomeRoots)
             }
             if (z.isReal()) {
                 Apfloat root = apfloat(z.re());
@@ -116,49 +112,18 @@ final class WaveBuilder {
         return Math.abs(x.subtract(new Apfloat(new BigDecimal(round(x)), CONTEXT.getPrecision())).doubleValue());
     }
 
-    /**
-     * c(α) = Σ_j c_j α^j with c_j = a_j + b_j√r, or its conjugate c'(α) = Σ_j (a_j - b_j√r)α^j when
-     * {@code conjugate}.
-     */
-    static Apcomplex value(Term.ConjugateSum r, Apcomplex alpha, boolean conjugate) {
+    /** c(α) = Σ_j c_j α^j at the working precision. */
+    static Apcomplex value(Term.ConjugateSum r, Apcomplex alpha) {
         Apcomplex c = Apcomplex.ZERO;
         for (int j = r.coefficients().size() - 1; j >= 0; j--) {
-            Surd cj = ((Coefficient.Exact) r.coefficients().get(j)).value();
-            c = c.multiply(alpha).add(surd(conjugate && !cj.isRational()
-                    ? Surd.of(cj.rational(), cj.coefficient().negate(), Rational.of(cj.radicand())) : cj));
+            c = c.multiply(alpha).add(exact(r.coefficients().get(j)));
         }
         return c;
     }
 
-    /**
-     * Whether c(α) = a(α) + √r·b(α) vanishes exactly at some roots α of the irreducible factor f (a
-     * conjugate sum whose coefficients carry the √r of a forcing): then c(α)·c'(α) = a(α)² - r·b(α)²
-     * = 0, so f divides a² - r·b²; conversely, when f divides it, c or c' vanishes at each root, and at
-     * a root where c' vanishes and c does not, |c(α)| = 2√r·|b(α)| &gt; |c'(α)| = 0. So a root with
-     * |c(α)| &lt; |c'(α)| has c(α) = 0 exactly, and the term has no mode there (rather than an
-     * amplitude of rounding size).
-     */
-    private static boolean vanishesAtSomeRoots(Term.ConjugateSum r) {
-        List<Rational> a = new ArrayList<>();
-        List<Rational> b = new ArrayList<>();
-        Rational radicand = Rational.ONE;
-        for (Coefficient c : r.coefficients()) {
-            Surd s = ((Coefficient.Exact) c).value();
-            a.add(s.rational());
-            b.add(s.coefficient());
-            radicand = s.isRational() ? radicand : Rational.of(s.radicand());
-        }
-        RationalPolynomial pa = RationalPolynomial.of(a);
-        RationalPolynomial pb = RationalPolynomial.of(b);
-        if (pb.isZero()) {
-            return false;
-        }
-        return pa.multiply(pa).subtract(pb.multiply(pb).multiply(radicand)).mod(r.factor()).isZero();
-    }
-
     /** The nearest double (BigDecimal's conversion rounds correctly). */
     private static double round(Apfloat x) {
-        return new BigDecimal(x.toString(true)).doubleValue();
+        return new BigDecimal(x.toString(false)).doubleValue();
     }
 
     /** An exact coefficient at the working precision. */

@@ -7,7 +7,6 @@ import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.TreeSet;
 import java.util.stream.Collectors;
