@@ -12,7 +12,9 @@ import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.analysis.SteadyState;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.ExactRoot;
+import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -133,20 +135,34 @@ public final class TextRenderer {
         return lines;
     }
 
-    /** With --numeric: the solution as Σ ± decimal·basis, then the same range lines as the exact form. */
+    /**
+     * With --numeric: the solution as Σ ± decimal·basis, conjugate sums written mode by mode (real
+     * modes and cos/sin pairs in decimals), then the same range lines as the exact form.
+     */
     private static List<String> numericSolution(ClosedForm f, Report r) {
         int digits = r.digits();
         List<String> lines = new ArrayList<>(solution(f, r));
-        StringBuilder sum = new StringBuilder();
-        for (BasisCoefficient c : BasisCoefficient.of(f)) {
-            if (c.value().isZero()) {
+        List<ModalText.Summand> summands = new ArrayList<>();
+        int sums = 0;
+        for (Term t : f.terms()) {
+            if (t instanceof Term.ConjugateSum && sums < r.analysis().conjugateSumModes().size()
+                    && t.coefficients().stream().allMatch(Coefficient.Exact.class::isInstance)) {
+                summands.addAll(ModalText.summands(f, r.analysis().conjugateSumModes().get(sums++), digits));
                 continue;
             }
-            String decimal = c.decimal(digits);
-            boolean negative = decimal.startsWith("-");
-            String size = negative ? decimal.substring(1) : decimal;
-            String term = c.basis().equals("1") ? size : size.equals("1") ? c.basis() : size + "·" + c.basis();
-            sum.append(sum.length() == 0 ? (negative ? "-" : "") : negative ? " - " : " + ").append(term);
+            for (BasisCoefficient c : BasisCoefficient.of(f.withTerms(List.of(t)))) {
+                if (!c.value().isZero()) {
+                    String decimal = c.decimal(digits);
+                    boolean negative = decimal.startsWith("-");
+                    String size = negative ? decimal.substring(1) : decimal;
+                    summands.add(new ModalText.Summand(negative,
+                            c.basis().equals("1") ? size : size.equals("1") ? c.basis() : size + "·" + c.basis()));
+                }
+            }
+        }
+        StringBuilder sum = new StringBuilder();
+        for (ModalText.Summand s : summands) {
+            sum.append(sum.length() == 0 ? (s.negative() ? "-" : "") : s.negative() ? " - " : " + ").append(s.text());
         }
         lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.length() == 0 ? "0" : sum));
         return lines;

@@ -100,7 +100,8 @@ public final class Analyzer {
                 samples.stream().map(v -> new SampleValue(v.at(), v.value())).toList());
         List<SteadyState> steady = diagnostics.stability().verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE
                 ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
-        return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings());
+        return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings(),
+                ConjugateSumModes.of(solution.closedForm(), digits, cache));
     }
 
     /**
