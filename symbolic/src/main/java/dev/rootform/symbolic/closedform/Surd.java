@@ -141,28 +141,36 @@ public record Surd(Rational rational, Rational coefficient, BigInteger radicand)
         return toBigDecimal(MathContext.DECIMAL64).doubleValue();
     }
 
-    /** {s, r} with n = s²·r and r free of the squares of primes below the trial limit. */
+    /**
+     * {s, r} with n = s²·r and r free of the squares of primes below the trial limit: each such prime
+     * is divided out (squared into s, once into r); what is left has only larger prime factors and
+     * goes into s when it is a square, else into r.
+     */
     private static BigInteger[] squareSplit(BigInteger n) {
         BigInteger outside = BigInteger.ONE;
-        BigInteger inside = n;
-        BigInteger whole = inside.sqrt();
-        if (whole.multiply(whole).equals(inside)) {
+        BigInteger kept = BigInteger.ONE;
+        BigInteger rest = n;
+        BigInteger whole = rest.sqrt();
+        if (whole.multiply(whole).equals(rest)) {
             return new BigInteger[] {whole, BigInteger.ONE};
         }
-        for (int p = 2; p < TRIAL_LIMIT && BigInteger.valueOf((long) p * p).compareTo(inside) <= 0; p++) {
+        for (int p = 2; p < TRIAL_LIMIT && BigInteger.valueOf((long) p * p).compareTo(rest) <= 0; p++) {
+            BigInteger prime = BigInteger.valueOf(p);
             BigInteger sq = BigInteger.valueOf((long) p * p);
-            while (inside.mod(sq).signum() == 0) {
-                inside = inside.divide(sq);
-                outside = outside.multiply(BigInteger.valueOf(p));
+            while (rest.mod(sq).signum() == 0) {
+                rest = rest.divide(sq);
+                outside = outside.multiply(prime);
+            }
+            if (rest.mod(prime).signum() == 0) {
+                rest = rest.divide(prime);
+                kept = kept.multiply(prime);
             }
         }
-        // what is left has no square of a prime below the trial limit; it may still be a square
-        // of primes above the limit
-        BigInteger rest = inside.sqrt();
-        if (rest.multiply(rest).equals(inside)) {
-            return new BigInteger[] {outside.multiply(rest), BigInteger.ONE};
+        BigInteger root = rest.sqrt();
+        if (root.multiply(root).equals(rest)) {
+            return new BigInteger[] {outside.multiply(root), kept};
         }
-        return new BigInteger[] {outside, inside};
+        return new BigInteger[] {outside, kept.multiply(rest)};
     }
 
     /** e.g. {@code 3}, {@code √5}, {@code 1/2 + 3/2·√5}. */

@@ -296,6 +296,8 @@ class ProblemParserTest {
         "y'(x) = y(t)                  | the variable is x, not t             | 8",
         "y' = 1e999999999              | number 1e999999999 is too large      | 5",
         "x[n+2000] = x[n]              | x[n+2000]: number too large          | 0",
+        "e''' + 3e'' + e = 1           | e is Euler's number and cannot name the unknown function | 0",
+        "e[n+1] = e[n] + 1             | e is Euler's number                  | 0",
     })
     void errors(String text, String message, int position) {
         assertError(text, message, position);
