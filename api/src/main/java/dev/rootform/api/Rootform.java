@@ -1,5 +1,7 @@
 package dev.rootform.api;
 
+import dev.rootform.numeric.analysis.ApfloatStartup;
+
 /**
  * The front door of rootform as a library: one {@link SolveRequest} in, one {@link Result} out.
  *
@@ -28,6 +30,11 @@ package dev.rootform.api;
  * @since 0.2
  */
 public final class Rootform {
+    static {
+        // before any call can run on two threads at once: apfloat's classes deadlock when first used concurrently
+        ApfloatStartup.initialize();
+    }
+
     private Rootform() {
     }
 
@@ -48,5 +55,28 @@ public final class Rootform {
      */
     public static Recovery recover(RecoverRequest request) {
         return RecoverJob.run(request);
+    }
+
+    /**
+     * Analyses a state-space model exactly: e^(At) or A^n entry by entry, the transfer matrix, the
+     * response to x0 and the input, stability and the Kalman ranks, all verified.
+     *
+     * @since 0.3
+     */
+    public static SystemResult system(SystemRequest request) {
+        return SystemJob.run(request);
+    }
+
+    /**
+     * Checks a claimed solution of a problem: exactly where the claim's numbers are exact, else
+     * numerically to {@link Options#digits()} digits; with the equation part, each condition,
+     * where claim and solution differ, named slips and the correct solution.
+     *
+     * @param request the problem, the claim and the options
+     * @return whether the claim holds, with the explanation, or why it was not checked
+     * @since 0.3
+     */
+    public static CheckResult check(CheckRequest request) {
+        return CheckJob.run(request);
     }
 }

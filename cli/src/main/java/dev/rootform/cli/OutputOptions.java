@@ -1,8 +1,11 @@
 package dev.rootform.cli;
 
+import dev.rootform.api.DocumentOptions;
 import dev.rootform.api.Exporters;
 import dev.rootform.api.Options;
 import dev.rootform.api.Result;
+import dev.rootform.export.CType;
+import dev.rootform.export.CVariant;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Exporter;
 import dev.rootform.export.Rendering;
@@ -24,7 +27,8 @@ import picocli.CommandLine.Option;
 
 /**
  * The options of every command that prints a solve answer: digits, values, format, output file,
- * names for generated code and the time limit; checked before any work, so a bad option fails fast.
+ * names and C variant of generated code and the time limit; checked before any work, so a bad
+ * option fails fast.
  */
 final class OutputOptions {
     @Option(names = "--digits", paramLabel = "N", description = "Significant digits of numeric output (default ${DEFAULT-VALUE}).")
@@ -55,6 +59,21 @@ final class OutputOptions {
     @Option(names = "--header", paramLabel = "FILE", description = "Write the C header to FILE (the source, on stdout or -o, includes it).")
     Path header;
 
+    @Option(names = "--standalone", description = "With --format latex: a complete document (article, 10 pt, A4) instead of a fragment.")
+    boolean standalone;
+
+    @Option(names = "--with-code", paramLabel = "LANG",
+            description = "With --format html: show the generated code (java or c) on the page.")
+    String withCode;
+
+    @Option(names = "--c-type", paramLabel = "TYPE",
+            description = "Floating type of generated C: double or float (single precision: powf, expf, cosf; default double).")
+    String cType;
+
+    @Option(names = "--c-no-libm", description = "Generated C without the math library: only + - * / (exact integer terms, "
+            + "powers by repeated squaring); refused when the formula needs exp or cos.")
+    boolean cNoLibm;
+
     @Option(names = "--time-limit", paramLabel = "SECONDS",
             description = "Give up after this many seconds (default ${DEFAULT-VALUE}); exit code 1.")
     int timeLimit = 300;
@@ -82,15 +101,40 @@ final class OutputOptions {
             return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
         }
         Exporter exporter = exporter();
-        refuse(exporter.refusal(answer.get()));
-        write(decorate.apply(exporter.render(answer.get(), codeNames())), spec.commandLine().getOut());
+        CodeNames names = codeNames();
+        refuse(exporter.refusal(answer.get(), names));
+        write(decorate.apply(exporter.render(answer.get(), names)), spec.commandLine().getOut());
         return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
     }
 
-    /** @throws InputException for an unknown format */
+    /**
+     * Writes a rendering that the command made itself (an answer other than a solve report) to -o
+     * or standard output, and a C header to --header; returns {@code exitCode}.
+     */
+    int print(Rendering rendering, int exitCode, CommandSpec spec) throws IOException {
+        write(rendering, spec.commandLine().getOut());
+        return exitCode;
+    }
+
+    /** The checked names for generated code. @throws InputException for a bad name */
+    CodeNames names() {
+        return codeNames();
+    }
+
+    /** @throws InputException for an unknown format, or a layout option the format does not take */
     private Exporter exporter() {
-        return Exporters.byName(format).orElseThrow(() -> new InputException(
-                "--format " + format + " is not one of " + String.join(", ", Exporters.names()), "", -1));
+        if (standalone && !format.equals("latex")) {
+            throw new InputException("--standalone is for --format latex (an html page is always complete)", "", -1);
+        }
+        if (withCode != null && !format.equals("html")) {
+            throw new InputException("--with-code is for --format html", "", -1);
+        }
+        if (withCode != null && !DocumentOptions.CODE_LANGUAGES.contains(withCode)) {
+            throw new InputException("--with-code " + withCode + " is not one of " + String.join(", ", DocumentOptions.CODE_LANGUAGES),
+                    "", -1);
+        }
+        return Exporters.byName(format, new DocumentOptions(standalone, Optional.ofNullable(withCode))).orElseThrow(
+                () -> new InputException("--format " + format + " is not one of " + String.join(", ", Exporters.names()), "", -1));
     }
 
     /**
@@ -107,10 +151,10 @@ final class OutputOptions {
         }
         return Options.builder().digits(digits).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
                 .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable)
-                .code(format.equals("java") || format.equals("c")).build();
+                .code(format.equals("java") || format.equals("c") || withCode != null).plots(format.equals("html")).build();
     }
 
-    /** @throws InputException for a bad class, package, function or header name */
+    /** @throws InputException for a bad class, package, function or header name, or a C option without --format c */
     private CodeNames codeNames() {
         refuse(Identifiers.javaClassRefusal(className));
         if (packageName != null) {
@@ -124,7 +168,17 @@ final class OutputOptions {
             refuse(Identifiers.cHeaderRefusal(header.getFileName().toString()));
         }
         return new CodeNames(Optional.ofNullable(packageName), className, function,
-                Optional.ofNullable(header).map(h -> h.getFileName().toString()));
+                Optional.ofNullable(header).map(h -> h.getFileName().toString()), cVariant());
+    }
+
+    /** @throws InputException for an unknown --c-type, or --c-type / --c-no-libm without --format c */
+    private CVariant cVariant() {
+        if ((cType != null || cNoLibm) && !format.equals("c")) {
+            throw new InputException((cType != null ? "--c-type" : "--c-no-libm") + " is for --format c", "", -1);
+        }
+        CType type = cType == null ? CType.DOUBLE : CType.byKeyword(cType).orElseThrow(() -> new InputException(
+                "--c-type " + cType + " is not one of double, float", "", -1));
+        return new CVariant(type, !cNoLibm);
     }
 
     /** @throws InputException with the refusal's message, when there is one */

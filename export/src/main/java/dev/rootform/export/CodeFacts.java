@@ -7,9 +7,10 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * What rootform measured about the double formula of generated code: the input range where every
- * term stays finite, the largest a normal double and the rounding of rates and angles cannot make
- * the phase or growth drift by more than {@link #DRIFT_LIMIT}; the time scales of the problem; and
+ * What rootform measured about the floating-point formula of generated code in one C variant (the
+ * double one is also the Java code's): the input range where every term stays finite, the largest a
+ * normal number of the variant's type and the rounding of rates and angles cannot make the phase or
+ * growth drift by more than {@link #DRIFT_LIMIT}; the time scales of the problem; and
  * the worst errors against values to 30 significant digits over a sample of points chosen from those
  * time scales inside that range ({@link Accuracy}), separately forward (t &ge; t0, or every index of
  * a sequence) and backward (t &lt; t0).
@@ -28,7 +29,7 @@ import java.util.Optional;
  */
 public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit, List<Double> timeScales,
         List<Rational> points, List<BigDecimal> exact, Accuracy forward, Optional<Accuracy> backward) {
-    /** Farthest input examined when searching the valid range. */
+    /** Farthest input examined when searching the valid range in double ({@link CType#cap()}). */
     public static final double CAP = 1e15;
     /** Largest drift of phase or growth (radians, or relative) from rounded rates and angles inside the valid range. */
     public static final double DRIFT_LIMIT = 1e-10;
@@ -47,7 +48,7 @@ public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit
         UNDERFLOW,
         /** The rounding of a rate or angle would make the phase or growth drift by more than {@link #DRIFT_LIMIT}. */
         DRIFT,
-        /** The search stopped at {@link #CAP}. */
+        /** The search stopped at the type's {@link CType#cap()}. */
         CAP
     }
 

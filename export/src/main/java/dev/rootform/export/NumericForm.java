@@ -2,17 +2,20 @@ package dev.rootform.export;
 
 import dev.rootform.symbolic.model.Domain;
 import java.util.List;
+import java.util.stream.DoubleStream;
 
 /**
- * The double-precision formula that generated code evaluates, and the same formula evaluated here
- * with the same operations in the same order ({@link StrictMath}), so that the accuracy stated in
- * a generated file is the accuracy of that file's Java code.
+ * The floating-point formula that generated code evaluates, and the same formula evaluated here
+ * with the same operations in the same order ({@link StrictMath}; in float or without the math
+ * library as the C of a {@link CVariant} does), so that the accuracy stated in a generated file is
+ * the accuracy of that file's code.
  *
  * <p>Near t0 a differential solution is evaluated from its Taylor series instead of its modes:
  * when |v| &le; {@code seriesRadius}, y = Σ_d series[d]·s^d with s = v/seriesRadius (exact, the
  * radius being a power of two) and series[d] = y^(d)(t0)·seriesRadius^d/d!. A step response from
- * rest is 1 − Σ modes, which cancels to nothing near t0 in double precision; its series starts with
- * the first nonzero derivative and keeps full relative accuracy there.
+ * rest is 1 − Σ modes, which cancels to nothing near t0 in floating point; its series starts with
+ * the first nonzero derivative and keeps full relative accuracy there. A sequence's wave whose angle
+ * per step is 2π·multiplier/modulus is reduced exactly in integers ({@link Wave#reducedStep}).
  *
  * @param domain differential (value(t), v = t − origin) or difference (value(n), v = n)
  * @param origin t0 of a differential equation, rounded; the first index of a sequence
@@ -51,38 +54,104 @@ public record NumericForm(Domain domain, double origin, long first, long validFr
 
     /** x[n] as the generated {@code value(long n)} computes it; n &ge; first. */
     public double valueAt(long n) {
-        return n < validFrom ? leading.get((int) (n - first)) : sum(n, n);
+        return valueAt(n, CVariant.DEFAULT);
     }
 
     /** y(t) as the generated {@code value(double t)} computes it. */
     public double valueAt(double t) {
-        double v = t - origin;
+        return valueAt(t, CVariant.DEFAULT);
+    }
+
+    /** x[n] as the generated C of {@code variant} computes it; n &ge; first. */
+    public double valueAt(long n, CVariant variant) {
+        return n < validFrom ? variant.type().round(leading.get((int) (n - first))) : sum(n, variant);
+    }
+
+    /** y(t) as the generated C of {@code variant} computes it, t passed in that variant's type. */
+    public double valueAt(double t, CVariant variant) {
+        CType type = variant.type();
+        double v = type.round(type.round(t) - type.round(origin));
         if (Math.abs(v) <= seriesRadius) {
-            double s = v / seriesRadius;
+            double s = type.round(v / seriesRadius);
             double total = 0.0;
             for (int d = series.size() - 1; d >= 0; d--) {
-                total = total * s + series.get(d);
+                total = type.round(type.round(total * s) + type.round(series.get(d)));
             }
             return total;
         }
-        return sum(v, 0);
+        return sum(v, variant);
     }
 
-    /** Σ waves at v (and index n, for reduced angles), in the order and with the operations of the generated code's loop. */
-    private double sum(double v, long n) {
+    /** Σ waves at v, in the order and with the operations of the generated code's loop. */
+    public double sum(double v) {
+        return sum(v, CVariant.DEFAULT);
+    }
+
+    /**
+     * Σ waves at v (for a sequence v = n) as the generated C of {@code variant} computes it: constants,
+     * v and every result rounded to its type, the math functions taken as correctly rounded to it
+     * (StrictMath's double result rounded once more), and without libm powers by the generated
+     * repeated squaring.
+     *
+     * @throws IllegalArgumentException for a variant without libm when {@link #needsLibm()}
+     */
+    public double sum(double v, CVariant variant) {
+        if (!variant.libm() && needsLibm()) {
+            throw new IllegalArgumentException("the formula needs the math library");
+        }
+        CType type = variant.type();
+        double x = type.round(v);
         double total = 0.0;
         for (Wave w : waves) {
-            double term = w.amplitude() * (differential() ? StrictMath.exp(w.growth() * v) : StrictMath.pow(w.growth(), v));
+            double g = type.round(w.growth());
+            double growth = differential() ? type.round(StrictMath.exp(type.round(g * x)))
+                    : variant.libm() ? type.round(StrictMath.pow(g, x)) : power(g, (long) v, type);
+            double term = type.round(type.round(w.amplitude()) * growth);
             if (w.power() > 0) {
-                term *= StrictMath.pow(v, w.power());
+                double p = variant.libm() ? type.round(StrictMath.pow(x, w.power())) : power(x, w.power(), type);
+                term = type.round(term * p);
             }
             if (w.frequency() != 0.0) {
-                double angle = w.reduced() ? w.frequency() * (double) w.reducedStep(n) : w.frequency() * v;
-                term *= StrictMath.cos(angle + w.phase());
+                double steps = w.reduced() ? (double) w.reducedStep((long) v) : x;
+                double angle = type.round(type.round(type.round(w.frequency()) * steps) + type.round(w.phase()));
+                term = type.round(term * type.round(StrictMath.cos(angle)));
             }
-            total += term;
+            total = type.round(total + term);
         }
         return total;
+    }
+
+    /**
+     * base^e by the repeated squaring of generated C without libm: e &lt; 0 gives 1/base^(−e); each
+     * product is rounded to {@code type}.
+     */
+    public static double power(double base, long e, CType type) {
+        long k = e < 0 ? -e : e;
+        double result = 1.0;
+        double b = base;
+        while (k != 0) {
+            if ((k & 1L) != 0) {
+                result = type.round(result * b);
+            }
+            b = type.round(b * b);
+            k >>>= 1;
+        }
+        return e < 0 ? type.round(1.0 / result) : result;
+    }
+
+    /**
+     * Every constant the code holds: origin, leading values, each wave's amplitude, growth, frequency
+     * and phase, and the series with its radius.
+     */
+    public DoubleStream constants() {
+        return DoubleStream.concat(DoubleStream.concat(DoubleStream.concat(DoubleStream.of(origin, seriesRadius),
+                leading.stream().mapToDouble(Double::doubleValue)), series.stream().mapToDouble(Double::doubleValue)),
+                waves.stream().flatMapToDouble(w -> DoubleStream.of(w.amplitude(), w.growth(), w.frequency(), w.phase())));
+    }
+
+    /** Whether evaluating the formula needs e^x or cos x: a differential equation, or a sequence with an oscillating term. */
+    public boolean needsLibm() {
+        return differential() || waves.stream().anyMatch(w -> w.frequency() != 0.0);
     }
 
     /**

@@ -4,6 +4,7 @@ import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.analysis.SteadyState;
 import dev.rootform.numeric.diagnostics.Diagnostics;
+import dev.rootform.numeric.plot.Plots;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
@@ -21,8 +22,9 @@ import java.util.Optional;
  * @param digits significant digits of the numeric parts
  * @param numeric show constants and roots as decimals to {@code digits} instead of exact forms (a
  *     presentation choice; the solution stays exact)
- * @param code the double-precision model that generated code evaluates, with its measured range and
- *     accuracy; present when it was asked for with the answer (a fitted solution only)
+ * @param code the floating-point model that generated code evaluates, with its measured range and
+ *     accuracy per C variant and the exact 64-bit term of an integer recurrence; present when it was
+ *     asked for with the answer (a fitted solution only)
  * @since 0.1
  */
 public record Report(Solution solution, Analysis analysis, int digits, boolean numeric, Optional<CodeModel> code) {
@@ -66,6 +68,11 @@ public record Report(Solution solution, Analysis analysis, int digits, boolean n
     /** Stability, modes, sensitivity; empty when not computed. */
     public Optional<Diagnostics> diagnostics() {
         return analysis.diagnostics();
+    }
+
+    /** The data of the report page's plots; empty unless it was asked for ({@code Options.plots}). */
+    public Optional<Plots> plots() {
+        return analysis.plots();
     }
 
     public List<String> warnings() {

@@ -1,11 +1,14 @@
 package dev.rootform.export.code;
 
+import dev.rootform.export.CType;
+import dev.rootform.export.CVariant;
 import dev.rootform.export.CodeFacts;
 import dev.rootform.export.NumericForm;
 import dev.rootform.export.Report;
 import dev.rootform.export.notation.CommentText;
 import dev.rootform.export.notation.Numbers;
 import dev.rootform.export.notation.NumericConstants;
+import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
@@ -13,12 +16,16 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Collectors;
 
 /**
  * The opening comment of generated code, as plain ASCII lines that cannot end a comment: the
  * {@link CommentText#summary} (equation, conditions, closed form, validity range), the constants
- * fixed numerically, the input range for double evaluation, the measured accuracy and the caution.
+ * fixed numerically, the valid input range for floating-point evaluation in the code's variant and
+ * what ends it, how the code evaluates near t0 and at large n, the accuracy measured on the
+ * problem's time scales with the stated bound, lines on further functions (exact terms) and the
+ * caution.
  *
  * @since 0.2
  */
@@ -26,38 +33,62 @@ final class CodeHeader {
     private CodeHeader() {
     }
 
-    /** The header lines for code that evaluates {@code form} (facts measured on it). */
-    static List<String> lines(Report r, NumericForm form, CodeFacts facts) {
+    /** The header lines for the Java code, which evaluates {@code form} in double with StrictMath ({@code facts}), plus {@code more}. */
+    static List<String> lines(Report r, NumericForm form, CodeFacts facts, List<String> more) {
+        return lines(r, form, Optional.of(facts), CVariant.DEFAULT, more);
+    }
+
+    /**
+     * The header lines for code of {@code variant} that evaluates {@code form}: with the numeric lines
+     * of {@code facts} when the code has a floating-point value function, then {@code more} (lines on
+     * further functions), then the caution.
+     */
+    static List<String> lines(Report r, NumericForm form, Optional<CodeFacts> facts, CVariant variant, List<String> more) {
         Solution s = r.solution();
         List<String> out = new ArrayList<>(CommentText.summary(s));
         out.addAll(constants(r));
+        facts.ifPresent(f -> out.addAll(numeric(r, form, f, variant)));
+        out.addAll(more);
+        out.add(CommentText.CAUTION);
+        return CommentText.wrap(out);
+    }
+
+    /** The range, evaluation and accuracy lines of floating-point evaluation in {@code variant}. */
+    private static List<String> numeric(Report r, NumericForm form, CodeFacts facts, CVariant variant) {
+        Solution s = r.solution();
+        CType type = variant.type();
         String v = s.closedForm().variable();
-        out.add("Valid input range of this code: " + input(form, facts.low()) + " <= " + v + " <= " + input(form, facts.high())
-                + " (" + (form.differential() ? "below: " + limit(facts.lowLimit()) + "; " : "") + "above: "
-                + limit(facts.highLimit()) + ").");
+        List<String> out = new ArrayList<>();
+        out.add("Valid input range of this code in " + type.keyword() + ": " + input(form, facts.low()) + " <= " + v + " <= "
+                + input(form, facts.high()) + " (" + (form.differential() ? "below: " + limit(facts.lowLimit(), type) + "; " : "")
+                + "above: " + limit(facts.highLimit(), type) + ").");
         if (!form.series().isEmpty()) {
             out.add("Near t0, for |" + v + " - t0| <= " + form.seriesRadius() + ", the code sums the Taylor series of "
                     + s.closedForm().function() + " at t0 (" + form.series().size() + " terms, coefficients "
                     + (s.exact().isPresent() ? "exact, rounded once" : "from the closed form at 40 digits")
                     + "): there the terms of the closed form cancel.");
         }
-        if (form.reduces()) {
+        if (form.reduces() && variant.libm()) {
             out.add("Angles that are rational multiples of pi per step are reduced exactly in integers ((n*k) mod M), "
                     + "so their phase does not drift however large n is.");
         }
+        String arithmetic = variant.equals(CVariant.DEFAULT) ? "with StrictMath (a C math library may differ in the last bits)"
+                : (type == CType.FLOAT ? "in float arithmetic as this code computes it, " : "in double arithmetic as this code computes it, ")
+                        + (variant.libm() ? "with powf, expf and cosf taken as correctly rounded to float (a C math library may "
+                                + "differ in the last bits)" : "with the powers formed by repeated squaring as this code forms them "
+                                + "(no math library)");
         out.add("Accuracy measured by rootform when it generated this code, against values to " + CodeMeasurement.EXACT_DIGITS
                 + " digits (" + (r.analysis().constantValues().isEmpty() ? "from the exact solution" : "from the closed form "
                 + "with the constants above") + ") at " + facts.points().size() + " points chosen from the problem's time scales ("
                 + facts.timeScales().stream().map(CodeHeader::shortNumber).collect(Collectors.joining(", "))
                 + "): dense near " + (form.differential() ? "t0" : "the first index") + ", then log-spaced to the ends of the "
-                + "valid range; with StrictMath (a C math library may differ in the last bits). L below is the largest term "
-                + "the code adds up at an input (" + (form.series().isEmpty() ? "" : "|SERIES[d]*s^d| near t0, else ")
-                + "|AMPLITUDE[i]*v^POWER[i]*" + (form.differential() ? "exp(GROWTH[i]*v)" : "GROWTH[i]^v") + "|); the stated "
-                + "bound is " + (int) CodeFacts.MARGIN + " x the worst measured, for inputs between the sample points.");
+                + "valid range; " + arithmetic + ". L below is the largest term the code adds up at an input ("
+                + (form.series().isEmpty() ? "" : "|SERIES[d]*s^d| near t0, else ") + "|AMPLITUDE[i]*v^POWER[i]*"
+                + (form.differential() ? "exp(GROWTH[i]*v)" : "GROWTH[i]^v") + "|); the stated bound is "
+                + (int) CodeFacts.MARGIN + " x the worst measured, for inputs between the sample points.");
         out.add(accuracy(form.differential() ? "For " + v + " >= t0" : "For every n", v, facts.forward()));
         facts.backward().ifPresent(a -> out.add(accuracy("For " + v + " < t0", v, a)));
-        out.add(CommentText.CAUTION);
-        return CommentText.wrap(out);
+        return out;
     }
 
     /** One side's measured errors and stated bound, ending in the bound |value - exact| <= max(R*|exact|, E*L). */
@@ -80,18 +111,18 @@ final class CodeHeader {
         return form.differential() ? shortNumber(form.origin() + value) : String.format("%.0f", value);
     }
 
-    private static String limit(CodeFacts.Limit limit) {
+    private static String limit(CodeFacts.Limit limit, CType type) {
         return switch (limit) {
             case FIRST_INDEX -> "the first index";
-            case OVERFLOW -> "a term would overflow a double";
-            case UNDERFLOW -> "every term would fall below the smallest normal double";
+            case OVERFLOW -> "a term would overflow a " + type.keyword();
+            case UNDERFLOW -> "every term would fall below the smallest normal " + type.keyword();
             case DRIFT -> "the rounding of a rate or angle would make the phase or growth drift by more than "
                     + shortNumber(CodeFacts.DRIFT_LIMIT);
-            case CAP -> "searched no farther than " + shortNumber(CodeFacts.CAP) + " from the start";
+            case CAP -> "searched no farther than " + shortNumber(type.cap()) + " from the start";
         };
     }
 
-    private static String at(dev.rootform.symbolic.algebra.Rational point) {
+    private static String at(Rational point) {
         return point.isInteger() ? point.toString() : shortNumber(point.doubleValue());
     }
 
@@ -106,8 +137,8 @@ final class CodeHeader {
      * make code impossible ({@link CodeRequests} refuses them).
      */
     static ClosedForm codeForm(Report r) {
-        java.util.Map<String, dev.rootform.symbolic.algebra.Rational> values = new java.util.LinkedHashMap<>();
-        r.analysis().constantValues().forEach((name, value) -> values.put(name, dev.rootform.symbolic.algebra.Rational.of(value)));
+        java.util.Map<String, Rational> values = new java.util.LinkedHashMap<>();
+        r.analysis().constantValues().forEach((name, value) -> values.put(name, Rational.of(value)));
         return r.solution().closedForm().withConstantValues(values);
     }
 

@@ -1,5 +1,7 @@
 package dev.rootform.export.code;
 
+import dev.rootform.export.CType;
+import dev.rootform.export.CVariant;
 import dev.rootform.export.CodeFacts;
 import dev.rootform.export.CodeFacts.Limit;
 import dev.rootform.export.NumericForm;
@@ -12,15 +14,20 @@ import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.TreeSet;
 
 /**
- * Measures the double formula of generated code ({@link CodeFacts}). The valid range: from the
- * start (t0, or the first index the formula holds for) outward until a term overflows, every term
+ * Measures the floating-point formula of generated code ({@link CodeFacts}) in each C variant that
+ * can evaluate it (the formula evaluated as that variant's code computes it,
+ * {@link NumericForm#sum(double, CVariant)}). The valid range, per floating type: from the start
+ * (t0, or the first index the formula holds for) outward until a term overflows, every term
  * underflows, or the rounding of rates and angles would make phase or growth drift by more than
- * {@link CodeFacts#DRIFT_LIMIT} (searched up to {@link CodeFacts#CAP}). The sample follows the
+ * {@link CodeFacts#DRIFT_LIMIT} (searched up to {@link CType#cap()}). The sample follows the
  * problem's own time scales (the waves' 1/|σ| and 1/ω; for sequences 1/|ln ρ| and periods 2π/θ):
  * dense near the start (halving steps down to 2^-44 of the shortest scale for functions, every index
  * of the first {@link #FIRST_INDICES} for sequences), quarter steps over the shortest and the longest
@@ -39,12 +46,6 @@ final class CodeMeasurement {
     static final int PER_DECADE = 8;
     /** Halving steps from the shortest time scale towards t0. */
     private static final int HALVINGS = 44;
-    /** ln(Double.MAX_VALUE) with a margin: a term above it overflows. */
-    private static final double LN_MAX = Math.log(Double.MAX_VALUE) - 1;
-    /** ln(Double.MIN_NORMAL) with a margin: when every term is below it, the value is subnormal. */
-    private static final double LN_MIN = Math.log(Double.MIN_NORMAL) + 1;
-    /** Relative rounding of one double operation. */
-    private static final double UNIT = 0x1p-53;
 
     private CodeMeasurement() {
     }
@@ -53,15 +54,57 @@ final class CodeMeasurement {
     private record Edge(double at, Limit limit) {
     }
 
-    /** Measures {@code form}, the emitted formula of {@code solution}'s closed form (a fitted solution, see {@link CodeRequests}). */
-    static CodeFacts measure(Solution solution, NumericForm form, Rational origin) {
+    /**
+     * The variants that can evaluate {@code form}: double, and float when every constant is finite in
+     * float; each with libm, and without libm too when the formula needs no e^x or cos x.
+     */
+    static List<CVariant> variants(NumericForm form) {
+        List<CVariant> out = new ArrayList<>();
+        for (boolean libm : form.needsLibm() ? new boolean[] {true} : new boolean[] {true, false}) {
+            for (CType type : CType.values()) {
+                if (form.constants().allMatch(c -> Double.isFinite(type.round(c)))) {
+                    out.add(new CVariant(type, libm));
+                }
+            }
+        }
+        return out;
+    }
+
+    /**
+     * Measures {@code form}, the emitted formula of {@code solution}'s closed form (a fitted solution,
+     * see {@link CodeRequests}, with origin t0), in every variant of {@link #variants}.
+     */
+    static Map<CVariant, CodeFacts> measure(Solution solution, NumericForm form, Rational origin) {
         double start = form.differential() ? 0 : form.validFrom();
-        Edge high = edge(form, start, 1);
-        Edge low = form.differential() ? edge(form, start, -1) : new Edge(form.first(), Limit.FIRST_INDEX);
         List<Double> scales = timeScales(form);
-        List<Rational> points = form.differential() ? functionPoints(form, origin, low.at(), high.at(), scales)
-                : sequencePoints(form, high.at(), scales);
-        List<BigDecimal> exact = new Analyzer(EXACT_DIGITS).values(solution, points).stream().map(PointValue::value).toList();
+        Map<CType, Edge[]> ranges = new EnumMap<>(CType.class);
+        Map<CType, List<Rational>> samples = new EnumMap<>(CType.class);
+        TreeSet<Rational> all = new TreeSet<>();
+        for (CType type : CType.values()) {
+            Edge high = edge(form, start, 1, type);
+            Edge low = form.differential() ? edge(form, start, -1, type) : new Edge(form.first(), Limit.FIRST_INDEX);
+            ranges.put(type, new Edge[] {low, high});
+            samples.put(type, form.differential() ? functionPoints(origin, low.at(), high.at(), scales)
+                    : sequencePoints(form, high.at(), scales));
+            all.addAll(samples.get(type));
+        }
+        List<Rational> points = List.copyOf(all);
+        List<PointValue> values = new Analyzer(EXACT_DIGITS).values(solution, points);
+        Map<Rational, BigDecimal> exact = new LinkedHashMap<>();
+        for (int i = 0; i < points.size(); i++) {
+            exact.put(points.get(i), values.get(i).value());
+        }
+        Map<CVariant, CodeFacts> out = new LinkedHashMap<>();
+        for (CVariant variant : variants(form)) {
+            out.put(variant, facts(form, variant, ranges.get(variant.type()), scales, samples.get(variant.type()), exact));
+        }
+        return out;
+    }
+
+    /** The facts of one variant over its type's range and sample, forward and backward of t0. */
+    private static CodeFacts facts(NumericForm form, CVariant variant, Edge[] range, List<Double> scales, List<Rational> points,
+            Map<Rational, BigDecimal> exactValues) {
+        List<BigDecimal> exact = points.stream().map(exactValues::get).toList();
         List<Integer> forward = new ArrayList<>();
         List<Integer> backward = new ArrayList<>();
         Rational t0 = form.differential() ? Rational.of(new BigDecimal(form.origin())) : Rational.ZERO;
@@ -69,20 +112,23 @@ final class CodeMeasurement {
             (form.differential() && points.get(i).compareTo(t0) < 0 ? backward : forward).add(i);
         }
         Optional<CodeFacts.Accuracy> back = backward.isEmpty() ? Optional.empty()
-                : Optional.of(accuracy(form, points, exact, backward));
-        return new CodeFacts(low.at(), high.at(), low.limit(), high.limit(), scales, points, exact,
-                accuracy(form, points, exact, forward), back);
+                : Optional.of(accuracy(form, variant, points, exact, backward));
+        return new CodeFacts(range[0].at(), range[1].at(), range[0].limit(), range[1].limit(), scales, points, exact,
+                accuracy(form, variant, points, exact, forward), back);
     }
 
     /** The worst errors of the code over the points with the given indices. */
-    private static CodeFacts.Accuracy accuracy(NumericForm form, List<Rational> points, List<BigDecimal> exact, List<Integer> which) {
+    private static CodeFacts.Accuracy accuracy(NumericForm form, CVariant variant, List<Rational> points, List<BigDecimal> exact,
+            List<Integer> which) {
         double[] worst = new double[3];
         Rational first = points.get(which.get(0));
         Rational[] where = {first, first, first};
         for (int i : which) {
             Deadline.checkCurrent();
             Rational p = points.get(i);
-            BigDecimal difference = measurable(new BigDecimal(evaluate(form, p)).subtract(exact.get(i)).abs(), exact.get(i));
+            double value = evaluate(form, p, variant);
+            BigDecimal difference = Double.isFinite(value) ? measurable(new BigDecimal(value).subtract(exact.get(i)).abs(), exact.get(i))
+                    : BigDecimal.valueOf(Double.MAX_VALUE);
             double term = largestTerm(form, p);
             double size = exact.get(i).abs().doubleValue();
             double[] errors = {
@@ -115,9 +161,15 @@ final class CodeMeasurement {
         return form.differential() ? form.largestTerm(point.doubleValue()) : form.largestTerm(point.toBigInteger().longValueExact());
     }
 
-    /** The double value of {@code form} at a sample point, as generated code computes it. */
+    /** The value of {@code form} at a sample point, as the generated code of {@code variant} computes it. */
+    static double evaluate(NumericForm form, Rational point, CVariant variant) {
+        return form.differential() ? form.valueAt(point.doubleValue(), variant)
+                : form.valueAt(point.toBigInteger().longValueExact(), variant);
+    }
+
+    /** The value of {@code form} at a sample point, as the Java code (and the default C) computes it. */
     static double evaluate(NumericForm form, Rational point) {
-        return form.differential() ? form.valueAt(point.doubleValue()) : form.valueAt(point.toBigInteger().longValueExact());
+        return evaluate(form, point, CVariant.DEFAULT);
     }
 
     /**
@@ -143,7 +195,7 @@ final class CodeMeasurement {
     }
 
     /** t0 + v for v near 0, over the scales and log-spaced to both ends; each the exact value of the double t. */
-    private static List<Rational> functionPoints(NumericForm form, Rational origin, double low, double high, List<Double> scales) {
+    private static List<Rational> functionPoints(Rational origin, double low, double high, List<Double> scales) {
         double shortest = scales.get(0);
         double longest = scales.get(scales.size() - 1);
         TreeSet<Double> offsets = new TreeSet<>(List.of(0.0, low, high));
@@ -204,44 +256,49 @@ final class CodeMeasurement {
         return out;
     }
 
-    /** The farthest v from start in {@code direction} (up to the cap) at which the form {@link #fits}, and what ends it there. */
-    private static Edge edge(NumericForm form, double start, int direction) {
+    /** The farthest v from start in {@code direction} (up to the type's cap) at which the form fits, and what ends it there. */
+    private static Edge edge(NumericForm form, double start, int direction, CType type) {
         double good = start;
-        for (double step = 1; step <= CodeFacts.CAP; step *= 2) {
+        for (double step = 1; step <= type.cap(); step *= 2) {
             double v = start + direction * step;
-            if (misfit(form, v) != null) {
-                return bisect(form, good, v);
+            if (misfit(form, v, type) != null) {
+                return bisect(form, good, v, type);
             }
             good = v;
         }
-        return new Edge(start + direction * CodeFacts.CAP, Limit.CAP);
+        double last = start + direction * type.cap();
+        return misfit(form, last, type) == null ? new Edge(last, Limit.CAP) : bisect(form, good, last, type);
     }
 
-    private static Edge bisect(NumericForm form, double good, double bad) {
+    private static Edge bisect(NumericForm form, double good, double bad, CType type) {
         while (Math.abs(bad - good) > (form.differential() ? Math.ulp(Math.abs(good)) * 4 + 1e-12 : 1)) {
             double mid = form.differential() ? (good + bad) / 2 : Math.floor((good + bad) / 2);
             if (mid == good || mid == bad) {
                 break;
             }
-            if (misfit(form, mid) == null) {
+            if (misfit(form, mid, type) == null) {
                 good = mid;
             } else {
                 bad = mid;
             }
         }
-        return new Edge(good, misfit(form, bad));
+        return new Edge(good, misfit(form, bad, type));
     }
 
-    /** Why the form does not fit at v (a term overflows, every term underflows, or it drifts), or null when it fits. */
-    private static Limit misfit(NumericForm form, double v) {
+    /**
+     * Why the form does not fit at v in {@code type} (a term or a growth factor overflows, every term
+     * underflows — margins of a factor e —, or it drifts), or null when it fits.
+     */
+    private static Limit misfit(NumericForm form, double v, CType type) {
         double m = form.logMagnitude(v);
-        if (m >= LN_MAX || form.waves().stream().anyMatch(w -> growthExponent(form, w, v) >= LN_MAX)) {
+        double lnMax = Math.log(type.max()) - 1;
+        if (m >= lnMax || form.waves().stream().anyMatch(w -> growthExponent(form, w, v) >= lnMax)) {
             return Limit.OVERFLOW;
         }
-        if (m <= LN_MIN) {
+        if (m <= Math.log(type.minNormal()) + 1) {
             return Limit.UNDERFLOW;
         }
-        return drift(form, v, m) > CodeFacts.DRIFT_LIMIT ? Limit.DRIFT : null;
+        return drift(form, v, m, type) > CodeFacts.DRIFT_LIMIT ? Limit.DRIFT : null;
     }
 
     /** ln of the growth factor alone, which the code computes before multiplying by the amplitude. */
@@ -250,28 +307,34 @@ final class CodeMeasurement {
                 : form.differential() ? w.growth() * v : v * Math.log(Math.abs(w.growth()));
     }
 
+    /** Relative rounding of one operation in {@code type}. */
+    private static double unit(CType type) {
+        return type == CType.FLOAT ? 0x1p-24 : 0x1p-53;
+    }
+
     /** Relative rounding of x·v per unit of v: none when x is 0 or a power of two (the product is exact). */
-    private static double productRounding(double x) {
-        return x == 0.0 || Math.abs(x) == Math.scalb(1.0, Math.getExponent(x)) ? 0 : Math.abs(x) * UNIT;
+    private static double productRounding(double x, CType type) {
+        return x == 0.0 || Math.abs(x) == Math.scalb(1.0, Math.getExponent(x)) ? 0 : Math.abs(x) * unit(type);
     }
 
     /**
-     * The drift at v that the rounding of growth rates and angles causes, weighted by each wave's
-     * size relative to the largest term (ln of it: {@code largest}): |v|·(growth error + ulp of the
-     * exponent) for e^{growth·v}, |n|·growth error/|growth| for growth^n, and |v|·(frequency error +
-     * rounding of frequency·v + phase) for an angle that is not reduced exactly.
+     * The drift at v that the rounding of growth rates and angles to {@code type} causes, weighted by
+     * each wave's size relative to the largest term (ln of it: {@code largest}): |v|·(growth error +
+     * rounding of growth·v) for e^{growth·v}, |n|·growth error/|growth| for growth^n, and
+     * |v|·(frequency error + rounding of frequency·v + phase) for an angle that is not reduced exactly.
      */
-    private static double drift(NumericForm form, double v, double largest) {
+    private static double drift(NumericForm form, double v, double largest, CType type) {
         double total = 0;
         for (Wave w : form.waves()) {
             double size = Math.exp(form.logMagnitude(w, v) - largest);
             if (size == 0) {
                 continue;
             }
-            double growth = form.differential() ? w.growthError() + productRounding(w.growth())
-                    : w.growthError() / Math.abs(w.growth());
+            double growthError = w.growthError() + Math.abs(w.growth() - type.round(w.growth()));
+            double frequencyError = w.frequencyError() + Math.abs(w.frequency() - type.round(w.frequency()));
+            double growth = form.differential() ? growthError + productRounding(w.growth(), type) : growthError / Math.abs(w.growth());
             double angle = w.reduced() || w.frequency() == 0.0 ? 0
-                    : w.frequencyError() + (w.phase() == 0.0 ? productRounding(w.frequency()) : Math.abs(w.frequency()) * UNIT);
+                    : frequencyError + (w.phase() == 0.0 ? productRounding(w.frequency(), type) : Math.abs(w.frequency()) * unit(type));
             total += size * Math.abs(v) * (growth + angle);
         }
         return total;

@@ -10,7 +10,6 @@ import dev.rootform.export.notation.RootText;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.analysis.SteadyState;
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.ExactRoot;
@@ -24,7 +23,6 @@ import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
@@ -36,11 +34,6 @@ import java.util.stream.Stream;
  * @since 0.1
  */
 public final class TextRenderer {
-    /** Exact integers longer than this are shown as rounded decimals. */
-    private static final int EXACT_LIMIT = 60;
-    /** Fractions (and each part of a surd) longer than this are shown as rounded decimals. */
-    private static final int SHORT_FRACTION = 15;
-
     private TextRenderer() {
     }
 
@@ -181,42 +174,7 @@ public final class TextRenderer {
 
     private static String value(ClosedForm f, PointValue v, int digits) {
         String at = EquationText.unknownAt(f, Numbers.point(v.at()));
-        return at + exactOrDecimal(v, digits);
-    }
-
-    /**
-     * {@code " = 55"} for an exact integer, {@code " = 80.15625"} for an exact value whose decimal ends
-     * within the digits asked, {@code " = 1/3"} for a short fraction or surd, else the decimal
-     * {@code " ≈ 0.2231"} (the exact value of a sequence is in JSON): long fractions, such as money
-     * balances, read as decimals.
-     */
-    private static String exactOrDecimal(PointValue v, int digits) {
-        Optional<String> exact = v.exact().filter(q -> fitsShort(q, EXACT_LIMIT)).flatMap(q -> exactText(q, digits))
-                .or(() -> v.exactSurd().filter(q -> fitsShort(q.rational(), SHORT_FRACTION) && fitsShort(q.coefficient(), SHORT_FRACTION))
-                        .map(Object::toString).filter(t -> t.length() <= 2 * SHORT_FRACTION));
-        return exact.map(t -> " = " + t).orElse(" ≈ " + Numbers.decimal(v.value(), digits));
-    }
-
-    /** An integer as it is, a terminating decimal within {@code digits} significant digits, or a short fraction. */
-    private static Optional<String> exactText(Rational q, int digits) {
-        if (q.isInteger()) {
-            return Optional.of(q.toString());
-        }
-        try {
-            BigDecimal d = new BigDecimal(q.numerator()).divide(new BigDecimal(q.denominator())).stripTrailingZeros();
-            if (d.precision() <= digits) {
-                return Optional.of(d.toPlainString());
-            }
-        } catch (ArithmeticException endless) {
-            // a repeating decimal: only a short fraction is shown exactly
-        }
-        String fraction = q.toString();
-        return fraction.length() <= SHORT_FRACTION ? Optional.of(fraction) : Optional.empty();
-    }
-
-    /** Whether the exact value may fit {@code limit} characters, judged without writing it out. */
-    private static boolean fitsShort(Rational q, int limit) {
-        return (q.numerator().bitLength() + q.denominator().bitLength()) * Math.log10(2) <= limit + 2;
+        return at + ValueText.of(v, digits);
     }
 
     private static String pad(String s, int width) {

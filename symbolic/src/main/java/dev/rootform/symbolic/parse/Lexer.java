@@ -1,8 +1,6 @@
 package dev.rootform.symbolic.parse;
 
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.InputException;
-import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Matcher;
@@ -14,11 +12,8 @@ import java.util.regex.Pattern;
  * {@code d^2y/dt^2} becomes a single token.
  */
 final class Lexer {
-    private static final Pattern NUMBER = Pattern.compile("(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final Pattern LEIBNIZ = Pattern.compile(
             "d(?:\\^?(\\d+))?\\s*([A-Za-z]+)\\s*/\\s*d\\s*([A-Za-z]+)(?:\\^?(\\d+))?");
-    /** Bound on the decimal exponent of a literal, which keeps exact values small. */
-    private static final int MAX_SCALE = 1000;
     private static final String SINGLE = "+-*/^()[]!";
     private static final Token.Kind[] SINGLE_KINDS = {Token.Kind.PLUS, Token.Kind.MINUS, Token.Kind.STAR,
         Token.Kind.SLASH, Token.Kind.CARET, Token.Kind.LPAREN, Token.Kind.RPAREN, Token.Kind.LBRACKET,
@@ -81,17 +76,8 @@ final class Lexer {
     }
 
     private Token number() {
-        Matcher m = NUMBER.matcher(source).region(position, end);
-        if (!m.lookingAt()) {
-            throw new InputException("malformed number", source, position);
-        }
-        String text = m.group();
-        BigDecimal decimal = new BigDecimal(text);
-        if (Math.abs(decimal.scale()) > MAX_SCALE) {
-            throw new InputException("number " + text + " is too large", source, position);
-        }
-        Rational value = Rational.of(decimal);
-        return new Token(Token.Kind.NUMBER, text, position, m.end(), value, null);
+        NumberLiteral n = NumberLiteral.read(source, position, end, "number");
+        return new Token(Token.Kind.NUMBER, n.text(), position, n.end(), n.value(), null);
     }
 
     private Token leibniz(Matcher m) {

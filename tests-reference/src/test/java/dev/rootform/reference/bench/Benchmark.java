@@ -40,6 +40,7 @@ public final class Benchmark {
         AccuracyBenchmark.run();
         cold(Path.of(args.length > 0 ? args[0] : "../rootform"));
         scaling();
+        CheckBenchmark.run();
         sideBySide();
     }
 
