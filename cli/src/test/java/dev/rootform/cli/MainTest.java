@@ -82,7 +82,7 @@ class MainTest {
         Run r = run("solve", "y'' + y = 0; y(0) = 1; y(pi/2) = 2", "--format", "json");
         assertEquals(0, r.code(), r.err());
         JsonNode solution = new ObjectMapper().readTree(r.out()).get("solution");
-        assertEquals("cos(t) + 2·sin(t)", solution.get("text").asText());
+        assertEquals("y(t) = cos(t) + 2·sin(t)", solution.get("text").asText());
         assertTrue(solution.get("constantValues") == null || solution.get("constantValues").isEmpty(), solution.toString());
     }
 

@@ -10,7 +10,7 @@ import java.util.Optional;
  * What rootform measured about the floating-point formula of generated code in one C variant (the
  * double one is also the Java code's): the input range where every term stays finite, the largest a
  * normal number of the variant's type and the rounding of rates and angles cannot make the phase or
- * growth drift by more than {@link #DRIFT_LIMIT}; the time scales of the problem; and
+ * growth drift by more than {@link #driftLimit}; the time scales of the problem; and
  * the worst errors against values to 30 significant digits over a sample of points chosen from those
  * time scales inside that range ({@link Accuracy}), separately forward (t &ge; t0, or every index of
  * a sequence) and backward (t &lt; t0).
@@ -31,8 +31,13 @@ public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit
         List<Rational> points, List<BigDecimal> exact, Accuracy forward, Optional<Accuracy> backward) {
     /** Farthest input examined when searching the valid range in double ({@link CType#cap()}). */
     public static final double CAP = 1e15;
-    /** Largest drift of phase or growth (radians, or relative) from rounded rates and angles inside the valid range. */
+    /**
+     * Largest drift of phase or growth (radians, or relative) from rates and angles rounded to double
+     * inside the valid range: about 6 of its 16 digits.
+     */
     public static final double DRIFT_LIMIT = 1e-10;
+    /** The same for float: about 2 of its 7 digits. */
+    public static final double FLOAT_DRIFT_LIMIT = 1e-5;
     /** Factor between the worst measured errors and the stated bounds. */
     public static final double MARGIN = 2;
     /** A value below 1/CANCELLATION of the largest term counts as cancelling (its relative error is not meaningful). */
@@ -46,7 +51,7 @@ public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit
         OVERFLOW,
         /** Every term would fall below the smallest normal double. */
         UNDERFLOW,
-        /** The rounding of a rate or angle would make the phase or growth drift by more than {@link #DRIFT_LIMIT}. */
+        /** The rounding of a rate or angle would make the phase or growth drift by more than {@link #driftLimit}. */
         DRIFT,
         /** The search stopped at the type's {@link CType#cap()}. */
         CAP
@@ -86,6 +91,11 @@ public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit
         public double termBound() {
             return MARGIN * maxTermError;
         }
+    }
+
+    /** The largest drift allowed in the valid range of {@code type}: {@link #DRIFT_LIMIT} or {@link #FLOAT_DRIFT_LIMIT}. */
+    public static double driftLimit(CType type) {
+        return type == CType.FLOAT ? FLOAT_DRIFT_LIMIT : DRIFT_LIMIT;
     }
 
     public CodeFacts {

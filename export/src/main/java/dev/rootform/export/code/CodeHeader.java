@@ -117,7 +117,7 @@ final class CodeHeader {
             case OVERFLOW -> "a term would overflow a " + type.keyword();
             case UNDERFLOW -> "every term would fall below the smallest normal " + type.keyword();
             case DRIFT -> "the rounding of a rate or angle would make the phase or growth drift by more than "
-                    + shortNumber(CodeFacts.DRIFT_LIMIT);
+                    + shortNumber(CodeFacts.driftLimit(type));
             case CAP -> "searched no farther than " + shortNumber(type.cap()) + " from the start";
         };
     }
@@ -126,9 +126,18 @@ final class CodeHeader {
         return point.isInteger() ? point.toString() : shortNumber(point.doubleValue());
     }
 
-    /** x to 6 significant digits, without trailing zeros. */
+    /** x to 6 significant digits, without trailing zeros; with an exponent below 1e-3 and from 1e7 on. */
     private static String shortNumber(double x) {
-        return x == 0 ? "0" : new BigDecimal(x).round(new MathContext(6)).stripTrailingZeros().toString();
+        if (x == 0) {
+            return "0";
+        }
+        BigDecimal d = new BigDecimal(x).round(new MathContext(6)).stripTrailingZeros();
+        int exponent = d.precision() - d.scale() - 1;
+        if (exponent >= -3 && exponent < 7) {
+            return d.toPlainString();
+        }
+        BigDecimal mantissa = d.movePointLeft(exponent).stripTrailingZeros();
+        return mantissa.toPlainString() + "E" + (exponent > 0 ? "+" : "") + exponent;
     }
 
     /**

@@ -27,7 +27,7 @@ import java.util.TreeSet;
  * {@link NumericForm#sum(double, CVariant)}). The valid range, per floating type: from the start
  * (t0, or the first index the formula holds for) outward until a term overflows, every term
  * underflows, or the rounding of rates and angles would make phase or growth drift by more than
- * {@link CodeFacts#DRIFT_LIMIT} (searched up to {@link CType#cap()}). The sample follows the
+ * {@link CodeFacts#driftLimit} (searched up to {@link CType#cap()}). The sample follows the
  * problem's own time scales (the waves' 1/|σ| and 1/ω; for sequences 1/|ln ρ| and periods 2π/θ):
  * dense near the start (halving steps down to 2^-44 of the shortest scale for functions, every index
  * of the first {@link #FIRST_INDICES} for sequences), quarter steps over the shortest and the longest
@@ -184,14 +184,21 @@ final class CodeMeasurement {
             }
             double rate = form.differential() ? Math.abs(w.growth()) : Math.abs(Math.log(Math.abs(w.growth())));
             if (rate > 0 && Double.isFinite(1 / rate)) {
-                scales.add(1 / rate);
+                addScale(scales, 1 / rate);
             }
             if (w.frequency() != 0.0) {
                 double angle = w.reduced() ? w.frequency() * w.multiplier() : Math.abs(w.frequency());
-                scales.add(form.differential() ? 1 / angle : 2 * Math.PI / angle);
+                addScale(scales, form.differential() ? 1 / angle : 2 * Math.PI / angle);
             }
         }
         return scales.isEmpty() ? List.of(1.0) : List.copyOf(scales);
+    }
+
+    /** Adds a scale unless one within 10^-9 of it is there already (the two modes of one decay, say). */
+    private static void addScale(TreeSet<Double> scales, double scale) {
+        if (scales.stream().noneMatch(s -> Math.abs(s - scale) <= 1e-9 * scale)) {
+            scales.add(scale);
+        }
     }
 
     /** t0 + v for v near 0, over the scales and log-spaced to both ends; each the exact value of the double t. */
@@ -298,7 +305,7 @@ final class CodeMeasurement {
         if (m <= Math.log(type.minNormal()) + 1) {
             return Limit.UNDERFLOW;
         }
-        return drift(form, v, m, type) > CodeFacts.DRIFT_LIMIT ? Limit.DRIFT : null;
+        return drift(form, v, m, type) > CodeFacts.driftLimit(type) ? Limit.DRIFT : null;
     }
 
     /** ln of the growth factor alone, which the code computes before multiplying by the amplitude. */
