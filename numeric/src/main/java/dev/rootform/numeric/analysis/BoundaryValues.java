@@ -31,10 +31,12 @@ import org.apfloat.ApfloatMath;
  * numerically); that is reported, never papered over.
  */
 final class BoundaryValues {
-    /** Generic points where L y = g is imposed on a trial form (as many as it has constants). */
-    private static final String[] COLLOCATION = {"0.3", "0.91803398874989484820", "1.5360679774997896964",
-        "2.1541019662496845446", "2.7721359549995793928", "3.3901699437494742410", "4.0082039324993690892",
-        "4.6262379212492639374"};
+    /**
+     * Generic points where L y = g is imposed on a trial form, as many as it has constants: the k-th
+     * is 0.3 + k·(√5 − 1)/2 (the golden-ratio steps never meet a residual point or each other).
+     */
+    private static final BigDecimal COLLOCATION_START = new BigDecimal("0.3");
+    private static final BigDecimal COLLOCATION_STEP = new BigDecimal("0.61803398874989484820");
     /** Further points where the residual L y - g of a trial form is checked afterwards. */
     private static final String[] RESIDUAL_POINTS = {"0.77", "1.9", "3.14159"};
 
@@ -82,7 +84,7 @@ final class BoundaryValues {
         for (int row = 0; row < n; row++) {
             boolean condition = row < conditions.size();
             Condition c = condition ? conditions.get(row) : null;
-            Apfloat t = condition ? point(c, working) : new Apfloat(COLLOCATION[row - conditions.size()], working);
+            Apfloat t = condition ? point(c, working) : collocation(row - conditions.size(), working);
             for (int j = 0; j < n; j++) {
                 ModeSum f = basis.get(first + j);
                 a[row][j] = condition ? f.derivative(c.derivative(), t) : applied(eq, f, t);
@@ -98,6 +100,11 @@ final class BoundaryValues {
             constants.put(names.get(j), x.get(j));
         }
         return new BoundaryValues(solution, basis, first, particular, constants, working);
+    }
+
+    /** The k-th collocation point (from 0). */
+    private static Apfloat collocation(int k, int working) {
+        return new Apfloat(COLLOCATION_START.add(COLLOCATION_STEP.multiply(BigDecimal.valueOf(k))), working);
     }
 
     /** (L f)(t) = Σ a_l f^(l)(t). */

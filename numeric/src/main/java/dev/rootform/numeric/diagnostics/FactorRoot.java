@@ -2,14 +2,20 @@ package dev.rootform.numeric.diagnostics;
 
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Factor;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 
 /**
  * A root of the characteristic polynomial with the irreducible factor it belongs to (and so its
- * multiplicity), and its value in double precision (approximate).
+ * multiplicity), and its value in double precision (approximate; the double parts overflow for roots
+ * beyond 1e308, so sizes come from {@link #exactModulus} and {@link #log10Modulus}).
  */
 record FactorRoot(Factor factor, RootApproximation approximation) {
+    /** Precision of the decimal quantities derived from the root (that of a double). */
+    static final MathContext PRECISION = MathContext.DECIMAL64;
+
     double re() {
         return approximation.re().doubleValue();
     }
@@ -20,6 +26,25 @@ record FactorRoot(Factor factor, RootApproximation approximation) {
 
     double modulus() {
         return Math.hypot(re(), im());
+    }
+
+    /** |λ| to {@link #PRECISION}, of any size (the double {@link #modulus} overflows beyond 1e308). */
+    BigDecimal exactModulus() {
+        BigDecimal re = approximation.re();
+        BigDecimal im = approximation.im();
+        return re.multiply(re).add(im.multiply(im)).sqrt(PRECISION);
+    }
+
+    /** log10 |λ| for a nonzero root of any size. */
+    double log10Modulus() {
+        return log10(exactModulus());
+    }
+
+    /** log10 |x| of a nonzero decimal of any size. */
+    static double log10(BigDecimal x) {
+        BigDecimal a = x.abs();
+        int exponent = a.precision() - a.scale();
+        return exponent + Math.log10(a.movePointLeft(exponent).doubleValue());
     }
 
     int multiplicity() {

@@ -2,6 +2,7 @@ package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
@@ -17,8 +18,6 @@ final class Lexer {
     private static final Pattern NUMBER = Pattern.compile("(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final Pattern LEIBNIZ = Pattern.compile(
             "d(?:\\^?(\\d+))?\\s*([A-Za-z]+)\\s*/\\s*d\\s*([A-Za-z]+)(?:\\^?(\\d+))?");
-    /** Bound on the decimal exponent of a literal, which keeps exact values small. */
-    private static final int MAX_SCALE = 1000;
     private static final String SINGLE = "+-*/^()[]!";
     private static final Token.Kind[] SINGLE_KINDS = {Token.Kind.PLUS, Token.Kind.MINUS, Token.Kind.STAR,
         Token.Kind.SLASH, Token.Kind.CARET, Token.Kind.LPAREN, Token.Kind.RPAREN, Token.Kind.LBRACKET,
@@ -70,8 +69,10 @@ final class Lexer {
             return Token.of(Token.Kind.PRIMES, run(ch -> ch == '\''), position);
         }
         if (c == '=') {
-            boolean twice = position + 1 < end && source.charAt(position + 1) == '=';
-            return Token.of(Token.Kind.EQUALS, twice ? "==" : "=", position);
+            if (position + 1 < end && source.charAt(position + 1) == '=') {
+                throw new InputException("'==' is not an equation sign: write '=' for an equation", source, position);
+            }
+            return Token.of(Token.Kind.EQUALS, "=", position);
         }
         int single = SINGLE.indexOf(c);
         if (single < 0) {
@@ -80,29 +81,66 @@ final class Lexer {
         return Token.of(SINGLE_KINDS[single], String.valueOf(c), position);
     }
 
+    /**
+     * A number literal within {@link Limits#MAX_LITERAL_DIGITS} digits and an exponent within
+     * {@link Limits#MAX_DECIMAL_EXPONENT}; a literal run on by a second point or digits ({@code 1.5.2})
+     * is malformed, never two numbers.
+     */
     private Token number() {
         Matcher m = NUMBER.matcher(source).region(position, end);
         if (!m.lookingAt()) {
             throw new InputException("malformed number", source, position);
         }
         String text = m.group();
-        BigDecimal decimal = new BigDecimal(text);
-        if (Math.abs(decimal.scale()) > MAX_SCALE) {
-            throw new InputException("number " + text + " is too large", source, position);
+        if (m.end() < end && (source.charAt(m.end()) == '.' || Character.isDigit(source.charAt(m.end())))) {
+            int stop = m.end();
+            while (stop < end && (source.charAt(stop) == '.' || Character.isDigit(source.charAt(stop)))) {
+                stop++;
+            }
+            throw new InputException("malformed number '" + shorten(source.substring(position, stop)) + "'", source, position);
+        }
+        long digits = m.group(1).chars().filter(Character::isDigit).count();
+        if (digits > Limits.MAX_LITERAL_DIGITS) {
+            throw new InputException("number with " + digits + " digits: at most " + Limits.MAX_LITERAL_DIGITS
+                    + " digits are accepted", source, position);
+        }
+        String exponent = m.group(2) == null ? "0" : m.group(2).substring(1).replace("+", "");
+        BigDecimal decimal = exponent.replace("-", "").length() > 9 ? null : new BigDecimal(text);
+        if (decimal == null || Math.abs(decimal.scale()) > Limits.MAX_DECIMAL_EXPONENT) {
+            throw new InputException("number " + shorten(text) + " is out of range: decimal exponents up to "
+                    + Limits.MAX_DECIMAL_EXPONENT + " are accepted", source, position);
         }
         Rational value = Rational.of(decimal);
         return new Token(Token.Kind.NUMBER, text, position, m.end(), value, null);
     }
 
     private Token leibniz(Matcher m) {
-        int top = m.group(1) == null ? 1 : Integer.parseInt(m.group(1));
-        int bottom = m.group(4) == null ? 1 : Integer.parseInt(m.group(4));
+        int top = order(m.group(1), m);
+        int bottom = order(m.group(4), m);
         if (top != bottom) {
-            throw new InputException("derivative " + m.group() + ": orders " + top + " and " + bottom + " differ",
+            throw new InputException("derivative " + shorten(m.group()) + ": orders " + top + " and " + bottom + " differ",
                     source, position);
         }
         Token.Leibniz parts = new Token.Leibniz(m.group(2), m.group(3), top);
         return new Token(Token.Kind.LEIBNIZ, m.group(), position, m.end(), null, parts);
+    }
+
+    /** The order written in a Leibniz derivative (1 when absent), at most {@link Limits#MAX_ORDER}. */
+    private int order(String digits, Matcher m) {
+        if (digits == null) {
+            return 1;
+        }
+        String significant = digits.replaceFirst("^0+(?=.)", "");
+        if (significant.length() > 9 || Integer.parseInt(significant) > Limits.MAX_ORDER) {
+            throw new InputException("derivative " + shorten(m.group()) + ": order " + shorten(significant)
+                    + " is above the limit " + Limits.MAX_ORDER, source, position);
+        }
+        return Integer.parseInt(significant);
+    }
+
+    /** {@code text}, cut to 40 characters for a message. */
+    static String shorten(String text) {
+        return text.length() <= 40 ? text : text.substring(0, 37) + "...";
     }
 
     private String run(java.util.function.IntPredicate member) {
