@@ -58,7 +58,7 @@ final class SolveJob {
     private static Result classify(Report report) {
         if (!report.verified()) {
             return new Result.CheckFailed(report, Stream.concat(report.solution().checks().stream(), report.numericChecks().stream())
-                    .filter(c -> !c.passed()).map(Check::name).toList());
+                    .filter(Check::failed).map(Check::name).toList());
         }
         boolean general = report.solution().problem().conditions().isEmpty();
         return general ? new Result.General(report) : new Result.Solved(report);

@@ -117,6 +117,6 @@ public final class JsonRenderer {
         out.put("verified", r.verified());
         ArrayNode checks = out.putArray("checks");
         Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).forEach((Check c) ->
-                checks.addObject().put("name", c.name()).put("passed", c.passed()).put("detail", c.detail()));
+                checks.addObject().put("name", c.name()).put("passed", c.passed()).put("ran", c.ran()).put("detail", c.detail()));
     }
 }

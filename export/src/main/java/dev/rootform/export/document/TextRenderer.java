@@ -141,10 +141,13 @@ public final class TextRenderer {
         List<Check> checks = Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).toList();
         List<String> lines = new ArrayList<>();
         for (Check c : checks) {
-            lines.add(pad(c.passed() ? "[ok]" : "[FAILED]", 9) + c.name() + ": " + c.detail());
+            String label = c.passed() ? "[ok]" : c.ran() ? "[FAILED]" : "[not run]";
+            lines.add(pad(label, 9) + (label.length() >= 9 ? " " : "") + c.name() + ": " + c.detail());
         }
         List<String> failed = checks.stream().filter(c -> !c.passed()).map(Check::name).toList();
-        lines.add(failed.isEmpty() ? "verified" : "NOT verified: " + String.join(", ", failed));
+        boolean verified = r.verified();
+        lines.add(failed.isEmpty() ? "verified" : verified ? "verified by the checks that ran; not run: " + String.join(", ", failed)
+                : "NOT verified: " + String.join(", ", checks.stream().filter(Check::failed).map(Check::name).toList()));
         return lines;
     }
 

@@ -169,7 +169,7 @@ public final class Analyzer {
         return difference.compareTo(relative) <= 0 || difference.compareTo(floor) <= 0;
     }
 
-    /** The integrator cross-check from the exact derivatives at the origin t0, at t0 + {@link IntegratorCheck#OFFSETS}. */
+    /** The integrator cross-check from the exact derivatives at the origin t0, at t0 + {@link IntegratorCheck#offsets}. */
     private static Check integratorCheck(ExactSolution s, RootCache cache) {
         int k = s.equation().order();
         List<Rational> initial = new ArrayList<>(k);
@@ -177,12 +177,13 @@ public final class Analyzer {
             initial.add(s.derivativeAtOrigin(d));
         }
         double t0 = s.origin().doubleValue();
-        double[] points = new double[IntegratorCheck.OFFSETS.length];
+        double[] offsets = IntegratorCheck.offsets(s.equation());
+        double[] points = new double[offsets.length];
         double[] closed = new double[points.length];
         for (int i = 0; i < points.length; i++) {
-            points[i] = t0 + IntegratorCheck.OFFSETS[i];
+            points[i] = t0 + offsets[i];
             closed[i] = functionValue(s, Rational.of(BigDecimal.valueOf(points[i])), 17, cache).value().doubleValue();
         }
-        return IntegratorCheck.compare(s.equation(), s.origin(), initial, points, closed, "at t0 + " + IntegratorCheck.offsets());
+        return IntegratorCheck.compare(s.equation(), s.origin(), initial, points, closed, "at t0 + " + IntegratorCheck.offsetText(s.equation()));
     }
 }

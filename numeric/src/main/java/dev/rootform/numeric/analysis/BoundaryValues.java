@@ -279,7 +279,7 @@ final class BoundaryValues {
 
     /**
      * The integrator cross-check from the first condition point t0, starting from this solution's
-     * derivatives there, at the other condition points and at t0 + {@link IntegratorCheck#OFFSETS}.
+     * derivatives there, at the other condition points and at t0 + {@link IntegratorCheck#offsets}.
      */
     Check integratorCheck() {
         List<Condition> conditions = solution.problem().conditions();
@@ -296,12 +296,12 @@ final class BoundaryValues {
                 points.add(point(c, precision));
             }
         }
-        for (double offset : IntegratorCheck.OFFSETS) {
+        for (double offset : IntegratorCheck.offsets(solution.problem().equation())) {
             points.add(Decimals.toApfloat(t0, precision).add(new Apfloat(offset, precision)));
         }
         double[] at = points.stream().mapToDouble(Apfloat::doubleValue).toArray();
         double[] closed = points.stream().mapToDouble(p -> derivative(0, p).doubleValue()).toArray();
         return IntegratorCheck.compare(solution.problem().equation(), t0, initial, at, closed, "from t = "
-                + conditions.get(0).point() + " to the other condition points and t0 + " + IntegratorCheck.offsets());
+                + conditions.get(0).point() + " to the other condition points and t0 + " + IntegratorCheck.offsetText(solution.problem().equation()));
     }
 }

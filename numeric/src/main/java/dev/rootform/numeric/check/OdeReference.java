@@ -2,7 +2,9 @@ package dev.rootform.numeric.check;
 
 import dev.rootform.symbolic.algebra.Rational;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.exception.MaxCountExceededException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 
@@ -52,6 +54,15 @@ public final class OdeReference {
      */
     public static double[] values(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
             List<Rational> initialDerivatives, double[] points) {
+        return values(coefficients, forcing, t0, initialDerivatives, points, Integer.MAX_VALUE).orElseThrow();
+    }
+
+    /**
+     * As {@link #values(List, DoubleUnaryOperator, Rational, List, double[])}, but empty when an
+     * integration would need more than {@code maxEvaluations} evaluations of the right-hand side.
+     */
+    public static Optional<double[]> values(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
+            List<Rational> initialDerivatives, double[] points, int maxEvaluations) {
         int k = coefficients.size() - 1;
         if (k < 1 || coefficients.get(k).isZero()) {
             throw new IllegalArgumentException("need order ≥ 1 and a non-zero leading coefficient");
@@ -81,11 +92,16 @@ public final class OdeReference {
             }
             DormandPrince853Integrator integrator = new DormandPrince853Integrator(
                     MIN_STEP_FRACTION * span, span, RELATIVE_TOLERANCE * scale, RELATIVE_TOLERANCE);
+            integrator.setMaxEvaluations(maxEvaluations);
             double[] state = start.clone();
-            integrator.integrate(system, begin, state, points[i], state);
+            try {
+                integrator.integrate(system, begin, state, points[i], state);
+            } catch (MaxCountExceededException e) {
+                return Optional.empty();
+            }
             result[i] = state[0];
         }
-        return result;
+        return Optional.of(result);
     }
 
     /** u' = C·u + (0, …, 0, g(t)/a_k) for the companion matrix C of the normalised equation. */

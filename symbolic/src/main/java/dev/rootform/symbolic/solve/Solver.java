@@ -106,7 +106,7 @@ public final class Solver {
     /** The checks of the √r part, named as such. */
     private static List<Check> radicalChecks(ExactSolution radical, List<Condition> zero, int radicand) {
         return ExactVerifier.verify(radical, zero).stream()
-                .map(c -> new Check(c.name() + " (√" + radicand + " part)", c.passed(), c.detail())).toList();
+                .map(c -> new Check(c.name() + " (√" + radicand + " part)", c.passed(), c.detail(), c.ran())).toList();
     }
 
     /**
