@@ -11,12 +11,12 @@ import dev.rootform.export.code.Identifiers;
 import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.function.UnaryOperator;
 import picocli.CommandLine.Model.CommandSpec;
@@ -60,13 +60,26 @@ final class OutputOptions {
     int timeLimit = 300;
 
     /**
-     * Checks the format and the code names before any work.
+     * Checks the output files, the format and the code names before any work.
      *
-     * @throws InputException for an unknown format or a bad name
+     * @throws InputException for an output file that cannot be written, an unknown format or a bad name
      */
     void check() {
+        OutputFiles.check(files());
         exporter();
         codeNames();
+    }
+
+    /** The files to write: --header, then -o. */
+    private List<OutputFiles.Target> files() {
+        List<OutputFiles.Target> files = new ArrayList<>();
+        if (header != null) {
+            files.add(new OutputFiles.Target("--header", header));
+        }
+        if (output != null) {
+            files.add(new OutputFiles.Target("-o", output));
+        }
+        return files;
     }
 
     /**
@@ -133,29 +146,26 @@ final class OutputOptions {
         });
     }
 
-    /** Writes the rendering: its text to -o or {@code out}, a C header to --header. */
+    /**
+     * Writes the rendering: a C header to --header and the text to -o as one transaction (both or
+     * neither), or the text to {@code out} once the files are written.
+     */
     private void write(Rendering rendering, PrintWriter out) throws IOException {
-        if (header != null) {
-            write(header, rendering.header().orElseThrow(), out);
+        Map<OutputFiles.Target, String> texts = new LinkedHashMap<>();
+        List<OutputFiles.Target> files = files();
+        for (OutputFiles.Target file : files) {
+            texts.put(file, lines(file.option().equals("--header") ? rendering.header().orElseThrow() : rendering.text()));
         }
-        write(output, rendering.text(), out);
+        OutputFiles.write(texts);
+        if (output == null) {
+            out.print(lines(rendering.text()));
+            out.flush();
+        }
     }
 
-    private static void write(Path output, String answer, PrintWriter out) throws IOException {
-        String text = answer.endsWith("\n") ? answer : answer + System.lineSeparator();
-        if (output == null) {
-            out.print(text);
-            out.flush();
-            return;
-        }
-        Path target = output.toAbsolutePath();
-        Path temp = Files.createTempFile(target.getParent(), ".rootform-", ".tmp");
-        try {
-            Files.writeString(temp, text, StandardCharsets.UTF_8);
-            Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+    /** The text ending with a line break. */
+    private static String lines(String answer) {
+        return answer.endsWith("\n") ? answer : answer + System.lineSeparator();
     }
 
     /** The format names, for the help text. */
