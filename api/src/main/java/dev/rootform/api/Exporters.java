@@ -20,10 +20,17 @@ import java.util.function.BiFunction;
 
 /**
  * The exporters by format name: {@code text}, {@code json}, {@code latex}, {@code mathml},
- * {@code java}, {@code c}.
+ * {@code java}, {@code c}. Each exporter only formats a finished {@link Report}; all of them are
+ * stateless and thread-safe. The code formats ({@code java}, {@code c}) cannot write every answer
+ * (a general solution has free constants): {@link Exporter#refusal(Report)} says why, and
+ * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report.
+ *
+ * <p>The sum of the first n odd numbers, solved and written as LaTeX:
  *
  * <pre>{@code
- * String json = Exporters.byName("json").orElseThrow().render(report, CodeNames.defaults()).text();
+ * Report report = Rootform.solve(SolveRequest.of("x[n+1] = x[n] + 2n + 1; x[0] = 0")).answer().orElseThrow();
+ * Exporter latex = Exporters.byName("latex").orElseThrow();
+ * System.out.println(latex.render(report, CodeNames.defaults()).text());
  * }</pre>
  *
  * @since 0.2
@@ -40,12 +47,21 @@ public final class Exporters {
     private Exporters() {
     }
 
-    /** The exporter of {@code format}, or empty for an unknown name. */
+    /**
+     * The exporter of one format.
+     *
+     * @param format a name from {@link #names()}, e.g. {@code "json"}
+     * @return the exporter, or empty for an unknown name
+     */
     public static Optional<Exporter> byName(String format) {
         return Optional.ofNullable(BY_NAME.get(format));
     }
 
-    /** Every format name, in a fixed order. */
+    /**
+     * Every format name.
+     *
+     * @return the names in a fixed order, {@code text} first
+     */
     public static List<String> names() {
         return List.copyOf(BY_NAME.keySet());
     }

@@ -9,12 +9,25 @@ import java.util.Optional;
 
 /**
  * The outcome of one request. Every expected outcome is a value of this sealed type, never an
- * exception: consumers dispatch with {@code instanceof} patterns.
+ * exception: consumers dispatch with {@code instanceof} patterns. Immutable.
+ *
+ * <p>Three requests and what became of them: a population that triples each step, two values of
+ * a sequence that no solution of its equation can take, and a typing slip:
  *
  * <pre>{@code
- * Result r = Rootform.solve(SolveRequest.of("x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1"));
- * if (r instanceof Result.Solved s) {
- *     System.out.println(s.report().solution().closedForm());
+ * for (String problem : List.of("x[n+1] = 3x[n]; x[0] = 2", "x[n+2] = -x[n]; x[0] = 1; x[2] = 0", "y'' + (2y' = 0")) {
+ *     Result result = Rootform.solve(SolveRequest.of(problem));
+ *     String outcome;
+ *     if (result instanceof Result.Solved solved) {
+ *         outcome = "solved and verified, " + solved.report().solution().checks().size() + " exact checks";
+ *     } else if (result instanceof Result.Contradictory contradictory) {
+ *         outcome = "contradictory: " + contradictory.explanation();
+ *     } else if (result instanceof Result.Refused refused) {
+ *         outcome = "refused: " + refused.message() + " at position " + refused.position();
+ *     } else {
+ *         outcome = result.getClass().getSimpleName();
+ *     }
+ *     System.out.println(problem + "  ->  " + outcome);
  * }
  * }</pre>
  *
@@ -23,13 +36,23 @@ import java.util.Optional;
 public sealed interface Result permits Result.Solved, Result.General, Result.CheckFailed, Result.Contradictory,
         Result.Underdetermined, Result.Refused, Result.OutOfTime {
 
-    /** The finished answer when there is one (solved, general, or a check failed). */
+    /**
+     * The finished answer when there is one.
+     *
+     * @return the report of {@link Solved}, {@link General} and {@link CheckFailed}; empty for the
+     *     other outcomes
+     */
     default Optional<Report> answer() {
         return Optional.empty();
     }
 
-    /** Solved with the conditions fitted, and every exact and numeric check held. */
+    /**
+     * Solved with the conditions fitted, and every exact and numeric check held.
+     *
+     * @param report the verified answer
+     */
     record Solved(Report report) implements Result {
+        /** @throws NullPointerException if the report is null */
         public Solved {
             Objects.requireNonNull(report, "report");
         }
@@ -40,8 +63,13 @@ public sealed interface Result permits Result.Solved, Result.General, Result.Che
         }
     }
 
-    /** No conditions were given: the general solution with free constants C1..Ck, verified. */
+    /**
+     * No conditions were given: the general solution with free constants C1..Ck, verified.
+     *
+     * @param report the verified general solution
+     */
     record General(Report report) implements Result {
+        /** @throws NullPointerException if the report is null */
         public General {
             Objects.requireNonNull(report, "report");
         }
@@ -52,8 +80,14 @@ public sealed interface Result permits Result.Solved, Result.General, Result.Che
         }
     }
 
-    /** Solved, but at least one check failed; the answer must not be trusted. */
+    /**
+     * Solved, but at least one check failed; the answer must not be trusted.
+     *
+     * @param report the answer with every check, passed or not
+     * @param failed the names of the checks that failed
+     */
     record CheckFailed(Report report, List<String> failed) implements Result {
+        /** @throws NullPointerException if the report, the list or a name is null */
         public CheckFailed {
             Objects.requireNonNull(report, "report");
             failed = List.copyOf(failed);
@@ -65,8 +99,14 @@ public sealed interface Result permits Result.Solved, Result.General, Result.Che
         }
     }
 
-    /** No solution meets the conditions; {@code explanation} states the relation every solution obeys. */
+    /**
+     * No solution meets the conditions.
+     *
+     * @param explanation the certificate: the relation every solution obeys and the conditions
+     *     break, e.g. {@code every solution has x[0] + x[2] = 0, but the given values make it 1}
+     */
     record Contradictory(String explanation) implements Result {
+        /** @throws NullPointerException if the explanation is null */
         public Contradictory {
             Objects.requireNonNull(explanation, "explanation");
         }
@@ -80,6 +120,7 @@ public sealed interface Result permits Result.Solved, Result.General, Result.Che
      *     it is known exactly
      */
     record Underdetermined(String explanation, Optional<ClosedForm> freeSolution) implements Result {
+        /** @throws NullPointerException if an argument is null */
         public Underdetermined {
             Objects.requireNonNull(explanation, "explanation");
             Objects.requireNonNull(freeSolution, "freeSolution");
@@ -94,14 +135,20 @@ public sealed interface Result permits Result.Solved, Result.General, Result.Che
      * @param position 0-based index into {@code source}, or -1
      */
     record Refused(String message, String source, int position) implements Result {
+        /** @throws NullPointerException if the message or the source is null */
         public Refused {
             Objects.requireNonNull(message, "message");
             Objects.requireNonNull(source, "source");
         }
     }
 
-    /** The time limit ran out; the work was stopped. */
+    /**
+     * The time limit ran out before the answer was finished.
+     *
+     * @param limit the time limit of the request
+     */
     record OutOfTime(Duration limit) implements Result {
+        /** @throws NullPointerException if the limit is null */
         public OutOfTime {
             Objects.requireNonNull(limit, "limit");
         }

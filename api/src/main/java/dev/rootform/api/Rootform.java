@@ -1,13 +1,16 @@
 package dev.rootform.api;
 
 /**
- * The front door of rootform as a library: one request in, one {@link Result} out.
+ * The front door of rootform as a library: one {@link SolveRequest} in, one {@link Result} out.
+ *
+ * <p>A damped oscillator let go at 1 with no speed, and its position at t = 1/2 and t = 2 to 20
+ * digits:
  *
  * <pre>{@code
- * Result r = Rootform.solve(SolveRequest.of("y'' + 2y' + 5y = 0; y(0) = 1; y'(0) = 0")
- *         .with(Options.builder().digits(20).points("0.5", "2").build()));
- * if (r instanceof Result.Solved s) {
- *     String text = Exporters.byName("text").orElseThrow().render(s.report(), CodeNames.defaults()).text();
+ * Result result = Rootform.solve(SolveRequest.of("y'' + 2y' + 5y = 0; y(0) = 1; y'(0) = 0")
+ *         .with(Options.builder().digits(20).points("1/2", "2").build()));
+ * if (result instanceof Result.Solved solved) {
+ *     solved.report().values().forEach(v -> System.out.println("y(" + v.at() + ") = " + v.value()));
  * }
  * }</pre>
  *
@@ -15,13 +18,25 @@ package dev.rootform.api;
  * outcomes (bad input, contradictory or underdetermined conditions, a failed check, the time
  * limit) are values of {@link Result}, never exceptions; an exception means a bug.
  *
+ * <p>The work runs on the calling thread. When {@link Options#timeLimit()} passes, it stops
+ * within one step of its current loop and the result is {@link Result.OutOfTime}; nothing keeps
+ * computing after the call returns. To stop it, a shared daemon thread ({@code rootform-watchdog},
+ * ending when idle) interrupts the calling thread at the limit; the call clears that interrupt
+ * again before it returns. An interrupt of the calling thread from elsewhere also stops the work
+ * with {@link Result.OutOfTime}, and that interrupt status is left set.
+ *
  * @since 0.2
  */
 public final class Rootform {
     private Rootform() {
     }
 
-    /** Solves one problem exactly, verifies the answer and analyses it numerically. */
+    /**
+     * Solves one problem exactly, verifies the answer and analyses it numerically.
+     *
+     * @param request the problem and the options to solve it with
+     * @return the outcome; {@link Result#answer()} holds the finished answer when there is one
+     */
     public static Result solve(SolveRequest request) {
         return SolveJob.run(request);
     }

@@ -1,6 +1,8 @@
 package dev.rootform.api;
 
 import dev.rootform.export.Report;
+import dev.rootform.export.code.CodeModels;
+import dev.rootform.export.code.CodeRequests;
 import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.analysis.ValueRequests;
@@ -36,7 +38,9 @@ final class SolveJob {
                 return new Result.Refused(refusal.get(), "", -1);
             }
             Analysis analysis = new Analyzer(options.digits()).analyze(solution, points);
-            return classify(new Report(solution, analysis, options.digits(), options.numeric()));
+            Report report = new Report(solution, analysis, options.digits(), options.numeric());
+            boolean code = options.code() && CodeRequests.fitted(report).isEmpty();
+            return classify(code ? report.withCode(CodeModels.of(report)) : report);
         } catch (ConditionsException e) {
             return e.contradictory() ? new Result.Contradictory(e.getMessage())
                     : new Result.Underdetermined(e.getMessage(), e.freeSolution());

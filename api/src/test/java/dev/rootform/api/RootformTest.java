@@ -63,13 +63,22 @@ class RootformTest {
     @Test
     void everyFormatRendersASolvedAnswer() {
         Result.Solved s = assertInstanceOf(Result.Solved.class,
-                Rootform.solve(SolveRequest.of("y'' + 3y' + 2y = 0; y(0) = 1; y'(0) = 0")));
+                Rootform.solve(SolveRequest.of("y'' + 3y' + 2y = 0; y(0) = 1; y'(0) = 0").with(Options.builder().code(true).build())));
+        assertTrue(s.report().code().isPresent());
         for (String format : Exporters.names()) {
             String text = Exporters.byName(format).orElseThrow().render(s.report(), CodeNames.defaults()).text();
             assertTrue(!text.isBlank(), format);
         }
         assertEquals(List.of("text", "json", "latex", "mathml", "java", "c"), Exporters.names());
         assertTrue(Exporters.byName("pdf").isEmpty());
+    }
+
+    @Test
+    void codeNeedsItsModel() {
+        Result.Solved s = assertInstanceOf(Result.Solved.class, Rootform.solve(SolveRequest.of("x[n+1] = 2x[n]; x[0] = 1")));
+        assertTrue(s.report().code().isEmpty());
+        assertTrue(Exporters.byName("java").orElseThrow().refusal(s.report()).isPresent());
+        assertTrue(Exporters.byName("text").orElseThrow().refusal(s.report()).isEmpty());
     }
 
     @Test

@@ -119,7 +119,8 @@ final class OutputOptions {
             throw new InputException("--time-limit " + timeLimit + " must be at least 1 second", "", -1);
         }
         return Options.builder().digits(digits).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
-                .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable).build();
+                .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable)
+                .code(format.equals("java") || format.equals("c")).build();
     }
 
     /** @throws InputException for a bad class, package, function or header name */

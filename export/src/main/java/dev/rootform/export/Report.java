@@ -21,17 +21,30 @@ import java.util.Optional;
  * @param digits significant digits of the numeric parts
  * @param numeric show constants and roots as decimals to {@code digits} instead of exact forms (a
  *     presentation choice; the solution stays exact)
+ * @param code the double-precision model that generated code evaluates, with its measured range and
+ *     accuracy; present when it was asked for with the answer (a fitted solution only)
  * @since 0.1
  */
-public record Report(Solution solution, Analysis analysis, int digits, boolean numeric) {
+public record Report(Solution solution, Analysis analysis, int digits, boolean numeric, Optional<CodeModel> code) {
     public Report {
         Objects.requireNonNull(solution, "solution");
         Objects.requireNonNull(analysis, "analysis");
+        Objects.requireNonNull(code, "code");
     }
 
-    /** A report shown exactly. */
+    /** A report without a code model. */
+    public Report(Solution solution, Analysis analysis, int digits, boolean numeric) {
+        this(solution, analysis, digits, numeric, Optional.empty());
+    }
+
+    /** A report shown exactly, without a code model. */
     public Report(Solution solution, Analysis analysis, int digits) {
         this(solution, analysis, digits, false);
+    }
+
+    /** This report with its code model. */
+    public Report withCode(CodeModel model) {
+        return new Report(solution, analysis, digits, numeric, Optional.of(model));
     }
 
     public List<RootApproximation> roots() {

@@ -41,6 +41,12 @@ public final class Corpus {
     private Corpus() {
     }
 
+    /** {@link #report} with its generated-code model, as the API builds it for the code formats. */
+    public static Report codeReport(String input) {
+        Report r = report(input);
+        return r.withCode(dev.rootform.export.code.CodeModels.of(r));
+    }
+
     public static Report report(String input) {
         return new Report(Solver.solve(ProblemParser.parse(input, List.of(), null)),
                 new Analysis(List.of(), List.of(), List.of(), java.util.Map.of(), List.of(), Optional.empty(), List.of()), 20);

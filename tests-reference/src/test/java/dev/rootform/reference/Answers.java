@@ -17,7 +17,15 @@ public final class Answers {
 
     /** Solves {@code input} and returns its answer; fails the test when the result has none. */
     public static Report report(String input, int digits, List<Rational> points) {
-        Options options = Options.builder().digits(digits).points(points.stream().map(Rational::toString).toList()).build();
+        return report(input, Options.builder().digits(digits).points(points.stream().map(Rational::toString).toList()).build());
+    }
+
+    /** Solves {@code input} with its generated-code model (for the code formats). */
+    public static Report codeReport(String input, int digits) {
+        return report(input, Options.builder().digits(digits).code(true).build());
+    }
+
+    private static Report report(String input, Options options) {
         Result result = Rootform.solve(SolveRequest.of(input).with(options));
         return result.answer().orElseGet(() -> fail(input + ": " + result));
     }

@@ -41,7 +41,7 @@ class NumericConstantsCodeTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("cases")
     void generatedJavaMatchesTheKnownSolution(String input, DoubleUnaryOperator known) throws Exception {
-        Report report = Answers.report(input, 30, List.of());
+        Report report = Answers.codeReport(input, 30);
         String source = JavaRenderer.render(report, "gen", "Numeric");
         assertTrue(source.contains("Constants fixed numerically"), source);
         Path gen = Files.createDirectories(dir.resolve("gen"));

@@ -1,5 +1,7 @@
 package dev.rootform.export.code;
 
+import dev.rootform.export.CodeFacts;
+import dev.rootform.export.NumericForm;
 import dev.rootform.export.Report;
 import dev.rootform.symbolic.solve.Solution;
 import java.util.Optional;
@@ -27,8 +29,8 @@ public final class CRenderer {
                 .or(() -> headerFile.flatMap(Identifiers::cHeaderRefusal))
                 .or(() -> CodeRequests.refusal(r)));
         Solution s = r.solution();
-        NumericForm form = NumericForm.of(CodeHeader.codeForm(r));
-        CodeFacts facts = CodeFacts.measure(s, form);
+        NumericForm form = r.code().orElseThrow().form();
+        CodeFacts facts = r.code().orElseThrow().facts();
         StringBuilder comment = new StringBuilder("/*\n");
         CodeHeader.lines(r, form, facts).forEach(l -> comment.append(" * ").append(l).append('\n'));
         comment.append(" */\n");

@@ -19,9 +19,16 @@ public final class CodeRequests {
 
     /**
      * Why no code can be generated for {@code r}, as one line (e.g. {@code "code output needs fitted
-     * constants: give conditions for the free constants C1, C2"}); empty when it can.
+     * constants: give conditions for the free constants C1, C2"}); empty when it can: the answer is
+     * {@link #fitted} and carries its {@link dev.rootform.export.CodeModel}.
      */
     public static Optional<String> refusal(Report r) {
+        return fitted(r).or(() -> r.code().isPresent() ? Optional.empty()
+                : Optional.of("the answer was solved without its generated-code model (ask for it with the code option)"));
+    }
+
+    /** Why {@code r} has no closed form that code could evaluate (free constants, no fitted solution); empty when it has one. */
+    public static Optional<String> fitted(Report r) {
         ClosedForm form = CodeHeader.codeForm(r);
         if (!form.freeConstants().isEmpty()) {
             return Optional.of("code output needs fitted constants: give conditions for the free constants "

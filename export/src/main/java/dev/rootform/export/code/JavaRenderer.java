@@ -1,5 +1,7 @@
 package dev.rootform.export.code;
 
+import dev.rootform.export.CodeFacts;
+import dev.rootform.export.NumericForm;
 import dev.rootform.export.Report;
 import dev.rootform.export.notation.CommentText;
 import dev.rootform.symbolic.solve.Solution;
@@ -96,8 +98,8 @@ public final class JavaRenderer {
                 .or(() -> hasPackage ? Identifiers.javaPackageRefusal(packageName) : Optional.empty())
                 .or(() -> CodeRequests.refusal(r)));
         Solution s = r.solution();
-        NumericForm form = NumericForm.of(CodeHeader.codeForm(r));
-        CodeFacts facts = CodeFacts.measure(s, form);
+        NumericForm form = r.code().orElseThrow().form();
+        CodeFacts facts = r.code().orElseThrow().facts();
         Optional<IntegerRecurrence> exact = s.exact().flatMap(IntegerRecurrence::of);
         List<String> header = new java.util.ArrayList<>(CodeHeader.lines(r, form, facts));
         exact.ifPresent(e -> header.addAll(CommentText.wrap(List.of("Exact terms: term(n) and termExact(n) by Fiduccia's "

@@ -1,5 +1,8 @@
 package dev.rootform.export.code;
 
+import dev.rootform.export.CodeFacts;
+import dev.rootform.export.NumericForm;
+import dev.rootform.export.Wave;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.numeric.roots.RootFinder;
 import dev.rootform.symbolic.closedform.Angle;

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 
 /** What generated code refuses: names that could inject code, comment terminators, unfitted constants. */
 class CodeRefusalTest {
-    private static final Report FIBONACCI = Corpus.report(Corpus.SEQUENCES.get(0));
+    private static final Report FIBONACCI = Corpus.codeReport(Corpus.SEQUENCES.get(0));
 
     @Test
     void namesThatCouldInjectCodeAreRefused() {

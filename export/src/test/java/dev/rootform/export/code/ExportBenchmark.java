@@ -21,7 +21,7 @@ public final class ExportBenchmark {
 
     public static void main(String[] args) throws Exception {
         Path dir = Files.createTempDirectory("rootform-bench");
-        Report r = Corpus.report(Corpus.SEQUENCES.get(0));
+        Report r = Corpus.codeReport(Corpus.SEQUENCES.get(0));
         Files.writeString(dir.resolve("Fib.java"), JavaRenderer.render(r, "", "Fib"));
         if (ToolProvider.getSystemJavaCompiler().run(null, null, null, "-d", dir.toString(), dir.resolve("Fib.java").toString()) != 0) {
             throw new IllegalStateException("javac failed");

@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.rootform.export.Corpus;
+import dev.rootform.export.CodeFacts;
+import dev.rootform.export.NumericForm;
 import dev.rootform.export.Report;
 import dev.rootform.symbolic.algebra.Rational;
 import java.nio.file.Files;
@@ -32,9 +34,9 @@ class GeneratedCTest {
         StringBuilder calls = new StringBuilder();
         List<double[]> expected = new ArrayList<>();
         for (int i = 0; i < all.size(); i++) {
-            Report r = Corpus.report(all.get(i));
-            NumericForm form = NumericForm.of(r.solution().closedForm());
-            CodeFacts facts = CodeFacts.measure(r.solution(), form);
+            Report r = Corpus.codeReport(all.get(i));
+            NumericForm form = r.code().orElseThrow().form();
+            CodeFacts facts = r.code().orElseThrow().facts();
             String f = "case" + i;
             boolean separate = i % 2 == 0;
             CSource c = CRenderer.render(r, f, separate ? Optional.of(f + ".h") : Optional.empty());

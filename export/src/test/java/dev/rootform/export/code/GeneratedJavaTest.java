@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.rootform.export.Corpus;
+import dev.rootform.export.CodeFacts;
+import dev.rootform.export.NumericForm;
 import dev.rootform.export.Report;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.solve.ExactSolution;
@@ -40,7 +42,7 @@ class GeneratedJavaTest {
         List<String> names = new ArrayList<>();
         Files.createDirectories(dir.resolve("gen"));
         for (int i = 0; i < all.size(); i++) {
-            Report r = Corpus.report(all.get(i));
+            Report r = Corpus.codeReport(all.get(i));
             String name = "Case" + i;
             Files.writeString(dir.resolve("gen/" + name + ".java"), JavaRenderer.render(r, "gen", name));
             reports.add(r);
@@ -59,8 +61,8 @@ class GeneratedJavaTest {
     }
 
     private void check(String input, Report r, Class<?> generated) throws Exception {
-        NumericForm form = NumericForm.of(r.solution().closedForm());
-        CodeFacts facts = CodeFacts.measure(r.solution(), form);
+        NumericForm form = r.code().orElseThrow().form();
+        CodeFacts facts = r.code().orElseThrow().facts();
         String source = Files.readString(dir.resolve("gen/" + generated.getSimpleName() + ".java"));
         Matcher m = STATED.matcher(source.replace("\n *  ", " "));
         assertTrue(m.find(), source);
@@ -75,7 +77,7 @@ class GeneratedJavaTest {
             Rational p = facts.points().get(i);
             double got = (double) value.invoke(null, form.differential() ? (Object) p.doubleValue() : (Object) p.toBigInteger().longValueExact());
             BigDecimal reference = form.differential() ? facts.exact().get(i) : sequence.apply(p.toBigInteger().longValueExact());
-            double error = CodeFacts.relativeError(got, reference);
+            double error = CodeMeasurement.relativeError(got, reference);
             assertTrue(error <= stated, input + " at " + p + ": error " + error + " > stated " + stated);
         }
         if (exact.flatMap(IntegerRecurrence::of).isPresent()) {

@@ -14,6 +14,7 @@ import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.RadicalSolution;
 import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -21,6 +22,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
@@ -63,6 +65,7 @@ public final class Analyzer {
         RootCache cache = new RootCache();
         List<RootApproximation> roots = new ArrayList<>();
         for (ExactRoot r : solution.roots()) {
+            Deadline.checkCurrent();
             roots.add(approximate(r, cache));
         }
         List<PointValue> values = new ArrayList<>();
@@ -71,9 +74,7 @@ public final class Analyzer {
         if (solution.hasNumericConstants()) {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
             constants.putAll(bvp.constants(digits));
-            for (Rational p : points) {
-                values.add(new PointValue(p, Decimals.toBigDecimal(bvp.derivative(0, p), digits), Optional.empty()));
-            }
+            points.forEach(p -> values.add(boundaryValue(bvp, p)));
             if (solution.numericParticular()) {
                 checks.add(bvp.residualCheck(digits));
             }
@@ -86,9 +87,7 @@ public final class Analyzer {
         Optional<ExactSolution> exact = solution.exact();
         if (exact.isPresent()) {
             ExactSolution s = exact.get();
-            for (Rational p : points) {
-                values.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p, digits, cache));
-            }
+            points.forEach(p -> values.add(exactValue(s, p, cache)));
             if (s.domain() == Domain.DIFFERENTIAL) {
                 checks.add(integratorCheck(s, cache));
             }
@@ -100,6 +99,35 @@ public final class Analyzer {
         List<SteadyState> steady = diagnostics.stability().verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE
                 ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
         return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings());
+    }
+
+    /**
+     * The solution's values at {@code points}, and nothing else: exact for sequences, to the
+     * digits of this analyzer for functions (boundary-value constants are solved again).
+     *
+     * @throws IllegalArgumentException if {@link ValueRequests#refusal} refuses the points
+     */
+    public List<PointValue> values(Solution solution, List<Rational> points) {
+        ValueRequests.refusal(solution, points).ifPresent(message -> {
+            throw new IllegalArgumentException(message);
+        });
+        RootCache cache = new RootCache();
+        List<PointValue> values = new ArrayList<>();
+        if (solution.hasNumericConstants()) {
+            BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
+            points.forEach(p -> values.add(boundaryValue(bvp, p)));
+        }
+        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p))));
+        solution.exact().ifPresent(s -> points.forEach(p -> values.add(exactValue(s, p, cache))));
+        return values;
+    }
+
+    private PointValue boundaryValue(BoundaryValues bvp, Rational p) {
+        return new PointValue(p, Decimals.toBigDecimal(bvp.derivative(0, p), digits), Optional.empty());
+    }
+
+    private PointValue exactValue(ExactSolution s, Rational p, RootCache cache) {
+        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p, digits, cache);
     }
 
     /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
@@ -121,8 +149,10 @@ public final class Analyzer {
             long precision = digits + WorkingPrecision.GUARD_DIGITS;
             Apfloat angle = ApfloatMath.pi(precision).multiply(new Apfloat(2L * u.k(), precision))
                     .divide(new Apfloat(u.order(), precision));
-            return new RootApproximation(root, Decimals.toBigDecimal(ApfloatMath.cos(angle), digits),
-                    Decimals.toBigDecimal(ApfloatMath.sin(angle), digits), BigDecimal.ZERO);
+            // cos + i·sin by our own exponential: cancellable, and far faster than apfloat's cos and sin
+            Apcomplex unit = ComplexExp.exp(new Apcomplex(Apfloat.ZERO, angle), precision);
+            return new RootApproximation(root, Decimals.toBigDecimal(unit.real(), digits),
+                    Decimals.toBigDecimal(unit.imag(), digits), BigDecimal.ZERO);
         }
         if (root instanceof ExactRoot.Implicit i) {
             Enclosure z = cache.roots(i.factor(), digits + WorkingPrecision.GUARD_DIGITS).get(i.index() - 1);

@@ -8,6 +8,7 @@ import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ConditionsException;
 import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -82,6 +83,7 @@ final class BoundaryValues {
         LinearEquation eq = solution.problem().equation();
         Apfloat[][] a = new Apfloat[n][n + 1];
         for (int row = 0; row < n; row++) {
+            Deadline.checkCurrent();
             boolean condition = row < conditions.size();
             Condition c = condition ? conditions.get(row) : null;
             Apfloat t = condition ? point(c, working) : collocation(row - conditions.size(), working);
@@ -176,6 +178,7 @@ final class BoundaryValues {
             swap(a, scales, p, rank);
             for (int r = 0; r < k; r++) {
                 if (r != rank) {
+                    Deadline.checkCurrent();
                     Apfloat f = a[r][c].divide(a[rank][c]);
                     for (int j = c; j <= k; j++) {
                         a[r][j] = a[r][j].subtract(f.multiply(a[rank][j]));

@@ -1,5 +1,6 @@
 package dev.rootform.numeric.analysis;
 
+import dev.rootform.symbolic.work.Deadline;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
@@ -29,6 +30,7 @@ final class ComplexExp {
         Apcomplex sum = new Apfloat(1, work);
         Apcomplex term = sum;
         for (int k = 1; ApcomplexMath.abs(term).compareTo(tiny) >= 0; k++) {
+            Deadline.checkCurrent();
             term = term.multiply(w).divide(new Apfloat(k, work));
             sum = sum.add(term);
         }

@@ -8,6 +8,7 @@ import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 import org.apfloat.Apcomplex;
@@ -39,6 +40,7 @@ final class ModeSum {
     static ModeSum of(ExactSolution s, RootCache cache, long precision) {
         List<Mode> modes = new ArrayList<>();
         for (Component c : s.components()) {
+            Deadline.checkCurrent();
             for (Apcomplex alpha : roots(c.factor().polynomial(), cache, precision)) {
                 for (int i = 0; i < c.coefficients().size(); i++) {
                     modes.add(new Mode(polynomialAt(c.coefficients().get(i), alpha, precision), i, alpha));
@@ -130,6 +132,7 @@ final class ModeSum {
         Apcomplex u = t.subtract(Decimals.toApfloat(origin, precision));
         List<Apcomplex> terms = new ArrayList<>(modes.size());
         for (Mode m : modes) {
+            Deadline.checkCurrent();
             Apcomplex e = ComplexExp.exp(m.rate().multiply(u), precision);
             Apcomplex inner = Apcomplex.ZERO;
             Apfloat binomial = new Apfloat(1, precision);

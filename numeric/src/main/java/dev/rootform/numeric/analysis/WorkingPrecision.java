@@ -1,5 +1,6 @@
 package dev.rootform.numeric.analysis;
 
+import dev.rootform.symbolic.work.Deadline;
 import java.util.function.IntFunction;
 
 /**
@@ -8,7 +9,7 @@ import java.util.function.IntFunction;
  * evaluations agree. Each round evaluates the quantity at p and at p + GUARD_DIGITS digits (the
  * cheaper first, so that a failure the evaluation reports, such as a singular system, is reported
  * at the lower precision); when the two agree, the more precise one is the answer, else p grows by
- * the caller's step.
+ * the caller's step. Each round checks the current {@link Deadline}.
  */
 final class WorkingPrecision {
     /** Guard digits above the requested ones. */
@@ -40,6 +41,7 @@ final class WorkingPrecision {
         int working = wanted + GUARD_DIGITS;
         int ceiling = wanted + MAX_EXTRA_DIGITS;
         while (working <= ceiling) {
+            Deadline.checkCurrent();
             T low = evaluate.apply(working);
             T high = evaluate.apply(working + GUARD_DIGITS);
             if (agree.test(low, high, working)) {

@@ -1,12 +1,15 @@
 package dev.rootform.numeric.check;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.exception.MaxCountExceededException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
+import org.apache.commons.math3.ode.sampling.StepHandler;
+import org.apache.commons.math3.ode.sampling.StepInterpolator;
 
 /**
  * An independent numeric reference for the linear ODE Σ_{j=0..k} a_j·y^{(j)}(t) = g(t) with
@@ -22,6 +25,9 @@ import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
  * is the largest of 1 and the |initial derivatives|. Each point is reached by a separate integration
  * from t0, forward or backward. The values are approximate: local errors are controlled, global
  * error is not bounded (it grows with |t − t0| and with the growth rate of the solution).
+ *
+ * <p>A step handler checks the current {@link Deadline} after every accepted step, so a long
+ * integration can be cancelled.
  */
 public final class OdeReference {
     /** Relative tolerance of the step-size control (absolute: this times the initial scale). */
@@ -93,6 +99,7 @@ public final class OdeReference {
             DormandPrince853Integrator integrator = new DormandPrince853Integrator(
                     MIN_STEP_FRACTION * span, span, RELATIVE_TOLERANCE * scale, RELATIVE_TOLERANCE);
             integrator.setMaxEvaluations(maxEvaluations);
+            integrator.addStepHandler(new DeadlineCheck());
             double[] state = start.clone();
             try {
                 integrator.integrate(system, begin, state, points[i], state);
@@ -102,6 +109,19 @@ public final class OdeReference {
             result[i] = state[0];
         }
         return Optional.of(result);
+    }
+
+    /** Checks the current deadline at the start and after each accepted step. */
+    private static final class DeadlineCheck implements StepHandler {
+        @Override
+        public void init(double t0, double[] y0, double t) {
+            Deadline.checkCurrent();
+        }
+
+        @Override
+        public void handleStep(StepInterpolator interpolator, boolean isLast) {
+            Deadline.checkCurrent();
+        }
     }
 
     /** u' = C·u + (0, …, 0, g(t)/a_k) for the companion matrix C of the normalised equation. */

@@ -6,6 +6,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.util.Comparator;
 import java.util.List;
@@ -40,6 +41,7 @@ final class BoundarySide {
         ExactRoot.Implicit i = (ExactRoot.Implicit) root;
         Enclosure z = approximate;
         for (int d = digits; ; d *= 2) {
+            Deadline.checkCurrent();
             Side s = enclosed(z);
             if (s != Side.UNKNOWN || d * 2 > MAX_DIGITS) {
                 return s;

@@ -2,6 +2,7 @@ package dev.rootform.numeric.roots;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Deadline;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -65,6 +66,7 @@ final class AberthRefiner {
                 if (done[i]) {
                     continue;
                 }
+                Deadline.checkCurrent();
                 Apcomplex w = correction(z, re, im, i);
                 z[i] = z[i].subtract(w).precision(precision);
                 re[i] = z[i].real().doubleValue();

@@ -2,6 +2,7 @@ package dev.rootform.numeric.roots;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
@@ -96,6 +97,7 @@ final class DoubleSeeds {
         int d = re.length;
         boolean[] done = new boolean[d];
         for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
+            Deadline.checkCurrent();
             boolean active = false;
             for (int i = 0; i < d; i++) {
                 if (done[i]) {

@@ -1,6 +1,7 @@
 package dev.rootform.numeric.roots;
 
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
@@ -60,6 +61,7 @@ final class InclusionCertificate {
         int maxPrecision = MIN_PRECISION;
         for (int i = 0; i < d; i++) {
             if (centres.partner()[i] >= i) {
+                Deadline.checkCurrent();
                 bounds[i] = bound(p, centres, i, digits);
                 if (bounds[i] == null) {
                     return new Outcome(Optional.empty(), UNKNOWN);
@@ -76,6 +78,7 @@ final class InclusionCertificate {
         BigDecimal target = BigDecimal.ONE.scaleByPowerOfTen(-digits);
         double worst = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < d; i++) {
+            Deadline.checkCurrent();
             int partner = centres.partner()[i];
             radius[i] = partner < i ? radius[partner] : radius(coefficients, re[i], im[i], bounds[i]);
             BigDecimal size = Bounds.modulusDown(re[i], im[i]).subtract(radius[i]).max(BigDecimal.ONE);
@@ -88,6 +91,7 @@ final class InclusionCertificate {
             return new Outcome(Optional.empty(), (int) Math.ceil(worst));
         }
         for (int i = 0; i < d; i++) {
+            Deadline.checkCurrent();
             for (int j = i + 1; j < d; j++) {
                 BigDecimal dx = re[i].subtract(re[j]);
                 BigDecimal dy = im[i].subtract(im[j]);

@@ -2,6 +2,7 @@ package dev.rootform.numeric.roots;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
@@ -103,6 +104,7 @@ public final class RootFinder {
         long precision = workingPrecision(p.degree());
         Apcomplex[] z = Seeds.of(p, precision);
         for (int attempt = 0; attempt <= MAX_ESCALATIONS; attempt++) {
+            Deadline.checkCurrent();
             new AberthRefiner(p, precision).refine(z, MAX_SWEEPS);
             Optional<CentreSet> centres = ConjugateSymmetry.centres(z, precision);
             int missing = InclusionCertificate.UNKNOWN;

@@ -2,6 +2,7 @@ package dev.rootform.numeric.roots;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigInteger;
 
 /**
@@ -26,6 +27,7 @@ final class SquarefreeTest {
         BigInteger[] integer = integerMultiple(p);
         int d = integer.length - 1;
         for (long q : PRIMES) {
+            Deadline.checkCurrent();
             BigInteger modulus = BigInteger.valueOf(q);
             if (integer[d].mod(modulus).signum() == 0) {
                 continue;

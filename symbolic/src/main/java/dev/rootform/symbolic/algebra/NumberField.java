@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.algebra;
 
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -69,6 +70,7 @@ public final class NumberField {
         long k = Math.abs(e);
         RationalPolynomial result = RationalPolynomial.ONE;
         while (k > 0) {
+            Deadline.checkCurrent();
             if ((k & 1) == 1) {
                 result = multiply(result, base);
             }

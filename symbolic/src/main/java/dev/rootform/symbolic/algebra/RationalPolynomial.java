@@ -1,12 +1,14 @@
 package dev.rootform.symbolic.algebra;
 
+import dev.rootform.symbolic.work.Deadline;
 import java.util.Arrays;
 import java.util.List;
 
 /**
  * A polynomial with exact rational coefficients, stored in ascending order (index = power) with
  * no trailing zero coefficients; the zero polynomial has no coefficients and degree -1.
- * Immutable and canonical.
+ * Immutable and canonical. The quadratic loops (product, division, powers, gcd, inverse) check
+ * the current {@link Deadline} once per row, so exact work of any size can be cancelled.
  *
  * @since 0.1
  */
@@ -124,6 +126,7 @@ public final class RationalPolynomial {
             if (coefficients[i].isZero()) {
                 continue;
             }
+            Deadline.checkCurrent();
             for (int j = 0; j < other.coefficients.length; j++) {
                 r[i + j] = r[i + j].add(coefficients[i].multiply(other.coefficients[j]));
             }
@@ -135,6 +138,7 @@ public final class RationalPolynomial {
     public RationalPolynomial pow(int exponent) {
         RationalPolynomial result = ONE;
         for (int i = 0; i < exponent; i++) {
+            Deadline.checkCurrent();
             result = result.multiply(this);
         }
         return result;
@@ -161,6 +165,7 @@ public final class RationalPolynomial {
             if (c.isZero()) {
                 continue;
             }
+            Deadline.checkCurrent();
             for (int j = 0; j <= dd; j++) {
                 rem[i - dd + j] = rem[i - dd + j].subtract(c.multiply(divisor.coefficients[j]));
             }
@@ -187,6 +192,7 @@ public final class RationalPolynomial {
         RationalPolynomial a = this;
         RationalPolynomial b = other;
         while (!b.isZero()) {
+            Deadline.checkCurrent();
             RationalPolynomial r = a.mod(b);
             a = b;
             b = r;
@@ -206,6 +212,7 @@ public final class RationalPolynomial {
         RationalPolynomial s0 = ZERO;
         RationalPolynomial s1 = ONE;
         while (!r1.isZero()) {
+            Deadline.checkCurrent();
             RationalPolynomial[] qr = r0.divideAndRemainder(r1);
             r0 = r1;
             r1 = qr[1];

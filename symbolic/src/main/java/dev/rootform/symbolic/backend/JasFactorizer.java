@@ -3,8 +3,12 @@ package dev.rootform.symbolic.backend;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Cancelled;
+import dev.rootform.symbolic.work.Deadline;
 import edu.jas.arith.BigInteger;
 import edu.jas.kern.ComputerThreads;
+import edu.jas.kern.PreemptStatus;
+import edu.jas.kern.PreemptingException;
 import edu.jas.poly.ExpVector;
 import edu.jas.poly.GenPolynomial;
 import edu.jas.poly.GenPolynomialRing;
@@ -15,12 +19,27 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.locks.ReentrantLock;
 
 /**
  * Factorisation over Q into monic irreducible factors with multiplicities, by JAS over Z after
  * clearing denominators (measured 2–4× faster than over Q at degree 120). The only class that
  * touches JAS types. JAS's parallel GCD thread pool is switched off, so no non-daemon thread keeps
- * the JVM alive after use.
+ * the JVM alive after use, and the work runs on the calling thread.
+ *
+ * <p>Cancellation: JAS checks {@link Thread#isInterrupted()} whenever it builds a polynomial in a
+ * ring made while preemption is allowed ({@code PreemptStatus.setAllow()}, switched on before each
+ * factorisation) and then throws its own unchecked exception, which this class turns into
+ * {@link Cancelled}. So an interrupt of the calling thread (the front door's watchdog interrupts
+ * it when the time limit passes) stops a long factorisation within one polynomial operation.
+ * {@link Deadline#checkCurrent()} is consulted before the JAS call and in this class's own loops.
+ *
+ * <p>Threads: JAS is not safe for concurrent use. Its prime tables ({@code edu.jas.arith.PrimeList},
+ * used by the modular factorisation and gcd) share one list per range among all instances and
+ * append to it without synchronisation when a computation runs past the primes listed (seen in
+ * its bytecode). So one factorisation runs at a time; a thread waiting for its turn still honours
+ * its deadline.
  *
  * @since 0.1
  */
@@ -29,8 +48,10 @@ public final class JasFactorizer {
         ComputerThreads.NO_THREADS = true;
     }
 
-    private static final GenPolynomialRing<BigInteger> RING =
-            new GenPolynomialRing<>(BigInteger.ONE, 1, new String[] {"x"});
+    /** One JAS factorisation at a time (see the class comment). */
+    private static final ReentrantLock JAS = new ReentrantLock();
+    /** How often a thread waiting for {@link #JAS} checks its deadline, in milliseconds. */
+    private static final long WAIT_STEP_MILLIS = 10;
 
     private JasFactorizer() {
     }
@@ -53,15 +74,47 @@ public final class JasFactorizer {
     }
 
     private static List<Factor> factorsOf(RationalPolynomial p) {
+        Deadline.checkCurrent();
         FactorAbstract<BigInteger> engine = FactorFactory.getImplementation(BigInteger.ONE);
         List<Factor> factors = new ArrayList<>();
-        for (Map.Entry<GenPolynomial<BigInteger>, Long> e : engine.factors(toJas(p)).entrySet()) {
+        for (Map.Entry<GenPolynomial<BigInteger>, Long> e : interruptible(engine, p).entrySet()) {
             RationalPolynomial f = fromJas(e.getKey());
             if (f.degree() >= 1) {
                 factors.add(new Factor(f.monic(), Math.toIntExact(e.getValue())));
             }
         }
         return factors;
+    }
+
+    /**
+     * JAS's factorisation of p over Z, in a polynomial ring made for this call with preemption
+     * allowed (another library in the same JVM may have switched it off globally); its preemption
+     * exception becomes {@link Cancelled}. The ring is not a static constant: made in a class
+     * initialiser, an interrupt would break the class for good.
+     */
+    private static Map<GenPolynomial<BigInteger>, Long> interruptible(FactorAbstract<BigInteger> engine,
+            RationalPolynomial p) {
+        lock();
+        try {
+            PreemptStatus.setAllow();
+            return engine.factors(toJas(new GenPolynomialRing<>(BigInteger.ONE, 1, new String[] {"x"}), p));
+        } catch (PreemptingException e) {
+            throw new Cancelled("factoring was interrupted");
+        } finally {
+            JAS.unlock();
+        }
+    }
+
+    /** Takes {@link #JAS}, checking the current deadline while another thread holds it. */
+    private static void lock() {
+        try {
+            while (!JAS.tryLock(WAIT_STEP_MILLIS, TimeUnit.MILLISECONDS)) {
+                Deadline.checkCurrent();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new Cancelled("interrupted while waiting to factor");
+        }
     }
 
     /**
@@ -89,6 +142,7 @@ public final class JasFactorizer {
             factors.add(new Factor(RationalPolynomial.X, m));
         }
         for (Factor g : factorsOf(unit)) {
+            Deadline.checkCurrent();
             int e = g.degree();
             Rational[] scaled = new Rational[e + 1];
             for (int j = 0; j <= e; j++) {
@@ -128,6 +182,7 @@ public final class JasFactorizer {
     private static void checkProduct(RationalPolynomial p, List<Factor> factors) {
         RationalPolynomial product = RationalPolynomial.constant(p.leadingCoefficient());
         for (Factor f : factors) {
+            Deadline.checkCurrent();
             product = product.multiply(f.polynomial().pow(f.multiplicity()));
         }
         if (!product.equals(p)) {
@@ -135,12 +190,12 @@ public final class JasFactorizer {
         }
     }
 
-    private static GenPolynomial<BigInteger> toJas(RationalPolynomial p) {
+    private static GenPolynomial<BigInteger> toJas(GenPolynomialRing<BigInteger> ring, RationalPolynomial p) {
         java.math.BigInteger lcm = java.math.BigInteger.ONE;
         for (Rational c : p.coefficients()) {
             lcm = lcm.divide(lcm.gcd(c.denominator())).multiply(c.denominator());
         }
-        GenPolynomial<BigInteger> result = RING.getZERO();
+        GenPolynomial<BigInteger> result = ring.getZERO();
         for (int i = 0; i <= p.degree(); i++) {
             Rational c = p.coefficient(i).multiply(Rational.of(lcm));
             if (!c.isZero()) {

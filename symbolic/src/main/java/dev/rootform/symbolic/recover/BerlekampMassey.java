@@ -1,9 +1,9 @@
 package dev.rootform.symbolic.recover;
 
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigInteger;
 import java.util.Arrays;
 import java.util.List;
-import java.util.concurrent.CancellationException;
 
 /**
  * The shortest linear recurrence of an integer sequence, by the Berlekamp–Massey algorithm
@@ -35,7 +35,8 @@ final class BerlekampMassey {
 
     /**
      * @param s the sequence
-     * @throws CancellationException if the thread is interrupted (the caller's time limit ran out)
+     * @throws dev.rootform.symbolic.work.Cancelled if the current {@link Deadline} passes or the thread
+     *     is interrupted
      */
     static Register shortest(List<BigInteger> s) {
         BigInteger[] c = {BigInteger.ONE};
@@ -44,9 +45,7 @@ final class BerlekampMassey {
         int length = 0;
         int shift = 1;
         for (int j = 0; j < s.size(); j++) {
-            if (Thread.currentThread().isInterrupted()) {
-                throw new CancellationException("recovery interrupted at term " + j);
-            }
+            Deadline.checkCurrent();
             BigInteger d = BigInteger.ZERO;
             for (int i = 0; i < c.length; i++) {
                 d = d.add(c[i].multiply(s.get(j - i)));

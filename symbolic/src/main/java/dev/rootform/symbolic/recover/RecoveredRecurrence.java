@@ -2,6 +2,7 @@ package dev.rootform.symbolic.recover;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -107,6 +108,7 @@ public record RecoveredRecurrence(List<Rational> terms, int start, RationalPolyn
         List<Rational> a = characteristic.coefficients();
         List<Rational> x = new ArrayList<>(terms.subList(0, Math.min(k, terms.size())));
         while (x.size() < count) {
+            Deadline.checkCurrent();
             int m = x.size() - k;
             Rational sum = Rational.ZERO;
             for (int j = 0; j < k; j++) {

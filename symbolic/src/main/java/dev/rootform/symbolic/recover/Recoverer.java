@@ -31,7 +31,8 @@ public final class Recoverer {
      * @param start the index of the first term
      * @throws InputException if every term is 0 (order 0: there is no recurrence to solve), or an
      *     index is beyond ±{@link #MAX_INDEX}
-     * @throws java.util.concurrent.CancellationException if the thread is interrupted
+     * @throws dev.rootform.symbolic.work.Cancelled if the current deadline passes or the thread is
+     *     interrupted
      */
     public static RecoveredRecurrence recover(List<Rational> terms, int start) {
         if (Math.abs((long) start) + terms.size() > MAX_INDEX) {

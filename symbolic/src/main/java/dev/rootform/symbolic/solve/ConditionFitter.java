@@ -6,6 +6,7 @@ import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -45,6 +46,7 @@ public final class ConditionFitter {
         List<List<Rational>> rows = new ArrayList<>(rows(equation, conditions, origin, operator));
         List<Rational> rhs = new ArrayList<>(conditions.stream().map(Condition::value).toList());
         for (int j = 0; j < operator.degree() - k; j++) {
+            Deadline.checkCurrent();
             RationalPolynomial applied = RationalPolynomial.ZERO;
             for (int i = 0; i <= k; i++) {
                 applied = applied.add(powerModulo(i + j, operator).multiply(equation.coefficients().get(i)));
@@ -102,6 +104,7 @@ public final class ConditionFitter {
             RationalPolynomial operator) {
         List<List<Rational>> rows = new ArrayList<>();
         for (Condition c : conditions) {
+            Deadline.checkCurrent();
             long power = equation.domain() == Domain.DIFFERENCE
                     ? c.at().subtract(origin).toBigInteger().longValueExact()
                     : c.derivative();
@@ -215,6 +218,7 @@ public final class ConditionFitter {
         RationalPolynomial base = RationalPolynomial.X.mod(modulus);
         long e = power;
         while (e > 0) {
+            Deadline.checkCurrent();
             if ((e & 1) == 1) {
                 result = result.multiply(base).mod(modulus);
             }

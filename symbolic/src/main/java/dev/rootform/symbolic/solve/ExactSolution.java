@@ -5,6 +5,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.List;
 import java.util.Objects;
 
@@ -57,6 +58,7 @@ public record ExactSolution(LinearEquation equation, ForcingPart forcingPart, Ra
         Rational nn = Rational.of(n);
         Rational sum = Rational.ZERO;
         for (Component c : components) {
+            Deadline.checkCurrent();
             NumberField k = new NumberField(c.factor().polynomial());
             RationalPolynomial weight = RationalPolynomial.ZERO;
             for (int j = c.coefficients().size() - 1; j >= 0; j--) {
@@ -83,6 +85,7 @@ public record ExactSolution(LinearEquation equation, ForcingPart forcingPart, Ra
             RationalPolynomial total = RationalPolynomial.ZERO;
             Rational falling = Rational.ONE;
             for (int i = 0; i < c.coefficients().size() && i <= d; i++) {
+                Deadline.checkCurrent();
                 RationalPolynomial term = k.multiply(c.coefficients().get(i), k.pow(k.generator(), d - i));
                 total = total.add(term.multiply(falling));
                 falling = falling.multiply(d - i);

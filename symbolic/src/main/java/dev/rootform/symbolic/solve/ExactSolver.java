@@ -6,6 +6,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -42,6 +43,7 @@ final class ExactSolver {
             if (difference && f.polynomial().equals(RationalPolynomial.X)) {
                 continue;
             }
+            Deadline.checkCurrent();
             List<RationalPolynomial> b = Residues.at(f, p, operator);
             NumberField k = new NumberField(f.polynomial());
             List<RationalPolynomial> c = difference ? sequenceBasis(k, b, state.origin()) : functionBasis(b);
@@ -84,6 +86,7 @@ final class ExactSolver {
         RationalPolynomial alpha = k.generator();
         List<RationalPolynomial> c = zeros(m);
         for (int i = 1; i <= m; i++) {
+            Deadline.checkCurrent();
             RationalPolynomial weight = k.multiply(b.get(i - 1), k.pow(alpha, 1 - i));
             RationalPolynomial binomial = binomialPolynomial(i - 1);
             for (int j = 0; j < m; j++) {

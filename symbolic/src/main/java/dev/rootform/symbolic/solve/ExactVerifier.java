@@ -6,6 +6,7 @@ import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.LongFunction;
@@ -56,6 +57,7 @@ final class ExactVerifier {
         int points = eq.isHomogeneous() ? 0 : solution.operator().degree() - eq.order() + EXTRA_RESIDUAL_POINTS;
         long last = solution.domain() == Domain.DIFFERENCE ? Math.max(solution.validFrom(), first + points) : points;
         for (long n = first; n < last; n++) {
+            Deadline.checkCurrent();
             if (!residual(solution, n).isZero()) {
                 return new Check("satisfies the equation", false, (solution.domain() == Domain.DIFFERENCE
                         ? "residual at n = " : "derivative of the residual at t0, order ") + n + " is not zero");
@@ -102,6 +104,7 @@ final class ExactVerifier {
         List<RationalPolynomial> current = component.coefficients();
         List<RationalPolynomial> total = scale(current, operator.get(0));
         for (int j = 1; j < operator.size(); j++) {
+            Deadline.checkCurrent();
             current = domain == Domain.DIFFERENTIAL ? differentiate(k, alpha, current) : shift(k, alpha, current);
             total = add(total, scale(current, operator.get(j)));
         }
@@ -147,6 +150,7 @@ final class ExactVerifier {
 
     private static Check conditions(ExactSolution solution, List<Condition> conditions) {
         for (Condition c : conditions) {
+            Deadline.checkCurrent();
             Rational actual = solution.domain() == Domain.DIFFERENCE
                     ? solution.valueAt(c.at().toBigInteger().longValueExact())
                     : solution.derivativeAtOrigin(c.derivative());
@@ -162,6 +166,7 @@ final class ExactVerifier {
         long first = first(solution);
         List<Rational> x = extend(solution);
         for (int i = 0; i < x.size(); i++) {
+            Deadline.checkCurrent();
             Rational closed = solution.valueAt(first + i);
             if (!x.get(i).equals(closed)) {
                 return new Check("agrees with exact iteration", false, "differs at n = " + (first + i)
@@ -175,6 +180,7 @@ final class ExactVerifier {
     private static Check taylor(ExactSolution solution) {
         List<Rational> d = extend(solution);
         for (int i = 0; i < d.size(); i++) {
+            Deadline.checkCurrent();
             if (!d.get(i).equals(solution.derivativeAtOrigin(i))) {
                 return new Check("agrees with the Taylor series", false, "derivative " + i + " at t0 differs");
             }
@@ -196,9 +202,11 @@ final class ExactVerifier {
         LongFunction<Rational> g = forcing(solution);
         List<Rational> s = new ArrayList<>();
         for (int i = 0; i < k; i++) {
+            Deadline.checkCurrent();
             s.add(y.apply(first + i));
         }
         while (s.size() < k + REFERENCE_TERMS) {
+            Deadline.checkCurrent();
             int base = s.size() - k;
             Rational sum = g.apply(first + base);
             for (int j = 0; j < k; j++) {

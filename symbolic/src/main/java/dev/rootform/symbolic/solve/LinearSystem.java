@@ -1,6 +1,7 @@
 package dev.rootform.symbolic.solve;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -133,6 +134,7 @@ final class LinearSystem {
             a[rank] = tmp;
             for (int r = 0; r < rows; r++) {
                 if (r != rank && !a[r][c].isZero()) {
+                    Deadline.checkCurrent();
                     Rational f = a[r][c].divide(a[rank][c]);
                     for (int j = c; j < width; j++) {
                         a[r][j] = a[r][j].subtract(f.multiply(a[rank][j]));

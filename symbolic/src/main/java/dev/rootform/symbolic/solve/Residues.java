@@ -4,6 +4,7 @@ import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.NumberField;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -33,6 +34,7 @@ final class Residues {
         List<RationalPolynomial> top = new ArrayList<>(m);
         List<RationalPolynomial> h = new ArrayList<>(m);
         for (int l = 0; l < m; l++) {
+            Deadline.checkCurrent();
             top.add(k.evaluate(hasse(n, l)));
             h.add(k.evaluate(hasse(f, l + 1)));
         }
@@ -40,6 +42,7 @@ final class Residues {
         RationalPolynomial inverseLead = k.inverse(hm.get(0));
         List<RationalPolynomial> e = new ArrayList<>(m);
         for (int l = 0; l < m; l++) {
+            Deadline.checkCurrent();
             RationalPolynomial s = top.get(l);
             for (int i = 1; i <= l; i++) {
                 s = s.subtract(k.multiply(hm.get(i), e.get(l - i)));
@@ -73,6 +76,7 @@ final class Residues {
             result.add(RationalPolynomial.ZERO);
         }
         for (int p = 0; p < m; p++) {
+            Deadline.checkCurrent();
             List<RationalPolynomial> next = new ArrayList<>(len);
             for (int i = 0; i < len; i++) {
                 RationalPolynomial s = RationalPolynomial.ZERO;

@@ -13,6 +13,7 @@ import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
+import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
@@ -238,6 +239,7 @@ public final class Solver {
             NumberField k = new NumberField(f.polynomial());
             for (int i = 0; i < f.multiplicity(); i++) {
                 for (int j = 0; j < f.degree(); j++) {
+                    Deadline.checkCurrent();
                     List<RationalPolynomial> c = new ArrayList<>();
                     for (int l = 0; l < f.multiplicity(); l++) {
                         c.add(l == i ? k.pow(k.generator(), j) : RationalPolynomial.ZERO);

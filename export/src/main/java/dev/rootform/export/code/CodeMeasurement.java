@@ -1,5 +1,7 @@
 package dev.rootform.export.code;
 
+import dev.rootform.export.CodeFacts;
+import dev.rootform.export.NumericForm;
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
@@ -13,25 +15,14 @@ import java.util.function.LongFunction;
 import java.util.TreeSet;
 
 /**
- * What rootform measured about the double formula of generated code: the input range where every
- * term stays finite and the largest stays a normal double, and the largest relative error against
- * the exact values over a sample of points inside that range.
- *
- * @param low smallest valid input (first index, or smallest t)
- * @param high largest valid input
- * @param bounded whether {@code high}/{@code low} are real limits, not the search cap
- * @param points the sample points
- * @param exact the exact values there (sequences) or values to {@link #EXACT_DIGITS} digits (functions)
- * @param maxRelativeError max |value − exact|/|exact| over the points with exact ≠ 0 (points where the
- *     exact value is 0 are left out of the relative measure)
- * @since 0.2
+ * Measures the double formula of generated code ({@link CodeFacts}): the input range where every
+ * term stays finite and the largest a normal double (searched up to {@link CodeFacts#CAP}), and the
+ * largest relative error against exact values (sequences) or 30-digit values (functions) over a
+ * sample of points inside that range.
  */
-record CodeFacts(double low, double high, boolean bounded, List<Rational> points, List<BigDecimal> exact,
-        double maxRelativeError) {
+final class CodeMeasurement {
     /** Significant digits of the reference values of functions. */
     static final int EXACT_DIGITS = 30;
-    /** Farthest input examined when searching the valid range. */
-    static final double CAP = 1e15;
     /** ln(Double.MAX_VALUE) with a margin: a term above it overflows. */
     private static final double LN_MAX = Math.log(Double.MAX_VALUE) - 1;
     /** ln(Double.MIN_NORMAL) with a margin: when every term is below it, the value is subnormal. */
@@ -39,9 +30,7 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
     /** Offsets from the first index (sequences) or from t0 (functions) tried as sample points. */
     private static final double[] OFFSETS = {0, 0.25, 0.5, 1, 2, 3, 5, 7, 10, 15, 20, 30, 50, 100, 200, 500, 1000, 2000};
 
-    CodeFacts {
-        points = List.copyOf(points);
-        exact = List.copyOf(exact);
+    private CodeMeasurement() {
     }
 
     /** Measures {@code form}, the emitted formula of {@code solution}'s closed form (a fitted solution, see {@link CodeRequests}). */
@@ -68,7 +57,7 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
         List<Rational> points = List.copyOf(sample);
         List<BigDecimal> exact = new ArrayList<>();
         if (form.differential()) {
-            new Analyzer(EXACT_DIGITS).analyze(solution, points).values().stream().map(PointValue::value).forEach(exact::add);
+            new Analyzer(EXACT_DIGITS).values(solution, points).stream().map(PointValue::value).forEach(exact::add);
         } else {
             points.forEach(p -> exact.add(sequence.apply(p.toBigInteger().longValueExact())));
         }
@@ -76,7 +65,7 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
         for (int i = 0; i < points.size(); i++) {
             worst = Math.max(worst, relativeError(evaluate(form, points.get(i)), exact.get(i)));
         }
-        boolean bounded = high < CAP || low > -CAP;
+        boolean bounded = high < CodeFacts.CAP || low > -CodeFacts.CAP;
         return new CodeFacts(low, high, bounded, points, exact, worst);
     }
 
@@ -97,14 +86,14 @@ record CodeFacts(double low, double high, boolean bounded, List<Rational> points
     /** The farthest v from start in {@code direction} (up to the cap) at which every term is finite and the largest normal. */
     private static double edge(NumericForm form, double start, int direction) {
         double good = start;
-        for (double step = 1; step <= CAP; step *= 2) {
+        for (double step = 1; step <= CodeFacts.CAP; step *= 2) {
             double v = start + direction * step;
             if (!fits(form, v)) {
                 return bisect(form, good, v);
             }
             good = v;
         }
-        return start + direction * CAP;
+        return start + direction * CodeFacts.CAP;
     }
 
     private static double bisect(NumericForm form, double good, double bad) {

@@ -1,4 +1,4 @@
-package dev.rootform.export.code;
+package dev.rootform.export;
 
 /**
  * One real term of emitted code, with constants rounded once from their exact values:
@@ -7,7 +7,7 @@ package dev.rootform.export.code;
  *
  * @since 0.2
  */
-record Wave(double amplitude, int power, double growth, double frequency, double phase) {
+public record Wave(double amplitude, int power, double growth, double frequency, double phase) {
     /** The wave that stands for an empty sum. */
-    static final Wave ZERO = new Wave(0.0, 0, 0.0, 0.0, 0.0);
+    public static final Wave ZERO = new Wave(0.0, 0, 0.0, 0.0, 0.0);
 }

@@ -1,6 +1,5 @@
-package dev.rootform.export.code;
+package dev.rootform.export;
 
-import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Domain;
 import java.util.List;
 
@@ -17,37 +16,28 @@ import java.util.List;
  * @param waves the terms; never empty
  * @since 0.2
  */
-record NumericForm(Domain domain, double origin, long first, long validFrom, List<Double> leading, List<Wave> waves) {
-    NumericForm {
+public record NumericForm(Domain domain, double origin, long first, long validFrom, List<Double> leading, List<Wave> waves) {
+    public NumericForm {
         leading = List.copyOf(leading);
         waves = List.copyOf(waves);
     }
 
-    /** The emitted constants of a fitted closed form (no free constants, see {@link CodeRequests}). */
-    static NumericForm of(ClosedForm f) {
-        long first = f.domain() == Domain.DIFFERENCE ? f.origin().toBigInteger().longValueExact() : 0;
-        double origin = f.domain() == Domain.DIFFERENCE ? first : f.origin().toBigDecimal(new java.math.MathContext(25)).doubleValue();
-        return new NumericForm(f.domain(), origin, first, f.domain() == Domain.DIFFERENCE ? f.validFrom() : 0,
-                f.leadingValues().stream().map(q -> q.toBigDecimal(new java.math.MathContext(25)).doubleValue()).toList(),
-                WaveBuilder.of(f));
-    }
-
-    boolean differential() {
+    public boolean differential() {
         return domain == Domain.DIFFERENTIAL;
     }
 
     /** x[n] as the generated {@code value(long n)} computes it; n &ge; first. */
-    double valueAt(long n) {
+    public double valueAt(long n) {
         return n < validFrom ? leading.get((int) (n - first)) : sum(n);
     }
 
     /** y(t) as the generated {@code value(double t)} computes it. */
-    double valueAt(double t) {
+    public double valueAt(double t) {
         return sum(t - origin);
     }
 
-    /** Σ waves at v, in the order and with the operations of {@link WaveLoop}. */
-    double sum(double v) {
+    /** Σ waves at v, in the order and with the operations of the generated code's loop. */
+    public double sum(double v) {
         double total = 0.0;
         for (Wave w : waves) {
             double term = w.amplitude() * (differential() ? StrictMath.exp(w.growth() * v) : StrictMath.pow(w.growth(), v));
@@ -63,7 +53,7 @@ record NumericForm(Domain domain, double origin, long first, long validFrom, Lis
     }
 
     /** ln of the largest term magnitude at v (−∞ if every term vanishes there). */
-    double logMagnitude(double v) {
+    public double logMagnitude(double v) {
         double largest = Double.NEGATIVE_INFINITY;
         for (Wave w : waves) {
             if (w.amplitude() == 0.0) {
