@@ -39,7 +39,7 @@ final class CodeHeader {
                     + form.first() + " <= " + v + " <= " + String.format("%.0f", facts.high())
                     + (facts.high() >= CodeFacts.CAP ? " (searched to 1e15)" : "") + ".");
         }
-        out.add(String.format("Accuracy measured by rootform when it generated this code: max relative error %s against "
+        out.add(String.format("Accuracy measured by rootform when it generated this code: %s against "
                 + (r.analysis().constantValues().isEmpty() ? "the exact values" : "values from the closed form at 40 digits")
                 + " at %d points (%s), with StrictMath (a C math library may differ in the last bits; "
                 + "points where the exact value is 0 are left out).", statedError(facts), facts.points().size(),
@@ -48,10 +48,24 @@ final class CodeHeader {
         return CommentText.wrap(out);
     }
 
-    /** The measured error rounded up to 3 significant digits, as stated in the header. */
+    /**
+     * Half the spacing of doubles relative to their size, 2^-53: a relative error at most this is
+     * below what a double can resolve, and the value is stated as exact to a double's resolution.
+     */
+    static final double DOUBLE_RESOLUTION = 0x1p-53;
+
+    /**
+     * The measured error as stated in the header: "exact at every sampled point" when it is below a
+     * double's resolution (a reference value rounded to 30 or 40 digits differs from the nearest
+     * double by some 1e-17 or less even when the code is as exact as a double can be), else "max
+     * relative error" rounded up to 3 significant digits.
+     */
     static String statedError(CodeFacts facts) {
-        return new java.math.BigDecimal(facts.maxRelativeError()).round(new java.math.MathContext(3, java.math.RoundingMode.UP))
-                .stripTrailingZeros().toString();
+        if (facts.maxRelativeError() <= DOUBLE_RESOLUTION) {
+            return "exact at every sampled point to the resolution of a double (relative error at most 2^-53)";
+        }
+        return "max relative error " + new java.math.BigDecimal(facts.maxRelativeError())
+                .round(new java.math.MathContext(3, java.math.RoundingMode.UP)).stripTrailingZeros().toString();
     }
 
     /**

@@ -76,7 +76,8 @@ final class Lexer {
         }
         int single = SINGLE.indexOf(c);
         if (single < 0) {
-            throw new InputException("unexpected character '" + c + "'", source, position);
+            String shown = c >= 0x20 && c < 0x7f ? "'" + c + "'" : String.format("U+%04X", (int) c);
+            throw new InputException("unexpected character " + shown, source, position);
         }
         return Token.of(SINGLE_KINDS[single], String.valueOf(c), position);
     }
