@@ -13,7 +13,7 @@ import java.util.regex.Pattern;
 final class ConditionReader {
     /** A point written as a rational multiple of π. */
     private static final Pattern PI_POINT =
-            Pattern.compile("(-?)\\s*(\\d+(?:\\.\\d+)?)?\\s*\\*?\\s*pi\\s*(?:/\\s*(\\d+))?");
+            Pattern.compile("(-?)\\s*(\\d+(?:\\.\\d+)?)?\\s*[*\u00b7]?\\s*(?:pi|\u03c0)\\s*(?:/\\s*(\\d+))?");
 
     private final Shape shape;
     private final int order;

@@ -18,10 +18,13 @@ final class Lexer {
     private static final Pattern NUMBER = Pattern.compile("(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final Pattern LEIBNIZ = Pattern.compile(
             "d(?:\\^?(\\d+))?\\s*([A-Za-z]+)\\s*/\\s*d\\s*([A-Za-z]+)(?:\\^?(\\d+))?");
-    private static final String SINGLE = "+-*/^()[]!";
+    /** One-character tokens; the middle dot and the times sign, as rootform prints products, multiply too. */
+    private static final String SINGLE = "+-*/^()[]!\u00b7\u00d7";
     private static final Token.Kind[] SINGLE_KINDS = {Token.Kind.PLUS, Token.Kind.MINUS, Token.Kind.STAR,
         Token.Kind.SLASH, Token.Kind.CARET, Token.Kind.LPAREN, Token.Kind.RPAREN, Token.Kind.LBRACKET,
-        Token.Kind.RBRACKET, Token.Kind.BANG};
+        Token.Kind.RBRACKET, Token.Kind.BANG, Token.Kind.STAR, Token.Kind.STAR};
+    /** The letter π, as rootform prints it: read as the name pi. */
+    private static final char PI_LETTER = '\u03c0';
 
     private final String source;
     private final int end;
@@ -62,8 +65,11 @@ final class Lexer {
                 return leibniz(m);
             }
         }
+        if (c == PI_LETTER) {
+            return new Token(Token.Kind.NAME, Names.PI, position, position + 1, null, null);
+        }
         if (Character.isLetter(c)) {
-            return Token.of(Token.Kind.NAME, run(Character::isLetter), position);
+            return Token.of(Token.Kind.NAME, run(ch -> Character.isLetter(ch) && ch != PI_LETTER), position);
         }
         if (c == '\'') {
             return Token.of(Token.Kind.PRIMES, run(ch -> ch == '\''), position);
