@@ -8,6 +8,7 @@ import dev.rootform.export.Exporter;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
 import dev.rootform.export.code.Identifiers;
+import dev.rootform.export.document.NumericDocument;
 import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -84,9 +85,16 @@ final class OutputOptions {
 
     /**
      * Prints the answer of {@code result}, passed through {@code decorate}, to -o or standard output,
-     * or the one-line error of a result without one to standard error; returns the exit code.
+     * or the one-line error of a result without one to standard error; returns the exit code. A
+     * numeric answer (the exact path did not finish) is written as text or JSON, exit code 0 when its
+     * numerical checks held.
      */
     int print(Result result, UnaryOperator<Rendering> decorate, CommandSpec spec) throws IOException {
+        if (result instanceof Result.Numeric n) {
+            refuse(NumericDocument.refusal(format));
+            write(decorate.apply(Rendering.of(NumericDocument.render(format, n.solution()))), spec.commandLine().getOut());
+            return n.solution().verified() ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;
+        }
         Optional<Report> answer = result.answer();
         if (answer.isEmpty()) {
             PrintWriter err = spec.commandLine().getErr();

@@ -65,7 +65,7 @@ class GeneratedJavaTest {
         NumericForm form = r.code().orElseThrow().form();
         CodeFacts facts = r.code().orElseThrow().facts();
         String source = Files.readString(dir.resolve("gen/" + generated.getSimpleName() + ".java"));
-        Matcher m = STATED.matcher(source.replace("\n *  ", " "));
+        Matcher m = STATED.matcher(source.replace("\n * ", " ").replaceAll("\\s+", " "));
         assertTrue(m.find(), source);
         double stated = m.group(2) == null ? CodeHeader.DOUBLE_RESOLUTION : Double.parseDouble(m.group(2));
         assertTrue(stated < 1e-9, input + ": stated error " + stated);

@@ -150,73 +150,20 @@ final class BoundaryValues {
     }
 
     /**
-     * Gauss–Jordan elimination with partial pivoting; an entry below 10^-(working - 10) of its row's
-     * scale counts as zero. A singular system is explained: contradictory conditions, or a free
-     * solution Σ v_j·C_j-basis (the kernel vector, largest entry 1) that can be added.
+     * The solution of the system by {@link Elimination}; a singular system is explained:
+     * contradictory conditions, or a free solution Σ v_j·C_j-basis (the kernel vector, largest
+     * entry 1) that can be added.
      */
     private static List<Apfloat> eliminate(Apfloat[][] a, long working, Solution solution, List<String> names) {
-        int k = a.length;
-        Apfloat tiny = new Apfloat("1e-" + (working - 10), working);
-        Apfloat[] scales = new Apfloat[k];
-        for (int r = 0; r < k; r++) {
-            scales[r] = scale(a, r);
+        Elimination.Reduced r = Elimination.reduce(a, working);
+        if (r.singular()) {
+            throw BoundarySingularity.explain(r.a(), r.pivotRow(), r.rank(), r.tiny(), r.scales(), working, solution, names);
         }
-        int[] pivotRow = new int[k];
-        java.util.Arrays.fill(pivotRow, -1);
-        int rank = 0;
-        for (int c = 0; c < k; c++) {
-            int p = -1;
-            for (int r = rank; r < k; r++) {
-                if (ApfloatMath.abs(a[r][c]).compareTo(tiny.multiply(scales[r])) > 0
-                        && (p < 0 || ApfloatMath.abs(a[r][c]).compareTo(ApfloatMath.abs(a[p][c])) > 0)) {
-                    p = r;
-                }
-            }
-            if (p < 0) {
-                continue;
-            }
-            swap(a, scales, p, rank);
-            for (int r = 0; r < k; r++) {
-                if (r != rank) {
-                    Deadline.checkCurrent();
-                    Apfloat f = a[r][c].divide(a[rank][c]);
-                    for (int j = c; j <= k; j++) {
-                        a[r][j] = a[r][j].subtract(f.multiply(a[rank][j]));
-                    }
-                }
-            }
-            pivotRow[c] = rank++;
-        }
-        if (rank < k) {
-            throw BoundarySingularity.explain(a, pivotRow, rank, tiny, scales, working, solution, names);
-        }
-        Apfloat[] x = new Apfloat[k];
-        for (int c = 0; c < k; c++) {
-            x[c] = a[pivotRow[c]][k].divide(a[pivotRow[c]][c]);
-        }
-        return List.of(x);
+        return r.solution();
     }
 
-    private static void swap(Apfloat[][] a, Apfloat[] scales, int i, int j) {
-        Apfloat[] row = a[i];
-        a[i] = a[j];
-        a[j] = row;
-        Apfloat s = scales[i];
-        scales[i] = scales[j];
-        scales[j] = s;
-    }
-
-    /** Which of the two ways a singular system fails, and why, as one line. */
-    private static Apfloat scale(Apfloat[][] a, int row) {
-        Apfloat max = Apfloat.ONE;
-        for (int j = 0; j < a.length; j++) {
-            Apfloat v = ApfloatMath.abs(a[row][j]);
-            max = v.compareTo(max) > 0 ? v : max;
-        }
-        return max;
-    }
-
-    private static boolean agree(Map<String, Apfloat> x, Map<String, Apfloat> y, int digits) {
+    /** Whether every value of {@code y} agrees with the one of {@code x} of the same name to {@code digits}. */
+    static boolean agree(Map<String, Apfloat> x, Map<String, Apfloat> y, int digits) {
         for (Map.Entry<String, Apfloat> e : y.entrySet()) {
             Apfloat d = ApfloatMath.abs(x.get(e.getKey()).subtract(e.getValue()));
             Apfloat unit = new Apfloat("1e-" + digits, digits + WorkingPrecision.GUARD_DIGITS);
