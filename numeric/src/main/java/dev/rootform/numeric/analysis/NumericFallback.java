@@ -124,16 +124,51 @@ public final class NumericFallback {
         }
     }
 
+    /**
+     * One real basis function: Re (or, for {@code sine}, Im) of u^p·e^{λu} (differential; u = t -
+     * origin) or n^p·λ^n (recurrence). Values at integer n come from powers of λ, derivatives at the
+     * origin from d!/(d-p)!·λ^{d-p}; elsewhere a {@link ModeSum} evaluates them.
+     */
+    private record BasisFunction(Apcomplex root, int power, boolean sine, boolean sequence, Apfloat origin, ModeSum general) {
+        Apfloat at(int d, Apfloat t) {
+            long precision = root.precision();
+            Apcomplex z;
+            if (sequence) {
+                long n = t.longValue();
+                z = power(root, n).multiply(power(new Apfloat(n, precision), power));
+            } else if (t.compareTo(origin) == 0) {
+                z = d < power ? Apcomplex.ZERO : power(root, d - power).multiply(fallingFactorial(d, power, precision));
+            } else {
+                return general.derivative(d, t);
+            }
+            return sine ? z.imag() : z.real();
+        }
+
+        /** z^n, with z^0 = 1 also for z = 0. */
+        private static Apcomplex power(Apcomplex z, long n) {
+            return n == 0 ? new Apfloat(1, z.precision()) : ApcomplexMath.pow(z, n);
+        }
+
+        /** d·(d-1)···(d-p+1). */
+        private static Apfloat fallingFactorial(int d, int p, long precision) {
+            Apfloat f = new Apfloat(1, precision);
+            for (int i = 0; i < p; i++) {
+                f = f.multiply(new Apfloat(d - i, precision));
+            }
+            return f;
+        }
+    }
+
     /** The fitted solution at one working precision. */
     private static final class Fit {
         private final Problem problem;
         private final List<Root> roots;
-        private final List<ModeSum> basis;
+        private final List<BasisFunction> basis;
         private final List<Apfloat> constants;
         private final List<Apfloat> values;
         private final long precision;
 
-        private Fit(Problem problem, List<Root> roots, List<ModeSum> basis, List<Apfloat> constants, List<Apfloat> values,
+        private Fit(Problem problem, List<Root> roots, List<BasisFunction> basis, List<Apfloat> constants, List<Apfloat> values,
                 long precision) {
             this.problem = problem;
             this.roots = roots;
@@ -161,13 +196,13 @@ public final class NumericFallback {
             }
             Apcomplex one = new Apfloat(1, working);
             Apcomplex minusI = new Apcomplex(Apfloat.ZERO, new Apfloat(-1, working));
-            List<ModeSum> basis = new ArrayList<>();
+            Apfloat start = Decimals.toApfloat(origin, working);
+            List<BasisFunction> basis = new ArrayList<>();
             for (Root r : roots) {
-                Apcomplex rate = sequence ? ApcomplexMath.log(r.value()) : r.value();
                 for (int p = 0; p < r.multiplicity(); p++) {
-                    basis.add(ModeSum.of(origin, one, p, rate, working));
+                    basis.add(new BasisFunction(r.value(), p, false, sequence, start, ModeSum.of(origin, one, p, r.value(), working)));
                     if (r.pair()) {
-                        basis.add(ModeSum.of(origin, minusI, p, rate, working));
+                        basis.add(new BasisFunction(r.value(), p, true, sequence, start, ModeSum.of(origin, minusI, p, r.value(), working)));
                     }
                 }
             }
@@ -178,7 +213,7 @@ public final class NumericFallback {
                 Condition c = conditions.get(row);
                 Apfloat t = BoundaryValues.point(c, working);
                 for (int j = 0; j < k; j++) {
-                    a[row][j] = basis.get(j).derivative(c.derivative(), t);
+                    a[row][j] = basis.get(j).at(c.derivative(), t);
                 }
                 a[row][k] = Decimals.toApfloat(c.value(), working);
             }
@@ -197,7 +232,7 @@ public final class NumericFallback {
         Apfloat value(int d, Apfloat t) {
             Apfloat sum = Apfloat.ZERO;
             for (int j = 0; j < basis.size(); j++) {
-                sum = sum.add(constants.get(j).multiply(basis.get(j).derivative(d, t)));
+                sum = sum.add(constants.get(j).multiply(basis.get(j).at(d, t)));
             }
             return sum;
         }
