@@ -34,10 +34,16 @@ final class SolveJob {
     }
 
     static Result run(SolveRequest request) {
-        return TimeLimit.within(request.options().timeLimit(), () -> solve(request));
+        Duration limit = request.options().timeLimit();
+        return run(request, Duration.ofMillis(Math.max(1, (long) (limit.toMillis() * EXACT_SHARE))));
     }
 
-    private static Result solve(SolveRequest request) {
+    /** {@link #run(SolveRequest)} with the exact path's share of the time limit given (tests force the fallback with it). */
+    static Result run(SolveRequest request, Duration share) {
+        return TimeLimit.within(request.options().timeLimit(), () -> solve(request, share));
+    }
+
+    private static Result solve(SolveRequest request, Duration share) {
         Options options = request.options();
         try {
             List<Rational> points = Points.parse(options.points());
@@ -45,7 +51,6 @@ final class SolveJob {
             if (NumericFallback.refusal(problem, points).isPresent()) {
                 return exact(problem, points, options);
             }
-            Duration share = Duration.ofMillis(Math.max(1, (long) (options.timeLimit().toMillis() * EXACT_SHARE)));
             Optional<Result> exact = TimeLimit.within(share, () -> Optional.of(exact(problem, points, options)), Optional.empty());
             if (exact.isPresent()) {
                 return exact.get();

@@ -47,8 +47,6 @@ import java.util.concurrent.locks.ReentrantLock;
 public final class JasFactorizer {
     /** One JAS factorisation at a time (see the class comment). */
     private static final ReentrantLock JAS = new ReentrantLock();
-    /** How often a thread waiting for {@link #JAS} checks its deadline, in milliseconds. */
-    private static final long WAIT_STEP_MILLIS = 10;
 
     private JasFactorizer() {
     }
@@ -105,14 +103,7 @@ public final class JasFactorizer {
 
     /** Takes {@link #JAS}, checking the current deadline while another thread holds it. */
     private static void lock() {
-        try {
-            while (!JAS.tryLock(WAIT_STEP_MILLIS, TimeUnit.MILLISECONDS)) {
-                Deadline.checkCurrent();
-            }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new Cancelled("interrupted while waiting to factor");
-        }
+        JasStartup.waitFor(step -> JAS.tryLock(step, TimeUnit.MILLISECONDS), "waiting to factor");
     }
 
     /**

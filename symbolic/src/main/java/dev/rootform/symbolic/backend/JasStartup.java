@@ -47,13 +47,28 @@ final class JasStartup {
             thread.setDaemon(true);
             thread.start();
         }
+        waitFor(step -> DONE.await(step, TimeUnit.MILLISECONDS), "waiting for JAS to start");
+    }
+
+    /** One timed attempt to get something (a lock, a latch): true when it was got within {@code millis}. */
+    interface Attempt {
+        boolean tryFor(long millis) throws InterruptedException;
+    }
+
+    /**
+     * Repeats {@code attempt} in steps of {@link #WAIT_STEP_MILLIS} until it succeeds, checking the
+     * current deadline between steps.
+     *
+     * @throws Cancelled when the deadline passes or the thread is interrupted ({@code what} says while doing what)
+     */
+    static void waitFor(Attempt attempt, String what) {
         try {
-            while (!DONE.await(WAIT_STEP_MILLIS, TimeUnit.MILLISECONDS)) {
+            while (!attempt.tryFor(WAIT_STEP_MILLIS)) {
                 Deadline.checkCurrent();
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-            throw new Cancelled("interrupted while JAS was starting");
+            throw new Cancelled("interrupted while " + what);
         }
     }
 

@@ -5,6 +5,7 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm.Oscillation;
 import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.Limits;
+import java.math.BigInteger;
 import java.util.Optional;
 
 /**
@@ -223,15 +224,20 @@ final class Linearizer {
 
     /** True for a number with more than {@link Limits#MAX_NUMBER_DIGITS} digits above or below the line. */
     private static boolean huge(Rational r) {
-        return Math.max(r.numerator().bitLength(), r.denominator().bitLength()) * LOG10_2 > Limits.MAX_NUMBER_DIGITS;
+        return Math.max(log10(r.numerator()), log10(r.denominator())) >= Limits.MAX_NUMBER_DIGITS;
     }
 
-    private static final double LOG10_2 = Math.log10(2);
+    /** log10 |x| for x ≠ 0, of any size (0 for 0). */
+    private static double log10(BigInteger x) {
+        int shift = Math.max(0, x.abs().bitLength() - 60);
+        double leading = x.abs().shiftRight(shift).doubleValue();
+        return leading == 0 ? 0 : Math.log10(leading) + shift * Math.log10(2);
+    }
 
     /** c^n for a constant c, refused when the result would exceed {@link Limits#MAX_NUMBER_DIGITS} digits. */
     private Rational power(Rational c, int n, Node term) {
-        double digits = Math.max(c.numerator().bitLength(), c.denominator().bitLength()) * LOG10_2 * Math.abs((double) n);
-        if (digits > Limits.MAX_NUMBER_DIGITS + 1) {
+        double digits = Math.max(log10(c.numerator()), log10(c.denominator())) * Math.abs((double) n);
+        if (digits >= Limits.MAX_NUMBER_DIGITS) {
             throw tooLarge(term);
         }
         return c.pow(n);
