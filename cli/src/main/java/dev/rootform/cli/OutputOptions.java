@@ -89,7 +89,7 @@ final class OutputOptions {
      * numeric answer (the exact path did not finish) is written as text or JSON, exit code 0 when its
      * numerical checks held.
      */
-    int print(Result result, UnaryOperator<Rendering> decorate, CommandSpec spec) throws IOException {
+    int print(Result result, UnaryOperator<Rendering> decorate, CommandSpec spec) {
         if (result instanceof Result.Numeric n) {
             refuse(NumericDocument.refusal(format));
             write(decorate.apply(Rendering.of(NumericDocument.render(format, n.solution()))), spec.commandLine().getOut());
@@ -158,14 +158,20 @@ final class OutputOptions {
     /**
      * Writes the rendering: a C header to --header and the text to -o as one transaction (both or
      * neither), or the text to {@code out} once the files are written.
+     *
+     * @throws InputException when a file cannot be written (then none has changed)
      */
-    private void write(Rendering rendering, PrintWriter out) throws IOException {
+    private void write(Rendering rendering, PrintWriter out) {
         Map<OutputFiles.Target, String> texts = new LinkedHashMap<>();
         List<OutputFiles.Target> files = files();
         for (OutputFiles.Target file : files) {
             texts.put(file, lines(file.option().equals("--header") ? rendering.header().orElseThrow() : rendering.text()));
         }
-        OutputFiles.write(texts);
+        try {
+            OutputFiles.write(texts);
+        } catch (IOException e) {
+            throw new InputException("the answer could not be written, no file was changed: " + e, "", -1);
+        }
         if (output == null) {
             out.print(lines(rendering.text()));
             out.flush();
