@@ -24,8 +24,8 @@ import java.util.Optional;
  * Fujiwara bound 2·max_j |a_{k−j}/a_k|^{1/j} on the characteristic roots, and the forcing's rates
  * and frequencies), so a fast or stiff equation is compared over a few of its own time constants
  * instead of millions. An integration that still needs more than {@link #MAX_EVALUATIONS}
- * evaluations (a slow equation with a fast forcing) is not run, and the check says so: it never
- * counts as passed.
+ * evaluations or too small a step (points far beyond the time scale, such as other condition
+ * points of a boundary-value problem) is not run, and the check says so: it never counts as passed.
  */
 final class IntegratorCheck {
     /** Name of the check. */
@@ -83,8 +83,9 @@ final class IntegratorCheck {
         Optional<double[]> integrated = OdeReference.values(eq.coefficients(), ForcingFunction.of(eq.forcing()), t0, initial,
                 points, MAX_EVALUATIONS);
         if (integrated.isEmpty()) {
-            return Check.notRun(NAME, String.format("Dormand-Prince 8(5,3) %s would need more than %d evaluations "
-                    + "(the forcing is much faster than the equation); the exact checks above stand", route, MAX_EVALUATIONS));
+            return Check.notRun(NAME, String.format("Dormand-Prince 8(5,3) %s would need more than %d evaluations or steps "
+                    + "below the smallest allowed (the solution or its forcing is much faster than the span); the other checks "
+                    + "stand", route, MAX_EVALUATIONS));
         }
         double[] reference = integrated.get();
         double scale = 1;

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.exception.MaxCountExceededException;
+import org.apache.commons.math3.exception.NumberIsTooSmallException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 import org.apache.commons.math3.ode.sampling.StepHandler;
@@ -60,14 +61,25 @@ public final class OdeReference {
      */
     public static double[] values(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
             List<Rational> initialDerivatives, double[] points) {
-        return values(coefficients, forcing, t0, initialDerivatives, points, Integer.MAX_VALUE).orElseThrow();
+        return integrate(coefficients, forcing, t0, initialDerivatives, points, Integer.MAX_VALUE);
     }
 
     /**
      * As {@link #values(List, DoubleUnaryOperator, Rational, List, double[])}, but empty when an
-     * integration would need more than {@code maxEvaluations} evaluations of the right-hand side.
+     * integration cannot reach a point: it would need more than {@code maxEvaluations} evaluations
+     * of the right-hand side, or a step below the smallest allowed (a solution far faster than the
+     * span, such as ω = 10^31 over [0, π]).
      */
     public static Optional<double[]> values(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
+            List<Rational> initialDerivatives, double[] points, int maxEvaluations) {
+        try {
+            return Optional.of(integrate(coefficients, forcing, t0, initialDerivatives, points, maxEvaluations));
+        } catch (MaxCountExceededException | NumberIsTooSmallException e) {
+            return Optional.empty();
+        }
+    }
+
+    private static double[] integrate(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
             List<Rational> initialDerivatives, double[] points, int maxEvaluations) {
         int k = coefficients.size() - 1;
         if (k < 1 || coefficients.get(k).isZero()) {
@@ -101,14 +113,10 @@ public final class OdeReference {
             integrator.setMaxEvaluations(maxEvaluations);
             integrator.addStepHandler(new DeadlineCheck());
             double[] state = start.clone();
-            try {
-                integrator.integrate(system, begin, state, points[i], state);
-            } catch (MaxCountExceededException e) {
-                return Optional.empty();
-            }
+            integrator.integrate(system, begin, state, points[i], state);
             result[i] = state[0];
         }
-        return Optional.of(result);
+        return result;
     }
 
     /** Checks the current deadline at the start and after each accepted step. */
