@@ -23,7 +23,10 @@ import java.util.function.BiFunction;
  * {@code java}, {@code c}. Each exporter only formats a finished {@link Report}; all of them are
  * stateless and thread-safe. The code formats ({@code java}, {@code c}) cannot write every answer
  * (a general solution has free constants): {@link Exporter#refusal(Report)} says why, and
- * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report.
+ * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report. The C exporter
+ * writes the variant that {@link CodeNames#c()} names ({@code double} or {@code float}, with or
+ * without the math library); {@link Exporter#refusal(Report, CodeNames)} also says when that variant
+ * cannot evaluate the answer (C without libm for a closed form that needs cos or exp).
  *
  * <p>The sum of the first n odd numbers, solved and written as LaTeX:
  *
@@ -36,13 +39,15 @@ import java.util.function.BiFunction;
  * @since 0.2
  */
 public final class Exporters {
+    private static final BiFunction<Report, CodeNames, Optional<String>> ANY = (r, n) -> Optional.empty();
     private static final Map<String, Exporter> BY_NAME = index(List.of(
-            new Named("text", false, (r, n) -> Rendering.of(TextRenderer.render(r))),
-            new Named("json", false, (r, n) -> Rendering.of(JsonRenderer.render(r))),
-            new Named("latex", false, (r, n) -> Rendering.of(LatexRenderer.render(r))),
-            new Named("mathml", false, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
-            new Named("java", true, (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
-            new Named("c", true, Exporters::c)));
+            new Named("text", ANY, (r, n) -> Rendering.of(TextRenderer.render(r))),
+            new Named("json", ANY, (r, n) -> Rendering.of(JsonRenderer.render(r))),
+            new Named("latex", ANY, (r, n) -> Rendering.of(LatexRenderer.render(r))),
+            new Named("mathml", ANY, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
+            new Named("java", (r, n) -> CodeRequests.refusal(r),
+                    (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
+            new Named("c", (r, n) -> CRenderer.refusal(r, n.c()), Exporters::c)));
 
     private Exporters() {
     }
@@ -67,7 +72,7 @@ public final class Exporters {
     }
 
     private static Rendering c(Report report, CodeNames names) {
-        CSource c = CRenderer.render(report, names.function(), names.headerFile());
+        CSource c = CRenderer.render(report, names.function(), names.headerFile(), names.c());
         return new Rendering(c.source(), c.header());
     }
 
@@ -77,11 +82,17 @@ public final class Exporters {
         return java.util.Collections.unmodifiableMap(map);
     }
 
-    /** An exporter that delegates to a renderer; code formats need a fitted solution. */
-    private record Named(String format, boolean code, BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
+    /** An exporter that delegates to a renderer; code formats need a fitted solution with its code model. */
+    private record Named(String format, BiFunction<Report, CodeNames, Optional<String>> refusals,
+            BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
         @Override
         public Optional<String> refusal(Report report) {
-            return code ? CodeRequests.refusal(report) : Optional.empty();
+            return refusal(report, CodeNames.defaults());
+        }
+
+        @Override
+        public Optional<String> refusal(Report report, CodeNames names) {
+            return refusals.apply(report, names);
         }
 
         @Override

@@ -29,8 +29,9 @@ import java.util.Optional;
  *     choice; the solution is still computed and verified exactly)
  * @param variable the independent variable of a differential equation, when not the default
  *     {@code t} and not named in the equation
- * @param code also build the double-precision model that generated code evaluates, with its
- *     measured range and accuracy (needed by the {@code java} and {@code c} exporters; costs a
+ * @param code also build the floating-point model that generated code evaluates, with its
+ *     measured range and accuracy in each C variant (double, float; with and without libm) and the
+ *     exact 64-bit term of an integer recurrence (needed by the {@code java} and {@code c} exporters; costs a
  *     sample of high-precision values)
  * @since 0.2
  */

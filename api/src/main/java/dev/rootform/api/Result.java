@@ -34,8 +34,8 @@ import java.util.Optional;
  *
  * @since 0.2
  */
-public sealed interface Result permits Result.Solved, Result.General, Result.CheckFailed, Result.Contradictory,
-        Result.Underdetermined, Result.Refused, Result.OutOfTime, Result.Numeric {
+public sealed interface Result permits Result.Answered, Result.Contradictory, Result.Underdetermined, Result.Refused,
+        Result.OutOfTime, Result.Numeric {
 
     /**
      * The finished answer when there is one.
@@ -47,20 +47,30 @@ public sealed interface Result permits Result.Solved, Result.General, Result.Che
         return Optional.empty();
     }
 
+    /** An outcome that carries a finished answer: {@link Solved}, {@link General} or {@link CheckFailed}. */
+    sealed interface Answered extends Result permits Solved, General, CheckFailed {
+        /**
+         * The finished answer.
+         *
+         * @return the report
+         */
+        Report report();
+
+        @Override
+        default Optional<Report> answer() {
+            return Optional.of(report());
+        }
+    }
+
     /**
      * Solved with the conditions fitted, and every exact and numeric check held.
      *
      * @param report the verified answer
      */
-    record Solved(Report report) implements Result {
+    record Solved(Report report) implements Answered {
         /** @throws NullPointerException if the report is null */
         public Solved {
             Objects.requireNonNull(report, "report");
-        }
-
-        @Override
-        public Optional<Report> answer() {
-            return Optional.of(report);
         }
     }
 
@@ -69,15 +79,10 @@ public sealed interface Result permits Result.Solved, Result.General, Result.Che
      *
      * @param report the verified general solution
      */
-    record General(Report report) implements Result {
+    record General(Report report) implements Answered {
         /** @throws NullPointerException if the report is null */
         public General {
             Objects.requireNonNull(report, "report");
-        }
-
-        @Override
-        public Optional<Report> answer() {
-            return Optional.of(report);
         }
     }
 
@@ -87,16 +92,11 @@ public sealed interface Result permits Result.Solved, Result.General, Result.Che
      * @param report the answer with every check, passed or not
      * @param failed the names of the checks that failed
      */
-    record CheckFailed(Report report, List<String> failed) implements Result {
+    record CheckFailed(Report report, List<String> failed) implements Answered {
         /** @throws NullPointerException if the report, the list or a name is null */
         public CheckFailed {
             Objects.requireNonNull(report, "report");
             failed = List.copyOf(failed);
-        }
-
-        @Override
-        public Optional<Report> answer() {
-            return Optional.of(report);
         }
     }
 

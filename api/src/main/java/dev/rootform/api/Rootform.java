@@ -1,5 +1,7 @@
 package dev.rootform.api;
 
+import dev.rootform.numeric.analysis.ApfloatStartup;
+
 /**
  * The front door of rootform as a library: one {@link SolveRequest} in, one {@link Result} out.
  *
@@ -28,6 +30,11 @@ package dev.rootform.api;
  * @since 0.2
  */
 public final class Rootform {
+    static {
+        // before any call can run on two threads at once: apfloat's classes deadlock when first used concurrently
+        ApfloatStartup.initialize();
+    }
+
     private Rootform() {
     }
 

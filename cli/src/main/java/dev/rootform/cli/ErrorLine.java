@@ -1,7 +1,7 @@
 package dev.rootform.cli;
 
 import dev.rootform.api.Result;
-import dev.rootform.export.notation.Formulas;
+import dev.rootform.api.ResultText;
 import dev.rootform.symbolic.model.InputException;
 
 /** Formats problems for stderr: one line naming the problem, then the input with a caret under the place. */
@@ -17,17 +17,7 @@ final class ErrorLine {
         if (result instanceof Result.Refused r) {
             return describe(r.message(), r.source(), r.position());
         }
-        if (result instanceof Result.Contradictory c) {
-            return "rootform: " + c.explanation();
-        }
-        if (result instanceof Result.Underdetermined u) {
-            return "rootform: " + u.explanation() + u.freeSolution()
-                    .map(f -> "; adding any multiple of " + Formulas.plain(f) + " keeps every condition").orElse("");
-        }
-        if (result instanceof Result.OutOfTime t) {
-            return "rootform: gave up after " + t.limit().toSeconds() + " s (raise --time-limit to allow more)";
-        }
-        throw new AssertionError(result);
+        return "rootform: " + ResultText.explain(result);
     }
 
     static String describe(InputException e) {

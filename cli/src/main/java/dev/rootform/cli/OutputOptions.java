@@ -3,6 +3,8 @@ package dev.rootform.cli;
 import dev.rootform.api.Exporters;
 import dev.rootform.api.Options;
 import dev.rootform.api.Result;
+import dev.rootform.export.CType;
+import dev.rootform.export.CVariant;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Exporter;
 import dev.rootform.export.Rendering;
@@ -25,7 +27,8 @@ import picocli.CommandLine.Option;
 
 /**
  * The options of every command that prints a solve answer: digits, values, format, output file,
- * names for generated code and the time limit; checked before any work, so a bad option fails fast.
+ * names and C variant of generated code and the time limit; checked before any work, so a bad
+ * option fails fast.
  */
 final class OutputOptions {
     @Option(names = "--digits", paramLabel = "N", description = "Significant digits of numeric output (default ${DEFAULT-VALUE}).")
@@ -55,6 +58,14 @@ final class OutputOptions {
 
     @Option(names = "--header", paramLabel = "FILE", description = "Write the C header to FILE (the source, on stdout or -o, includes it).")
     Path header;
+
+    @Option(names = "--c-type", paramLabel = "TYPE",
+            description = "Floating type of generated C: double or float (single precision: powf, expf, cosf; default double).")
+    String cType;
+
+    @Option(names = "--c-no-libm", description = "Generated C without the math library: only + - * / (exact integer terms, "
+            + "powers by repeated squaring); refused when the formula needs exp or cos.")
+    boolean cNoLibm;
 
     @Option(names = "--time-limit", paramLabel = "SECONDS",
             description = "Give up after this many seconds (default ${DEFAULT-VALUE}); exit code 1.")
@@ -103,8 +114,9 @@ final class OutputOptions {
             return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
         }
         Exporter exporter = exporter();
-        refuse(exporter.refusal(answer.get()));
-        write(decorate.apply(exporter.render(answer.get(), codeNames())), spec.commandLine().getOut());
+        CodeNames names = codeNames();
+        refuse(exporter.refusal(answer.get(), names));
+        write(decorate.apply(exporter.render(answer.get(), names)), spec.commandLine().getOut());
         return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
     }
 
@@ -131,7 +143,7 @@ final class OutputOptions {
                 .code(format.equals("java") || format.equals("c")).build();
     }
 
-    /** @throws InputException for a bad class, package, function or header name */
+    /** @throws InputException for a bad class, package, function or header name, or a C option without --format c */
     private CodeNames codeNames() {
         refuse(Identifiers.javaClassRefusal(className));
         if (packageName != null) {
@@ -145,7 +157,17 @@ final class OutputOptions {
             refuse(Identifiers.cHeaderRefusal(header.getFileName().toString()));
         }
         return new CodeNames(Optional.ofNullable(packageName), className, function,
-                Optional.ofNullable(header).map(h -> h.getFileName().toString()));
+                Optional.ofNullable(header).map(h -> h.getFileName().toString()), cVariant());
+    }
+
+    /** @throws InputException for an unknown --c-type, or --c-type / --c-no-libm without --format c */
+    private CVariant cVariant() {
+        if ((cType != null || cNoLibm) && !format.equals("c")) {
+            throw new InputException((cType != null ? "--c-type" : "--c-no-libm") + " is for --format c", "", -1);
+        }
+        CType type = cType == null ? CType.DOUBLE : CType.byKeyword(cType).orElseThrow(() -> new InputException(
+                "--c-type " + cType + " is not one of double, float", "", -1));
+        return new CVariant(type, !cNoLibm);
     }
 
     /** @throws InputException with the refusal's message, when there is one */

@@ -5,9 +5,10 @@ import java.math.BigDecimal;
 import java.util.List;
 
 /**
- * What rootform measured about the double formula of generated code: the input range where every
- * term stays finite and the largest stays a normal double, and the largest relative error against
- * the exact values over a sample of points inside that range.
+ * What rootform measured about the floating-point formula of generated code in one C variant (the
+ * double one is also the Java code's): the input range where every term stays finite and the
+ * largest stays a normal number of the variant's type, and the largest relative error against the
+ * exact values over a sample of points inside that range.
  *
  * @param low smallest valid input (first index, or smallest t)
  * @param high largest valid input
@@ -20,7 +21,7 @@ import java.util.List;
  */
 public record CodeFacts(double low, double high, boolean bounded, List<Rational> points, List<BigDecimal> exact,
         double maxRelativeError) {
-    /** Farthest input examined when searching the valid range. */
+    /** Farthest input examined when searching the valid range in double ({@link CType#cap()}). */
     public static final double CAP = 1e15;
 
     public CodeFacts {

@@ -4,15 +4,17 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * Names used by generated code.
+ * Names used by generated code, and the variant of generated C.
  *
  * @param packageName the Java package, or empty for none
  * @param className the Java class
  * @param function the C function
  * @param headerFile the C header's file name when the declaration goes to its own file
+ * @param c the floating type of generated C and whether it may call the math library
  * @since 0.2
  */
-public record CodeNames(Optional<String> packageName, String className, String function, Optional<String> headerFile) {
+public record CodeNames(Optional<String> packageName, String className, String function, Optional<String> headerFile,
+        CVariant c) {
     /** Default Java class name. */
     public static final String DEFAULT_CLASS = "Solution";
     /** Default C function name. */
@@ -23,9 +25,15 @@ public record CodeNames(Optional<String> packageName, String className, String f
         Objects.requireNonNull(className, "className");
         Objects.requireNonNull(function, "function");
         Objects.requireNonNull(headerFile, "headerFile");
+        Objects.requireNonNull(c, "c");
     }
 
-    /** No package, class {@code Solution}, function {@code rootform_value}, no header file. */
+    /** Names for double-precision C with the math library ({@link CVariant#DEFAULT}). */
+    public CodeNames(Optional<String> packageName, String className, String function, Optional<String> headerFile) {
+        this(packageName, className, function, headerFile, CVariant.DEFAULT);
+    }
+
+    /** No package, class {@code Solution}, function {@code rootform_value}, no header file, default C. */
     public static CodeNames defaults() {
         return new CodeNames(Optional.empty(), DEFAULT_CLASS, DEFAULT_FUNCTION, Optional.empty());
     }

@@ -21,10 +21,21 @@ public interface Exporter {
     }
 
     /**
+     * Why {@code report} cannot be written in this format with these names and this C variant (e.g.
+     * C without the math library for a closed form that needs cos), or empty when it can. By default
+     * {@link #refusal(Report)}.
+     *
+     * @since 0.3
+     */
+    default Optional<String> refusal(Report report, CodeNames names) {
+        return refusal(report);
+    }
+
+    /**
      * The answer in this format.
      *
-     * @param names names for generated code; ignored by the document formats
-     * @throws IllegalArgumentException if {@link #refusal(Report)} is not empty
+     * @param names names for generated code and the C variant; ignored by the document formats
+     * @throws IllegalArgumentException if {@link #refusal(Report, CodeNames)} is not empty
      */
     Rendering render(Report report, CodeNames names);
 }

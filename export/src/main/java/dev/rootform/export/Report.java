@@ -21,8 +21,9 @@ import java.util.Optional;
  * @param digits significant digits of the numeric parts
  * @param numeric show constants and roots as decimals to {@code digits} instead of exact forms (a
  *     presentation choice; the solution stays exact)
- * @param code the double-precision model that generated code evaluates, with its measured range and
- *     accuracy; present when it was asked for with the answer (a fitted solution only)
+ * @param code the floating-point model that generated code evaluates, with its measured range and
+ *     accuracy per C variant and the exact 64-bit term of an integer recurrence; present when it was
+ *     asked for with the answer (a fitted solution only)
  * @since 0.1
  */
 public record Report(Solution solution, Analysis analysis, int digits, boolean numeric, Optional<CodeModel> code) {

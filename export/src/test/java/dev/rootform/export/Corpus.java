@@ -41,10 +41,15 @@ public final class Corpus {
     private Corpus() {
     }
 
+    /** Code reports already built, shared by the test classes of one run (reports are immutable). */
+    private static final java.util.Map<String, Report> CODE_REPORTS = new java.util.concurrent.ConcurrentHashMap<>();
+
     /** {@link #report} with its generated-code model, as the API builds it for the code formats. */
     public static Report codeReport(String input) {
-        Report r = report(input);
-        return r.withCode(dev.rootform.export.code.CodeModels.of(r));
+        return CODE_REPORTS.computeIfAbsent(input, i -> {
+            Report r = report(i);
+            return r.withCode(dev.rootform.export.code.CodeModels.of(r));
+        });
     }
 
     public static Report report(String input) {

@@ -9,7 +9,9 @@ import java.math.MathContext;
 
 /**
  * Builds the {@link CodeModel} of a fitted answer: the closed form with every constant rounded once
- * to double ({@link WaveBuilder}), its valid range and its measured accuracy ({@link CodeMeasurement}).
+ * to double ({@link WaveBuilder}), its valid range and its measured accuracy in each C variant
+ * ({@link CodeMeasurement}), and for an integer-valued recurrence the reach of its exact 64-bit term
+ * ({@link ExactTerms}).
  *
  * @since 0.2
  */
@@ -31,6 +33,7 @@ public final class CodeModels {
         NumericForm form = new NumericForm(f.domain(), sequence ? first : f.origin().toBigDecimal(ROUNDING).doubleValue(), first,
                 sequence ? f.validFrom() : 0, f.leadingValues().stream().map(q -> q.toBigDecimal(ROUNDING).doubleValue()).toList(),
                 WaveBuilder.of(f));
-        return new CodeModel(form, CodeMeasurement.measure(r.solution(), form));
+        return new CodeModel(form, CodeMeasurement.measure(r.solution(), form),
+                r.solution().exact().flatMap(IntegerRecurrence::of).flatMap(ExactTerms::of));
     }
 }

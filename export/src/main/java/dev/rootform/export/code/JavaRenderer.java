@@ -3,7 +3,6 @@ package dev.rootform.export.code;
 import dev.rootform.export.CodeFacts;
 import dev.rootform.export.NumericForm;
 import dev.rootform.export.Report;
-import dev.rootform.export.notation.CommentText;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigInteger;
 import java.util.List;
@@ -101,10 +100,9 @@ public final class JavaRenderer {
         NumericForm form = r.code().orElseThrow().form();
         CodeFacts facts = r.code().orElseThrow().facts();
         Optional<IntegerRecurrence> exact = s.exact().flatMap(IntegerRecurrence::of);
-        List<String> header = new java.util.ArrayList<>(CodeHeader.lines(r, form, facts));
-        exact.ifPresent(e -> header.addAll(CommentText.wrap(List.of("Exact terms: term(n) and termExact(n) by Fiduccia's "
-                + "method; the values are integers because the recurrence divided by its leading coefficient has integer "
-                + "coefficients and its first values are integers."))));
+        List<String> header = CodeHeader.lines(r, form, facts, exact.map(e -> List.of("Exact terms: term(n) and termExact(n) by "
+                + "Fiduccia's method; the values are integers because the recurrence divided by its leading coefficient has integer "
+                + "coefficients and its first values are integers.")).orElse(List.of()));
         StringBuilder out = new StringBuilder("/*\n");
         header.forEach(l -> out.append(" * ").append(l).append('\n'));
         out.append(" */\n");
@@ -113,10 +111,9 @@ public final class JavaRenderer {
         }
         out.append("\n/** The closed form evaluated in double precision; see the comment above for range and accuracy. */\n")
                 .append("public final class ").append(className).append(" {\n");
-        String[][] arrays = WaveLoop.arrays(form);
-        for (int i = 0; i < arrays.length; i++) {
-            out.append("    private static final ").append(i == 1 ? "int" : "double").append("[] ").append(WaveLoop.NAMES[i])
-                    .append(" = {").append(String.join(", ", arrays[i])).append("};\n");
+        for (WaveLoop.Array a : WaveLoop.arrays(form, WaveLoop.Dialect.JAVA)) {
+            out.append("    private static final ").append(a.integer() ? "int" : "double").append("[] ").append(a.name())
+                    .append(" = {").append(String.join(", ", a.values())).append("};\n");
         }
         if (form.differential()) {
             out.append("    private static final double ORIGIN = ").append(form.origin()).append(";\n");
@@ -139,7 +136,7 @@ public final class JavaRenderer {
                     .append("        if (n < VALID_FROM) {\n            return LEADING[(int) (n - FIRST)];\n        }\n")
                     .append("        double v = n;\n");
         }
-        out.append(WaveLoop.body(form, "StrictMath.", name -> name, "        ")).append("    }\n");
+        out.append(WaveLoop.body(form, WaveLoop.Dialect.JAVA, name -> name, "        ")).append("    }\n");
         exact.ifPresent(e -> out.append(EXACT_METHODS));
         return out.append("}\n").toString();
     }

@@ -13,7 +13,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -75,12 +74,7 @@ class GeneratedCTest {
         }
     }
 
-    /** Runs a command in the temp dir; its output, or an assertion failure with the output. */
     private String run(List<String> command) throws Exception {
-        Process p = new ProcessBuilder(command).directory(dir.toFile()).redirectErrorStream(true).start();
-        String out = new String(p.getInputStream().readAllBytes());
-        assertTrue(p.waitFor(60, TimeUnit.SECONDS), "timeout: " + command);
-        assertEquals(0, p.exitValue(), command + ": " + out);
-        return out;
+        return Processes.run(dir, command);
     }
 }
