@@ -12,6 +12,7 @@ import dev.rootform.export.document.JsonRenderer;
 import dev.rootform.export.document.LatexRenderer;
 import dev.rootform.export.document.MathMlRenderer;
 import dev.rootform.export.document.TextRenderer;
+import dev.rootform.export.html.HtmlRenderer;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -20,7 +21,9 @@ import java.util.function.BiFunction;
 
 /**
  * The exporters by format name: {@code text}, {@code json}, {@code latex}, {@code mathml},
- * {@code java}, {@code c}. Each exporter only formats a finished {@link Report}; all of them are
+ * {@code html}, {@code java}, {@code c}. The report page ({@code html}) draws plots from
+ * {@code Report.plots()}, present when the solve ran with {@code Options.plots}; how LaTeX and the
+ * page are laid out ({@code --standalone}, {@code --with-code}) is a {@link DocumentOptions}. Each exporter only formats a finished {@link Report}; all of them are
  * stateless and thread-safe. The code formats ({@code java}, {@code c}) cannot write every answer
  * (a general solution has free constants): {@link Exporter#refusal(Report)} says why, and
  * {@link Exporter#render} throws {@code IllegalArgumentException} for such a report. The C exporter
@@ -40,14 +43,7 @@ import java.util.function.BiFunction;
  */
 public final class Exporters {
     private static final BiFunction<Report, CodeNames, Optional<String>> ANY = (r, n) -> Optional.empty();
-    private static final Map<String, Exporter> BY_NAME = index(List.of(
-            new Named("text", ANY, (r, n) -> Rendering.of(TextRenderer.render(r))),
-            new Named("json", ANY, (r, n) -> Rendering.of(JsonRenderer.render(r))),
-            new Named("latex", ANY, (r, n) -> Rendering.of(LatexRenderer.render(r))),
-            new Named("mathml", ANY, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
-            new Named("java", (r, n) -> CodeRequests.refusal(r),
-                    (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
-            new Named("c", (r, n) -> CRenderer.refusal(r, n.c()), Exporters::c)));
+    private static final Map<String, Exporter> BY_NAME = table(DocumentOptions.defaults());
 
     private Exporters() {
     }
@@ -60,6 +56,17 @@ public final class Exporters {
      */
     public static Optional<Exporter> byName(String format) {
         return Optional.ofNullable(BY_NAME.get(format));
+    }
+
+    /**
+     * The exporter of one format, laid out as {@code options} say.
+     *
+     * @param format a name from {@link #names()}, e.g. {@code "latex"}
+     * @param options a standalone LaTeX document, the code on the report page
+     * @return the exporter, or empty for an unknown name
+     */
+    public static Optional<Exporter> byName(String format, DocumentOptions options) {
+        return Optional.ofNullable(table(options).get(format));
     }
 
     /**
@@ -76,13 +83,27 @@ public final class Exporters {
         return new Rendering(c.source(), c.header());
     }
 
+    private static Map<String, Exporter> table(DocumentOptions o) {
+        BiFunction<Report, CodeNames, Optional<String>> code = (r, n) -> CodeRequests.refusal(r);
+        BiFunction<Report, CodeNames, Optional<String>> c = (r, n) -> CRenderer.refusal(r, n.c());
+        return index(List.of(
+                new Named("text", ANY, (r, n) -> Rendering.of(TextRenderer.render(r))),
+                new Named("json", ANY, (r, n) -> Rendering.of(JsonRenderer.render(r))),
+                new Named("latex", ANY, (r, n) -> Rendering.of(o.standalone() ? LatexRenderer.document(r) : LatexRenderer.render(r))),
+                new Named("mathml", ANY, (r, n) -> Rendering.of(MathMlRenderer.render(r))),
+                new Named("html", o.withCode().map(language -> language.equals("c") ? c : code).orElse(ANY),
+                        (r, n) -> Rendering.of(HtmlRenderer.render(r, o.withCode(), n))),
+                new Named("java", code, (r, n) -> Rendering.of(JavaRenderer.render(r, n.packageName().orElse(null), n.className()))),
+                new Named("c", c, Exporters::c)));
+    }
+
     private static Map<String, Exporter> index(List<Exporter> exporters) {
         Map<String, Exporter> map = new LinkedHashMap<>();
         exporters.forEach(e -> map.put(e.format(), e));
         return java.util.Collections.unmodifiableMap(map);
     }
 
-    /** An exporter that delegates to a renderer; code formats need a fitted solution with its code model. */
+    /** An exporter that delegates to a renderer; code formats (and a page with code) need a fitted solution with its code model. */
     private record Named(String format, BiFunction<Report, CodeNames, Optional<String>> refusals,
             BiFunction<Report, CodeNames, Rendering> renderer) implements Exporter {
         @Override

@@ -33,10 +33,12 @@ import java.util.Optional;
  *     measured range and accuracy in each C variant (double, float; with and without libm) and the
  *     exact 64-bit term of an integer recurrence (needed by the {@code java} and {@code c} exporters; costs a
  *     sample of high-precision values)
+ * @param plots also compute the plot data of the report page ({@code Report.plots()}): samples of
+ *     the solution over its own time scales and of the frequency response
  * @since 0.2
  */
 public record Options(int digits, List<String> points, Duration timeLimit, boolean numeric, Optional<String> variable,
-        boolean code) {
+        boolean code, boolean plots) {
     /** Default significant digits. */
     public static final int DEFAULT_DIGITS = 30;
     /** Largest number of significant digits accepted ({@link Limits#MAX_DIGITS}). */
@@ -61,7 +63,8 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
     }
 
     /**
-     * The defaults: 30 digits, no points, 300 s, exact presentation, default variable, no code model.
+     * The defaults: 30 digits, no points, 300 s, exact presentation, default variable, no code model,
+     * no plot data.
      *
      * @return the default options
      */
@@ -85,7 +88,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
      */
     public Builder toBuilder() {
         return new Builder().digits(digits).points(points).timeLimit(timeLimit).numeric(numeric)
-                .variable(variable.orElse(null)).code(code);
+                .variable(variable.orElse(null)).code(code).plots(plots);
     }
 
     /** Collects options; {@link #build()} validates them. Not thread-safe; the built options are. */
@@ -96,6 +99,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         private boolean numeric;
         private String variable;
         private boolean code;
+        private boolean plots;
 
         private Builder() {
         }
@@ -170,12 +174,21 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         }
 
         /**
+         * @param plots also compute the plot data of the report page (for the {@code html} exporter)
+         * @return this builder
+         */
+        public Builder plots(boolean plots) {
+            this.plots = plots;
+            return this;
+        }
+
+        /**
          * @return the options collected so far
          * @throws IllegalArgumentException if digits is out of range or the time limit is not
          *     positive
          */
         public Options build() {
-            return new Options(digits, points, timeLimit, numeric, Optional.ofNullable(variable), code);
+            return new Options(digits, points, timeLimit, numeric, Optional.ofNullable(variable), code, plots);
         }
     }
 }

@@ -16,9 +16,10 @@ public final class ResultText {
 
     /**
      * Why there is no answer: the refusal with its column and input, the relation that makes the
-     * conditions contradictory, the solution they leave free, or the time limit that ran out.
+     * conditions contradictory, the solution they leave free, or the time limit that ran out; for
+     * an answer whose checks failed (which a claim check cannot use), the checks that failed.
      *
-     * @throws IllegalArgumentException if the result carries an answer ({@link Result#answer()})
+     * @throws IllegalArgumentException if the result is {@link Result.Solved} or {@link Result.General}
      */
     public static String explain(Result result) {
         if (result instanceof Result.Refused r) {
@@ -33,6 +34,9 @@ public final class ResultText {
         }
         if (result instanceof Result.Numeric n) {
             return "only a numeric answer: " + n.solution().reason();
+        }
+        if (result instanceof Result.CheckFailed f) {
+            return "the solver's own answer failed its checks (" + String.join(", ", f.failed()) + ")";
         }
         if (result instanceof Result.OutOfTime t) {
             String seconds = BigDecimal.valueOf(t.limit().toMillis(), 3).stripTrailingZeros().toPlainString();

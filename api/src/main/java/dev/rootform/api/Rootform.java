@@ -56,4 +56,27 @@ public final class Rootform {
     public static Recovery recover(RecoverRequest request) {
         return RecoverJob.run(request);
     }
+
+    /**
+     * Analyses a state-space model exactly: e^(At) or A^n entry by entry, the transfer matrix, the
+     * response to x0 and the input, stability and the Kalman ranks, all verified.
+     *
+     * @since 0.3
+     */
+    public static SystemResult system(SystemRequest request) {
+        return SystemJob.run(request);
+    }
+
+    /**
+     * Checks a claimed solution of a problem: exactly where the claim's numbers are exact, else
+     * numerically to {@link Options#digits()} digits; with the equation part, each condition,
+     * where claim and solution differ, named slips and the correct solution.
+     *
+     * @param request the problem, the claim and the options
+     * @return whether the claim holds, with the explanation, or why it was not checked
+     * @since 0.3
+     */
+    public static CheckResult check(CheckRequest request) {
+        return CheckJob.run(request);
+    }
 }

@@ -72,7 +72,7 @@ final class SolveJob {
         if (refusal.isPresent()) {
             return new Result.Refused(refusal.get(), "", -1);
         }
-        Analysis analysis = new Analyzer(options.digits()).analyze(solution, points);
+        Analysis analysis = new Analyzer(options.digits(), options.plots()).analyze(solution, points);
         Report report = new Report(solution, analysis, options.digits(), options.numeric());
         boolean code = options.code() && CodeRequests.fitted(report).isEmpty();
         return classify(code ? report.withCode(CodeModels.of(report)) : report);

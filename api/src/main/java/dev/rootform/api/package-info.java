@@ -4,6 +4,11 @@
  * {@link dev.rootform.api.SolveRequest} (the problem as text or as a model built in code, plus
  * {@link dev.rootform.api.Options}) and returns one {@link dev.rootform.api.Result};
  * {@link dev.rootform.api.Exporters} writes a finished answer as text, JSON, LaTeX, MathML, Java or C.
+ * {@link dev.rootform.api.Rootform#system} takes a state-space model as a
+ * {@link dev.rootform.api.SystemRequest} and returns one {@link dev.rootform.api.SystemResult}
+ * (e^(At) or A^n entry by entry, the transfer matrix, the response, stability and the Kalman ranks,
+ * each scalar part solved through the same exact solver); {@link dev.rootform.api.SystemExporters}
+ * writes it.
  *
  * <h2>Data flow</h2>
  * Each stage makes an immutable value from the one before it and never reaches back:

@@ -69,7 +69,7 @@ class RootformTest {
             String text = Exporters.byName(format).orElseThrow().render(s.report(), CodeNames.defaults()).text();
             assertTrue(!text.isBlank(), format);
         }
-        assertEquals(List.of("text", "json", "latex", "mathml", "java", "c"), Exporters.names());
+        assertEquals(List.of("text", "json", "latex", "mathml", "html", "java", "c"), Exporters.names());
         assertTrue(Exporters.byName("pdf").isEmpty());
     }
 

@@ -10,6 +10,8 @@ final class ExitCode {
     static final int BAD_INPUT = 2;
     /** Solved, but a check failed. */
     static final int CHECK_FAILED = 3;
+    /** check: the claim fails (the answer explains why). */
+    static final int CLAIM_FAILS = 4;
 
     private ExitCode() {
     }

@@ -1,5 +1,6 @@
 package dev.rootform.cli;
 
+import dev.rootform.api.DocumentOptions;
 import dev.rootform.api.Exporters;
 import dev.rootform.api.Options;
 import dev.rootform.api.Result;
@@ -58,6 +59,13 @@ final class OutputOptions {
 
     @Option(names = "--header", paramLabel = "FILE", description = "Write the C header to FILE (the source, on stdout or -o, includes it).")
     Path header;
+
+    @Option(names = "--standalone", description = "With --format latex: a complete document (article, 10 pt, A4) instead of a fragment.")
+    boolean standalone;
+
+    @Option(names = "--with-code", paramLabel = "LANG",
+            description = "With --format html: show the generated code (java or c) on the page.")
+    String withCode;
 
     @Option(names = "--c-type", paramLabel = "TYPE",
             description = "Floating type of generated C: double or float (single precision: powf, expf, cosf; default double).")
@@ -120,10 +128,34 @@ final class OutputOptions {
         return result instanceof Result.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
     }
 
-    /** @throws InputException for an unknown format */
+    /**
+     * Writes a rendering that the command made itself (an answer other than a solve report) to -o
+     * or standard output, and a C header to --header; returns {@code exitCode}.
+     */
+    int print(Rendering rendering, int exitCode, CommandSpec spec) throws IOException {
+        write(rendering, spec.commandLine().getOut());
+        return exitCode;
+    }
+
+    /** The checked names for generated code. @throws InputException for a bad name */
+    CodeNames names() {
+        return codeNames();
+    }
+
+    /** @throws InputException for an unknown format, or a layout option the format does not take */
     private Exporter exporter() {
-        return Exporters.byName(format).orElseThrow(() -> new InputException(
-                "--format " + format + " is not one of " + String.join(", ", Exporters.names()), "", -1));
+        if (standalone && !format.equals("latex")) {
+            throw new InputException("--standalone is for --format latex (an html page is always complete)", "", -1);
+        }
+        if (withCode != null && !format.equals("html")) {
+            throw new InputException("--with-code is for --format html", "", -1);
+        }
+        if (withCode != null && !DocumentOptions.CODE_LANGUAGES.contains(withCode)) {
+            throw new InputException("--with-code " + withCode + " is not one of " + String.join(", ", DocumentOptions.CODE_LANGUAGES),
+                    "", -1);
+        }
+        return Exporters.byName(format, new DocumentOptions(standalone, Optional.ofNullable(withCode))).orElseThrow(
+                () -> new InputException("--format " + format + " is not one of " + String.join(", ", Exporters.names()), "", -1));
     }
 
     /**
@@ -140,7 +172,7 @@ final class OutputOptions {
         }
         return Options.builder().digits(digits).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
                 .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable)
-                .code(format.equals("java") || format.equals("c")).build();
+                .code(format.equals("java") || format.equals("c") || withCode != null).plots(format.equals("html")).build();
     }
 
     /** @throws InputException for a bad class, package, function or header name, or a C option without --format c */

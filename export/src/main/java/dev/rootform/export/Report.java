@@ -4,6 +4,7 @@ import dev.rootform.numeric.analysis.Analysis;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.analysis.SteadyState;
 import dev.rootform.numeric.diagnostics.Diagnostics;
+import dev.rootform.numeric.plot.Plots;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Solution;
@@ -67,6 +68,11 @@ public record Report(Solution solution, Analysis analysis, int digits, boolean n
     /** Stability, modes, sensitivity; empty when not computed. */
     public Optional<Diagnostics> diagnostics() {
         return analysis.diagnostics();
+    }
+
+    /** The data of the report page's plots; empty unless it was asked for ({@code Options.plots}). */
+    public Optional<Plots> plots() {
+        return analysis.plots();
     }
 
     public List<String> warnings() {

@@ -11,6 +11,7 @@ final class Commands {
     static final String DEFAULT = "solve";
 
     private static final Map<String, Command> TABLE = new TreeMap<>(Map.of(
+            "check", CheckLine::prepare,
             "recover", RecoverLine::prepare,
             "solve", SolveLine::prepare));
 

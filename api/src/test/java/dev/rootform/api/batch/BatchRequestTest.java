@@ -55,7 +55,7 @@ class BatchRequestTest {
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digts": 3}    | unknown field "digts" for solve
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digits": "3"} | "digits" must be a whole number in 1..10000
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digits": 0}   | "digits" must be a whole number in 1..10000
-        {"id": "b", "command": "tally", "problem": "x[n+1] = x[n]"}      | unknown command "tally" (one of recover, solve)
+        {"id": "b", "command": "tally", "problem": "x[n+1] = x[n]"}      | unknown command "tally" (one of check, recover, solve)
         {"id": "b"}                                                       | the request has no "problem"
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "format": "pdf"} | "format" pdf is not one of
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "header": "a.h"}  | "header" is for format c

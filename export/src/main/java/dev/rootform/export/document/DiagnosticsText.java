@@ -21,7 +21,7 @@ import java.util.stream.Collectors;
  *
  * @since 0.2
  */
-final class DiagnosticsText {
+public final class DiagnosticsText {
     /** Significant digits of approximate mode quantities and of the condition number. */
     static final int SHORT_DIGITS = 7;
 
@@ -29,7 +29,7 @@ final class DiagnosticsText {
     }
 
     /** Lines: stability, dominant mode and growth, one per mode, conditioning. */
-    static List<String> lines(Diagnostics d, Report r) {
+    public static List<String> lines(Diagnostics d, Report r) {
         List<String> lines = new ArrayList<>();
         Stability s = d.stability();
         lines.add("stability: " + s.verdict().text() + s.root().map(x -> " (λ = " + root(x, r) + ": " + s.reason() + ")").orElse(""));

@@ -102,7 +102,8 @@ public final class JsonRenderer {
         }
     }
 
-    private static void solution(ObjectNode out, ClosedForm f, Report r) {
+    /** The solution object of the answer; also the {@code solution} of a claim check's JSON. */
+    static void solution(ObjectNode out, ClosedForm f, Report r) {
         out.put("text", EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f));
         out.put("latex", Formulas.latex(f));
         if (!f.particularTerms().isEmpty()) {

@@ -8,7 +8,6 @@ import dev.rootform.export.notation.Numbers;
 import dev.rootform.export.notation.RootText;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.analysis.SteadyState;
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.model.Condition;
@@ -31,9 +30,6 @@ import java.util.stream.Stream;
  * @since 0.1
  */
 public final class TextRenderer {
-    /** Exact values longer than this are shown as rounded decimals. */
-    private static final int EXACT_LIMIT = 60;
-
     private TextRenderer() {
     }
 
@@ -153,20 +149,7 @@ public final class TextRenderer {
 
     private static String value(ClosedForm f, PointValue v, int digits) {
         String at = EquationText.unknownAt(f, Numbers.point(v.at()));
-        return at + exactOrDecimal(v, digits);
-    }
-
-    /** {@code " = 55"} when the exact value is known and short, else {@code " ≈ 0.2231"}. */
-    private static String exactOrDecimal(PointValue v, int digits) {
-        String exact = v.exact().filter(TextRenderer::fitsShort).map(Rational::toString)
-                .or(() -> v.exactSurd().filter(q -> fitsShort(q.rational()) && fitsShort(q.coefficient())).map(Object::toString))
-                .orElse("");
-        return !exact.isEmpty() && exact.length() <= EXACT_LIMIT ? " = " + exact : " ≈ " + Numbers.decimal(v.value(), digits);
-    }
-
-    /** Whether the exact value may fit {@link #EXACT_LIMIT} characters, judged without writing it out. */
-    private static boolean fitsShort(Rational q) {
-        return (q.numerator().bitLength() + q.denominator().bitLength()) * Math.log10(2) <= EXACT_LIMIT + 2;
+        return at + ValueText.of(v, digits);
     }
 
     private static String pad(String s, int width) {

@@ -20,15 +20,19 @@ public final class CommentText {
     public static final String CAUTION = "A closed form describes the idealised linear model, not the machine. Where this code "
             + "feeds a structure, a vehicle, a medical device or any safety function, validate it against the physical "
             + "system and follow the applicable codes and licensed engineering practice.";
+    /** The caution every document (LaTeX, MathML, report page) carries: the same, worded for a formula. */
+    public static final String FORMULA_CAUTION = "A closed form describes the idealised linear model, not the machine. Where this "
+            + "formula feeds a structure, a vehicle, a medical device or any safety function, validate it against the physical "
+            + "system and follow the applicable codes and licensed engineering practice.";
     private static final int WIDTH = 96;
 
     private CommentText() {
     }
 
-    /** The whole comment of a document: the {@link #summary} and the caution, sanitised and wrapped. */
+    /** The whole comment of a document: the {@link #summary} and the formula caution, sanitised and wrapped. */
     public static List<String> lines(Solution s) {
         List<String> out = new ArrayList<>(summary(s));
-        out.add(CAUTION);
+        out.add(FORMULA_CAUTION);
         return wrap(out);
     }
 

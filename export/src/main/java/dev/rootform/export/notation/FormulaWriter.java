@@ -35,14 +35,24 @@ public final class FormulaWriter {
 
     private final Notation n;
     private final ClosedForm form;
+    private final boolean marked;
     /** The variable v as written: {@code t}, {@code n} or {@code (t - 3/2)}. */
     private final String v;
     /** v without its parentheses, for a function argument: {@code t - 3/2}. */
     private final String bare;
 
     public FormulaWriter(Notation notation, ClosedForm form) {
+        this(notation, form, false);
+    }
+
+    /**
+     * @param marked put {@link LineBreaker#MARK} before every + and − joiner of a sum, where a
+     *     {@link LineBreaker} may break the line
+     */
+    FormulaWriter(Notation notation, ClosedForm form, boolean marked) {
         this.n = notation;
         this.form = form;
+        this.marked = marked;
         Rational origin = form.origin();
         if (form.domain() == Domain.DIFFERENTIAL && !origin.isZero()) {
             bare = sum(List.of(new Signed(false, n.name(form.variable())), new Signed(origin.signum() > 0, number(origin.abs()))));
@@ -70,6 +80,16 @@ public final class FormulaWriter {
     /** A coefficient alone, e.g. {@code -1/2·√5} or {@code C1}. */
     String coefficient(Coefficient c) {
         return sum(product(c, List.of()).stream().toList());
+    }
+
+    /** A rational number with its sign: {@code -3/2}. */
+    public String signed(Rational q) {
+        return sum(List.of(new Signed(q.signum() < 0, number(q.abs()))));
+    }
+
+    /** q·x written as a multiple: {@code 3π/4}, {@code -π/2}, {@code 2t}. */
+    public String multiple(Rational q, String x) {
+        return scaled(q, x);
     }
 
     /** A polynomial in descending powers of {@code variable}. */
@@ -129,7 +149,7 @@ public final class FormulaWriter {
         if (negative) {
             parts.replaceAll(Signed::flipped);
         }
-        String group = sum(parts);
+        String group = (marked ? LineBreaker.MARK : "") + sum(parts);
         boolean bare = !negative && outer.stream().allMatch(String::isEmpty);
         return product(ONE, arrange(bare ? group : n.parens(group), outer, basisFirst))
                 .map(s -> new Signed(negative, s.body()));
@@ -254,7 +274,7 @@ public final class FormulaWriter {
         Signed first = pieces.get(0);
         StringBuilder sb = new StringBuilder(first.negative() ? n.negate(first.body()) : first.body());
         for (Signed p : pieces.subList(1, pieces.size())) {
-            sb.append(p.negative() ? n.minus() : n.plus()).append(p.body());
+            sb.append(marked ? LineBreaker.MARK : "").append(p.negative() ? n.minus() : n.plus()).append(p.body());
         }
         return sb.toString();
     }

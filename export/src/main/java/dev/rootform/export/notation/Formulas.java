@@ -21,4 +21,9 @@ public final class Formulas {
     public static String latex(ClosedForm f) {
         return new FormulaWriter(LatexNotation.INSTANCE, f).formula();
     }
+
+    /** The same formula as presentation-MathML content (no {@code <math>} element around it). */
+    public static String mathml(ClosedForm f) {
+        return new FormulaWriter(MathMlNotation.INSTANCE, f).formula();
+    }
 }

@@ -1,5 +1,7 @@
 package dev.rootform.export.notation;
 
+import java.util.Optional;
+
 /**
  * The atoms of one written notation for formulas. {@link FormulaWriter} decides the structure
  * (signs, order of factors, which parts are grouped); a notation only spells each atom. Every
@@ -63,5 +65,62 @@ public interface Notation {
     /** The negation -body of an already written operand. */
     default String negate(String body) {
         return "-" + body;
+    }
+
+    /** The unknown's derivative of the given order (0: the name itself): {@code y''}, {@code y^(4)}. */
+    default String derivative(String function, int order) {
+        return order <= 3 ? function + "'".repeat(order) : function + "^(" + order + ")";
+    }
+
+    /** A function applied to a point, without spacing: {@code y(0)}. */
+    default String applied(String function, String argument) {
+        return function + "(" + argument + ")";
+    }
+
+    /** A sequence at an index: {@code x[n+2]}. */
+    default String indexed(String sequence, String index) {
+        return sequence + "[" + index + "]";
+    }
+
+    /** The variable shifted by k, tight: {@code n+2}, {@code n-1}, or the variable for k = 0. */
+    default String shifted(String variable, int k) {
+        return k == 0 ? variable : variable + (k > 0 ? "+" : "-") + number(Integer.toString(Math.abs(k)));
+    }
+
+    /** left symbol right for a relation symbol such as {@code =}, {@code ≈} or {@code ≥}. */
+    default String relation(String left, String symbol, String right) {
+        return left + " " + symbol + " " + right;
+    }
+
+    /**
+     * Whether a line may break after {@code written} (a prefix of a formula in this notation),
+     * and how many groups are open there that {@link #closeGroups} must close; empty when the
+     * break would fall inside an unbreakable part (a fraction, a power, a subscript).
+     */
+    default Optional<Integer> openGroups(String written) {
+        return Optional.of(0);
+    }
+
+    /** Text that ends a line inside {@code count} open groups. */
+    default String closeGroups(int count) {
+        return "";
+    }
+
+    /** Text that starts the next line inside {@code count} groups again. */
+    default String reopenGroups(int count) {
+        return "";
+    }
+
+    /** Words inside a formula, e.g. {@code (30 digits)}. */
+    default String text(String words) {
+        return words;
+    }
+
+    /**
+     * A line of a formula broken inside parentheses, with fences that no longer pair up across
+     * lines made fixed-size where the notation needs it; as is by default.
+     */
+    default String unpairedFences(String line) {
+        return line;
     }
 }

@@ -1,6 +1,7 @@
 package dev.rootform.numeric.analysis;
 
 import dev.rootform.numeric.diagnostics.Diagnostics;
+import dev.rootform.numeric.plot.Plots;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.solve.Check;
 import java.math.BigDecimal;
@@ -18,7 +19,8 @@ import java.util.Optional;
  * @since 0.1
  */
 public record Analysis(List<RootApproximation> roots, List<PointValue> values, List<Check> checks,
-        Map<String, BigDecimal> constantValues, List<SteadyState> steadyStates, Optional<Diagnostics> diagnostics, List<String> warnings) {
+        Map<String, BigDecimal> constantValues, List<SteadyState> steadyStates, Optional<Diagnostics> diagnostics, List<String> warnings,
+        Optional<Plots> plots) {
     public Analysis {
         roots = List.copyOf(roots);
         values = List.copyOf(values);
@@ -27,5 +29,13 @@ public record Analysis(List<RootApproximation> roots, List<PointValue> values, L
         steadyStates = List.copyOf(steadyStates);
         Objects.requireNonNull(diagnostics, "diagnostics");
         warnings = List.copyOf(warnings);
+        Objects.requireNonNull(plots, "plots");
+    }
+
+    /** An analysis without plot data. */
+    public Analysis(List<RootApproximation> roots, List<PointValue> values, List<Check> checks,
+            Map<String, BigDecimal> constantValues, List<SteadyState> steadyStates, Optional<Diagnostics> diagnostics,
+            List<String> warnings) {
+        this(roots, values, checks, constantValues, steadyStates, diagnostics, warnings, Optional.empty());
     }
 }

@@ -4,6 +4,7 @@ import dev.rootform.numeric.diagnostics.Diagnoser;
 import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.diagnostics.SampleValue;
 import dev.rootform.numeric.diagnostics.Stability;
+import dev.rootform.numeric.plot.Plots;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
@@ -43,13 +44,23 @@ public final class Analyzer {
     static final int SAMPLE_DIGITS = 17;
 
     private final int digits;
+    private final boolean plots;
 
     /** @param digits significant digits of every numeric output, 1 or more */
     public Analyzer(int digits) {
+        this(digits, false);
+    }
+
+    /**
+     * @param digits significant digits of every numeric output, 1 or more
+     * @param plots also sample the solution and its frequency response for plots ({@link Analysis#plots()})
+     */
+    public Analyzer(int digits, boolean plots) {
         if (digits < 1) {
             throw new IllegalArgumentException("digits (" + digits + ") must be >= 1");
         }
         this.digits = digits;
+        this.plots = plots;
     }
 
     /**
@@ -71,8 +82,10 @@ public final class Analyzer {
         List<PointValue> values = new ArrayList<>();
         List<Check> checks = new ArrayList<>();
         Map<String, BigDecimal> constants = new LinkedHashMap<>();
+        Optional<BoundaryValues> fixed = Optional.empty();
         if (solution.hasNumericConstants()) {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
+            fixed = Optional.of(bvp);
             constants.putAll(bvp.constants(digits));
             points.forEach(p -> values.add(boundaryValue(bvp, p)));
             if (solution.numericParticular()) {
@@ -98,7 +111,10 @@ public final class Analyzer {
                 samples.stream().map(v -> new SampleValue(v.at(), v.value())).toList());
         List<SteadyState> steady = diagnostics.stability().verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE
                 ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
-        return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings());
+        Optional<Plots> sampled = plots
+                ? Optional.of(PlotSampler.sample(solution, diagnostics, fixed, values, !steady.isEmpty(), cache))
+                : Optional.empty();
+        return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings(), sampled);
     }
 
     /**

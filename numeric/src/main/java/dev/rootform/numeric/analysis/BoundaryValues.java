@@ -2,6 +2,7 @@ package dev.rootform.numeric.analysis;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -11,10 +12,13 @@ import dev.rootform.symbolic.solve.Solution;
 import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
+import java.util.function.DoubleUnaryOperator;
 import java.util.function.IntFunction;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
@@ -194,6 +198,32 @@ final class BoundaryValues {
             sum = sum.add(values.get(j).multiply(basis.get(first + j).derivative(d, t)));
         }
         return sum;
+    }
+
+    /**
+     * The solution in double precision, for plots: the whole of it, or only its particular
+     * (steady) part — the exact particular solution plus the numerically fixed constants of the
+     * closed form's particular terms (a trial form's P1..).
+     */
+    DoubleUnaryOperator inDoubles(boolean steadyOnly) {
+        Set<String> particularNames = new HashSet<>();
+        solution.closedForm().particularTerms().forEach(term -> term.coefficients().forEach(c -> {
+            if (c instanceof Coefficient.Free free) {
+                particularNames.add(free.name());
+            }
+        }));
+        List<DoubleUnaryOperator> parts = new ArrayList<>();
+        particular.ifPresent(p -> parts.add(p.inDoubles()));
+        List<String> names = List.copyOf(constants.keySet());
+        List<Apfloat> values = List.copyOf(constants.values());
+        for (int j = 0; j < values.size(); j++) {
+            if (!steadyOnly || particularNames.contains(names.get(j))) {
+                double c = values.get(j).doubleValue();
+                DoubleUnaryOperator f = basis.get(first + j).inDoubles();
+                parts.add(t -> c * f.applyAsDouble(t));
+            }
+        }
+        return t -> parts.stream().mapToDouble(f -> f.applyAsDouble(t)).sum();
     }
 
     /** Each condition re-evaluated with the solved constants at the working precision. */

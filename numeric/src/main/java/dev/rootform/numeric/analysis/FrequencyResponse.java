@@ -25,17 +25,8 @@ final class FrequencyResponse {
     static List<SteadyState> of(LinearEquation eq, int digits) {
         long precision = digits + WorkingPrecision.GUARD_DIGITS;
         List<SteadyState> result = new ArrayList<>();
-        for (ForcingTerm t : eq.forcing()) {
-            if (t.oscillation() == ForcingTerm.Oscillation.NONE || t.power() != 0 || !plainRate(eq.domain(), t)) {
-                continue;
-            }
-            Apfloat w = Decimals.toApfloat(t.frequency(), precision);
-            if (t.frequencyTimesPi()) {
-                w = w.multiply(ApfloatMath.pi(precision));
-            }
-            Apcomplex h = eq.domain() == Domain.DIFFERENTIAL
-                    ? inverse(characteristic(eq, new Apcomplex(Apfloat.ZERO, w), precision))
-                    : unitShift(w, -eq.shift(), precision).divide(characteristic(eq, unitShift(w, 1, precision), precision));
+        for (ForcingTerm t : sinusoids(eq)) {
+            Apcomplex h = response(eq, angularFrequency(t, precision), precision);
             Apfloat gain = ApcomplexMath.abs(h);
             Apfloat degrees = ApfloatMath.toDegrees(ApfloatMath.atan2(h.imag(), h.real()));
             result.add(new SteadyState(t, Decimals.toBigDecimal(gain, digits),
@@ -43,6 +34,28 @@ final class FrequencyResponse {
                     Decimals.toBigDecimal(degrees, digits)));
         }
         return result;
+    }
+
+    /** ω of a sinusoidal input term (rad per unit of t, or per sample). */
+    static Apfloat angularFrequency(ForcingTerm t, long precision) {
+        Apfloat w = Decimals.toApfloat(t.frequency(), precision);
+        return t.frequencyTimesPi() ? w.multiply(ApfloatMath.pi(precision)) : w;
+    }
+
+    /**
+     * The sinusoidal inputs that get a steady state: plain sinusoids, no polynomial or
+     * exponential factor.
+     */
+    static List<ForcingTerm> sinusoids(LinearEquation eq) {
+        return eq.forcing().stream().filter(t -> t.oscillation() != ForcingTerm.Oscillation.NONE && t.power() == 0
+                && plainRate(eq.domain(), t)).toList();
+    }
+
+    /** H at angular frequency w: 1/χ(iw) (differential) or e^{-iws}/χ(e^{iw}) (difference). */
+    static Apcomplex response(LinearEquation eq, Apfloat w, long precision) {
+        return eq.domain() == Domain.DIFFERENTIAL
+                ? inverse(characteristic(eq, new Apcomplex(Apfloat.ZERO, w), precision))
+                : unitShift(w, -eq.shift(), precision).divide(characteristic(eq, unitShift(w, 1, precision), precision));
     }
 
     /** No exponential factor: rate 0 (differential) or base 1 (difference). */

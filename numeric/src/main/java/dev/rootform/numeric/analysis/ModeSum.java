@@ -11,6 +11,7 @@ import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 
@@ -113,6 +114,39 @@ final class ModeSum {
             sum = sum.add(term);
         }
         return sum.real();
+    }
+
+    /**
+     * The value in double precision, for plots: the weights and rates rounded to double once,
+     * then Re Σ w·u^p·e^{zu} per point. Approximate: the error is about 1e-16 times the largest
+     * mode at t, far below what a picture resolves.
+     */
+    DoubleUnaryOperator inDoubles() {
+        int size = modes.size();
+        double[] wr = new double[size];
+        double[] wi = new double[size];
+        double[] zr = new double[size];
+        double[] zi = new double[size];
+        int[] p = new int[size];
+        for (int k = 0; k < size; k++) {
+            Mode m = modes.get(k);
+            wr[k] = m.weight().real().doubleValue();
+            wi[k] = m.weight().imag().doubleValue();
+            zr[k] = m.rate().real().doubleValue();
+            zi[k] = m.rate().imag().doubleValue();
+            p[k] = m.power();
+        }
+        double start = origin.doubleValue();
+        return t -> {
+            double u = t - start;
+            double sum = 0;
+            for (int k = 0; k < size; k++) {
+                double scale = Math.exp(zr[k] * u) * Math.pow(u, p[k]);
+                double angle = zi[k] * u;
+                sum += scale * (wr[k] * Math.cos(angle) - wi[k] * Math.sin(angle));
+            }
+            return sum;
+        };
     }
 
     /** The value at t and the largest magnitude of one mode there (to size cancellation). */

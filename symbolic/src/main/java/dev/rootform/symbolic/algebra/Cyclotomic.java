@@ -36,7 +36,7 @@ public final class Cyclotomic {
     }
 
     /** Euler's φ(n). */
-    static int totient(int n) {
+    public static int totient(int n) {
         int result = n;
         int m = n;
         for (int p = 2; p * p <= m; p++) {

@@ -1,9 +1,7 @@
 package dev.rootform.symbolic.parse;
 
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.Limits;
-import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Matcher;
@@ -15,7 +13,6 @@ import java.util.regex.Pattern;
  * {@code d^2y/dt^2} becomes a single token.
  */
 final class Lexer {
-    private static final Pattern NUMBER = Pattern.compile("(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final Pattern LEIBNIZ = Pattern.compile(
             "d(?:\\^?(\\d+))?\\s*([A-Za-z]+)\\s*/\\s*d\\s*([A-Za-z]+)(?:\\^?(\\d+))?");
     /** One-character tokens; the middle dot and the times sign, as rootform prints products, multiply too. */
@@ -88,37 +85,10 @@ final class Lexer {
         return Token.of(SINGLE_KINDS[single], String.valueOf(c), position);
     }
 
-    /**
-     * A number literal within {@link Limits#MAX_LITERAL_DIGITS} digits and an exponent within
-     * {@link Limits#MAX_DECIMAL_EXPONENT}; a literal run on by a second point or digits ({@code 1.5.2})
-     * is malformed, never two numbers.
-     */
+    /** A number literal, read and bounded by {@link NumberLiteral}. */
     private Token number() {
-        Matcher m = NUMBER.matcher(source).region(position, end);
-        if (!m.lookingAt()) {
-            throw new InputException("malformed number", source, position);
-        }
-        String text = m.group();
-        if (m.end() < end && (source.charAt(m.end()) == '.' || Character.isDigit(source.charAt(m.end())))) {
-            int stop = m.end();
-            while (stop < end && (source.charAt(stop) == '.' || Character.isDigit(source.charAt(stop)))) {
-                stop++;
-            }
-            throw new InputException("malformed number '" + shorten(source.substring(position, stop)) + "'", source, position);
-        }
-        long digits = m.group(1).chars().filter(Character::isDigit).count();
-        if (digits > Limits.MAX_LITERAL_DIGITS) {
-            throw new InputException("number with " + digits + " digits: at most " + Limits.MAX_LITERAL_DIGITS
-                    + " digits are accepted", source, position);
-        }
-        String exponent = m.group(2) == null ? "0" : m.group(2).substring(1).replace("+", "");
-        BigDecimal decimal = exponent.replace("-", "").length() > 9 ? null : new BigDecimal(text);
-        if (decimal == null || Math.abs(decimal.scale()) > Limits.MAX_DECIMAL_EXPONENT) {
-            throw new InputException("number " + shorten(text) + " is out of range: decimal exponents up to "
-                    + Limits.MAX_DECIMAL_EXPONENT + " are accepted", source, position);
-        }
-        Rational value = Rational.of(decimal);
-        return new Token(Token.Kind.NUMBER, text, position, m.end(), value, null);
+        NumberLiteral n = NumberLiteral.read(source, position, end, "number");
+        return new Token(Token.Kind.NUMBER, n.text(), position, n.end(), n.value(), null);
     }
 
     private Token leibniz(Matcher m) {

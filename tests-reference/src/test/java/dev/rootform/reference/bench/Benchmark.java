@@ -39,6 +39,7 @@ public final class Benchmark {
         RecoverBenchmark.run();
         cold(Path.of(args.length > 0 ? args[0] : "../rootform"));
         scaling();
+        CheckBenchmark.run();
         sideBySide();
     }
 
