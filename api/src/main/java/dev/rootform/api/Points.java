@@ -2,11 +2,16 @@ package dev.rootform.api;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /** Reads the points of {@link Options#points()}: exact numbers such as {@code 0}, {@code 1e3}, {@code 3/2}. */
 final class Points {
+    private static final Pattern EXPONENT = Pattern.compile("[eE][+-]?(\\d+)");
+
     private Points() {
     }
 
@@ -20,14 +25,38 @@ final class Points {
         int start = 0;
         for (String item : items) {
             String trimmed = item.trim();
+            int at = start + item.indexOf(trimmed.isEmpty() ? item : trimmed);
+            if (outOfRange(trimmed)) {
+                throw new InputException("point '" + shown(trimmed) + "' is out of range: at most " + Limits.MAX_LITERAL_DIGITS
+                        + " digits and decimal exponents up to " + Limits.MAX_DECIMAL_EXPONENT + " are accepted", joined, at);
+            }
             try {
                 points.add(Rational.parse(trimmed));
             } catch (NumberFormatException | ArithmeticException e) {
-                throw new InputException("point '" + trimmed + "' is not a number", joined,
-                        start + item.indexOf(trimmed.isEmpty() ? item : trimmed));
+                throw new InputException("point '" + shown(trimmed) + "' is not a number", joined, at);
             }
             start += item.length() + 1;
         }
         return points;
+    }
+
+    /** True for text too long to be a point, or with a decimal exponent beyond {@link Limits#MAX_DECIMAL_EXPONENT}. */
+    private static boolean outOfRange(String text) {
+        if (text.length() > 2 * Limits.MAX_LITERAL_DIGITS + 1) {
+            return true;
+        }
+        Matcher m = EXPONENT.matcher(text);
+        while (m.find()) {
+            String digits = m.group(1).replaceFirst("^0+(?=.)", "");
+            if (digits.length() > 9 || Integer.parseInt(digits) > Limits.MAX_DECIMAL_EXPONENT) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** The item as shown in a message, cut to 40 characters. */
+    private static String shown(String text) {
+        return text.length() <= 40 ? text : text.substring(0, 37) + "...";
     }
 }

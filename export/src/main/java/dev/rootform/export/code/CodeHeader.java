@@ -30,6 +30,9 @@ import java.util.stream.Collectors;
  * @since 0.2
  */
 final class CodeHeader {
+    /** 2^-53, the resolution of a double: half the spacing of doubles relative to their size. */
+    static final double DOUBLE_RESOLUTION = 0x1p-53;
+
     private CodeHeader() {
     }
 
@@ -86,19 +89,33 @@ final class CodeHeader {
                 + (form.series().isEmpty() ? "" : "|SERIES[d]*s^d| near t0, else ") + "|AMPLITUDE[i]*v^POWER[i]*"
                 + (form.differential() ? "exp(GROWTH[i]*v)" : "GROWTH[i]^v") + "|); the stated bound is "
                 + (int) CodeFacts.MARGIN + " x the worst measured, for inputs between the sample points.");
-        out.add(accuracy(form.differential() ? "For " + v + " >= t0" : "For every n", v, facts.forward()));
-        facts.backward().ifPresent(a -> out.add(accuracy("For " + v + " < t0", v, a)));
+        out.add(accuracy(form.differential() ? "For " + v + " >= t0" : "For every n", v, facts.forward(), type));
+        facts.backward().ifPresent(a -> out.add(accuracy("For " + v + " < t0", v, a, type)));
         return out;
     }
 
-    /** One side's measured errors and stated bound, ending in the bound |value - exact| <= max(R*|exact|, E*L). */
-    private static String accuracy(String side, String v, CodeFacts.Accuracy a) {
-        return side + " (" + a.points() + " points): worst relative error " + shortNumber(a.maxRelativeError()) + " (at " + v
-                + " = " + at(a.worstRelativeAt()) + "; where the value is at least 1/" + (int) CodeFacts.CANCELLATION + " of L), "
-                + "worst absolute error " + shortNumber(a.maxAbsoluteError()) + " (at " + v + " = " + at(a.worstAbsoluteAt())
-                + "), worst error in units of L " + shortNumber(a.maxTermError()) + " (at " + v + " = " + at(a.worstTermAt())
-                + "). Stated bound: |value - exact| <= max(" + statedBound(a.relativeBound()) + "*|exact|, "
-                + statedBound(a.termBound()) + "*L).";
+    /**
+     * One side's measured errors and stated bound, ending in the bound |value - exact| <=
+     * max(R*|exact|, E*L); errors below the resolution of the format (half its spacing relative to
+     * its size) are stated as "exact at every sampled point".
+     */
+    private static String accuracy(String side, String v, CodeFacts.Accuracy a, CType type) {
+        boolean exact = a.maxRelativeError() <= resolution(type) && a.maxTermError() <= resolution(type);
+        String errors = exact
+                ? "exact at every sampled point to the resolution of a " + type.keyword() + " (relative error at most 2^-"
+                        + (type == CType.FLOAT ? 24 : 53) + "; worst absolute error " + shortNumber(a.maxAbsoluteError()) + " at "
+                        + v + " = " + at(a.worstAbsoluteAt()) + ")"
+                : "worst relative error " + shortNumber(a.maxRelativeError()) + " (at " + v + " = " + at(a.worstRelativeAt())
+                        + "; where the value is at least 1/" + (int) CodeFacts.CANCELLATION + " of L), worst absolute error "
+                        + shortNumber(a.maxAbsoluteError()) + " (at " + v + " = " + at(a.worstAbsoluteAt()) + "), worst error in "
+                        + "units of L " + shortNumber(a.maxTermError()) + " (at " + v + " = " + at(a.worstTermAt()) + ")";
+        return side + " (" + a.points() + " points): " + errors + ". Stated bound: |value - exact| <= max("
+                + statedBound(a.relativeBound()) + "*|exact|, " + statedBound(a.termBound()) + "*L).";
+    }
+
+    /** Half the spacing of the format's numbers relative to their size: 2^-53 (double) or 2^-24 (float). */
+    static double resolution(CType type) {
+        return type == CType.FLOAT ? 0x1p-24 : DOUBLE_RESOLUTION;
     }
 
     /** A bound rounded up to 2 significant digits, as stated in the header ({@code 4.5E-16}, or {@code 0}). */

@@ -50,7 +50,8 @@ public final class TextRenderer {
                 .line("basis", BasisCoefficient.of(s.general()).stream().map(BasisCoefficient::basis)
                         .collect(Collectors.joining(", ")))
                 .section("solution", r.numeric() ? numericSolution(s.closedForm(), r) : solution(s.closedForm(), r))
-                .section("verification", verification(r));
+                .section("verification", verification(Stream.concat(r.solution().checks().stream(),
+                        r.numericChecks().stream()).toList(), r.verified()));
         r.diagnostics().ifPresent(d -> out.section("diagnostics", DiagnosticsText.lines(d, r)));
         if (!r.values().isEmpty()) {
             out.section("values", r.values().stream().map(v -> value(s.closedForm(), v, r.digits())).toList());
@@ -72,7 +73,7 @@ public final class TextRenderer {
                 + ", phase " + Numbers.decimal(st.phaseDegrees(), digits) + "°";
     }
 
-    private static String conditions(LinearEquation eq, List<Condition> conditions) {
+    static String conditions(LinearEquation eq, List<Condition> conditions) {
         return conditions.isEmpty() ? "none (general solution)"
                 : conditions.stream().map(c -> EquationText.condition(eq, c)).collect(Collectors.joining(", "));
     }
@@ -161,14 +162,16 @@ public final class TextRenderer {
         return lines;
     }
 
-    private static List<String> verification(Report r) {
-        List<Check> checks = Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).toList();
+    /** One line per check, then the verdict ({@code verified} as the caller's answer states it). */
+    static List<String> verification(List<Check> checks, boolean verified) {
         List<String> lines = new ArrayList<>();
         for (Check c : checks) {
-            lines.add(pad(c.passed() ? "[ok]" : "[FAILED]", 9) + c.name() + ": " + c.detail());
+            String label = c.passed() ? "[ok]" : c.ran() ? "[FAILED]" : "[not run]";
+            lines.add(pad(label, 9) + (label.length() >= 9 ? " " : "") + c.name() + ": " + c.detail());
         }
         List<String> failed = checks.stream().filter(c -> !c.passed()).map(Check::name).toList();
-        lines.add(failed.isEmpty() ? "verified" : "NOT verified: " + String.join(", ", failed));
+        lines.add(failed.isEmpty() ? "verified" : verified ? "verified by the checks that ran; not run: " + String.join(", ", failed)
+                : "NOT verified: " + String.join(", ", checks.stream().filter(Check::failed).map(Check::name).toList()));
         return lines;
     }
 

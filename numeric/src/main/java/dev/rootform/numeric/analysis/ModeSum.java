@@ -196,6 +196,11 @@ final class ModeSum {
         return new ModeSum(Rational.ZERO, List.of(m), m.weight().precision());
     }
 
+    /** The one mode w·u^p·e^{zu}, u = t - origin. */
+    static ModeSum of(Rational origin, Apcomplex weight, int power, Apcomplex rate, long precision) {
+        return new ModeSum(origin, List.of(new Mode(weight, power, rate)), precision);
+    }
+
     private static Apcomplex pow(Apcomplex z, int n) {
         return n == 0 ? new Apfloat(1, z.precision()) : org.apfloat.ApcomplexMath.pow(z, n);
     }

@@ -21,11 +21,16 @@ record TimeScales(List<Double> scales, double fastest) {
     }
 
     static TimeScales of(LinearEquation eq, List<RootApproximation> roots) {
+        return ofRoots(eq, roots.stream().map(r -> new double[] {r.re().doubleValue(), r.im().doubleValue()}).toList());
+    }
+
+    /** From the roots given as {re, im} pairs, and the forcing. */
+    static TimeScales ofRoots(LinearEquation eq, List<double[]> roots) {
         TreeSet<Double> scales = new TreeSet<>();
         double fastest = 0;
-        for (RootApproximation r : roots) {
-            double re = r.re().doubleValue();
-            double im = r.im().doubleValue();
+        for (double[] r : roots) {
+            double re = r[0];
+            double im = r[1];
             add(scales, re);
             add(scales, im);
             fastest = Math.max(fastest, Math.hypot(re, im));
@@ -51,8 +56,9 @@ record TimeScales(List<Double> scales, double fastest) {
     }
 
     private static void add(TreeSet<Double> scales, double rate) {
-        if (rate != 0 && Double.isFinite(1 / Math.abs(rate))) {
-            scales.add(1 / Math.abs(rate));
+        double scale = 1 / Math.abs(rate);
+        if (rate != 0 && Double.isFinite(rate) && Double.isFinite(scale) && scale > 0) {
+            scales.add(scale);
         }
     }
 }

@@ -2,6 +2,7 @@ package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import java.util.ArrayList;
@@ -39,6 +40,7 @@ public final class ProblemParser {
      */
     public static Problem parse(String text, List<String> given, String variable) {
         String source = text == null ? "" : text;
+        requireShort(source);
         List<int[]> segments = segments(source);
         if (segments.isEmpty()) {
             throw new InputException("empty input", source, 0);
@@ -56,11 +58,20 @@ public final class ProblemParser {
             conditions.add(reader.read(source, segment[0], segment[1]));
         }
         for (String condition : given == null ? List.<String>of() : given) {
+            requireShort(condition);
             for (int[] segment : segments(condition)) {
                 conditions.add(reader.read(condition, segment[0], segment[1]));
             }
         }
         return new Problem(equation, conditions);
+    }
+
+    /** @throws InputException for a text longer than {@link Limits#MAX_INPUT_LENGTH} characters */
+    private static void requireShort(String text) {
+        if (text.length() > Limits.MAX_INPUT_LENGTH) {
+            throw new InputException("input of " + text.length() + " characters: at most " + Limits.MAX_INPUT_LENGTH
+                    + " are accepted", text.substring(0, 60), -1);
+        }
     }
 
     /** The [begin, end) ranges between semicolons that contain more than white space. */

@@ -9,6 +9,8 @@ import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
+import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import dev.rootform.symbolic.work.Deadline;
@@ -26,6 +28,9 @@ import java.util.Optional;
  * @since 0.1
  */
 public final class Solver {
+    /** Highest order of χ times the forcing's annihilator: the equation's limit plus one forcing term's. */
+    static final int MAX_OPERATOR_ORDER = Limits.MAX_ORDER + 2 * (Limits.MAX_FORCING_DEGREE + 1);
+
     private Solver() {
     }
 
@@ -43,6 +48,11 @@ public final class Solver {
         List<Factor> factors = JasFactorizer.factor(chi);
         boolean trial = eq.domain() == Domain.DIFFERENTIAL && eq.forcing().stream().anyMatch(Solver::transcendentalFrequency);
         List<Factor> operatorFactors = merge(factors, eq.isHomogeneous() || trial ? List.of() : Annihilator.of(eq));
+        int order = operatorFactors.stream().mapToInt(f -> f.polynomial().degree() * f.multiplicity()).sum();
+        if (order > MAX_OPERATOR_ORDER) {
+            throw new InputException("the equation with its forcing has order " + order + " (the forcing adds "
+                    + (order - chi.degree()) + "): at most " + MAX_OPERATOR_ORDER + " is accepted", "", -1);
+        }
         int radicand = eq.domain() == Domain.DIFFERENCE && !eq.isHomogeneous() ? ForcingValues.radicand(eq) : 1;
         Operator mu = new Operator(product(chi.leadingCoefficient(), operatorFactors), operatorFactors, factors, radicand);
         if (trial) {
@@ -97,7 +107,7 @@ public final class Solver {
     /** The checks of the √r part, named as such. */
     private static List<Check> radicalChecks(ExactSolution radical, List<Condition> zero, int radicand) {
         return ExactVerifier.verify(radical, zero).stream()
-                .map(c -> new Check(c.name() + " (√" + radicand + " part)", c.passed(), c.detail())).toList();
+                .map(c -> new Check(c.name() + " (√" + radicand + " part)", c.passed(), c.detail(), c.ran())).toList();
     }
 
     /**
