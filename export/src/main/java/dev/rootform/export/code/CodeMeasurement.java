@@ -89,7 +89,7 @@ final class CodeMeasurement {
             all.addAll(samples.get(type));
         }
         List<Rational> points = List.copyOf(all);
-        List<PointValue> values = new Analyzer(EXACT_DIGITS).values(solution, points);
+        List<PointValue> values = new Analyzer(EXACT_DIGITS).referenceValues(solution, points);
         Map<Rational, BigDecimal> exact = new LinkedHashMap<>();
         for (int i = 0; i < points.size(); i++) {
             exact.put(points.get(i), values.get(i).value());

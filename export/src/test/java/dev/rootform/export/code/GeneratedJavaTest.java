@@ -96,7 +96,7 @@ class GeneratedJavaTest {
             List<StatedBound> bounds = StatedBound.of(Files.readString(dir.resolve("gen/Case" + c + ".java")));
             List<Rational> points = randomPoints(form, facts, random);
             List<java.math.BigDecimal> exact = new dev.rootform.numeric.analysis.Analyzer(CodeMeasurement.EXACT_DIGITS)
-                    .values(r.solution(), points).stream().map(dev.rootform.numeric.analysis.PointValue::value).toList();
+                    .referenceValues(r.solution(), points).stream().map(dev.rootform.numeric.analysis.PointValue::value).toList();
             Method value = CLASSES.get(c).getMethod("value", form.differential() ? double.class : long.class);
             for (int i = 0; i < points.size(); i++) {
                 Rational p = points.get(i);

@@ -130,6 +130,25 @@ public final class Analyzer {
         ValueRequests.refusal(solution, points).ifPresent(message -> {
             throw new IllegalArgumentException(message);
         });
+        return valuesOfAnySize(solution, points);
+    }
+
+    /**
+     * Like {@link #values}, for points of any size that rootform chose itself, such as the sample
+     * that measures generated code up to n = 10^15 (sequence values there come from certified
+     * evaluation of the modes, never from a huge exact fraction).
+     *
+     * @throws IllegalArgumentException if the points are refused for a reason other than their size
+     *     (a general solution, a non-integer index, an index below the first)
+     */
+    public List<PointValue> referenceValues(Solution solution, List<Rational> points) {
+        ValueRequests.refusalOfAnySize(solution, points).ifPresent(message -> {
+            throw new IllegalArgumentException(message);
+        });
+        return valuesOfAnySize(solution, points);
+    }
+
+    private List<PointValue> valuesOfAnySize(Solution solution, List<Rational> points) {
         RootCache cache = new RootCache();
         List<PointValue> values = new ArrayList<>();
         if (solution.hasNumericConstants()) {

@@ -40,6 +40,19 @@ public final class ValueRequests {
                         + " in size are accepted");
             }
         }
+        return refusalOfAnySize(solution, points);
+    }
+
+    /**
+     * {@link #refusal} without the size limit of requests: for points that rootform chose itself
+     * (the sample of generated code's accuracy, which reaches n = 10^15), whose values it computes by
+     * certified evaluation.
+     */
+    static Optional<String> refusalOfAnySize(Solution solution, List<Rational> points) {
+        if (!points.isEmpty() && solution.exact().isEmpty() && solution.radical().isEmpty()
+                && solution.problem().conditions().isEmpty()) {
+            return Optional.of("values need conditions: the general solution has free constants");
+        }
         Optional<Rational> first = firstIndex(solution);
         if (first.isPresent()) {
             for (Rational at : points) {
