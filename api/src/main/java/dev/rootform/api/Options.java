@@ -1,5 +1,6 @@
 package dev.rootform.api;
 
+import dev.rootform.symbolic.model.Limits;
 import java.time.Duration;
 import java.util.List;
 import java.util.Objects;
@@ -40,8 +41,8 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         boolean code, boolean plots) {
     /** Default significant digits. */
     public static final int DEFAULT_DIGITS = 30;
-    /** Largest number of significant digits accepted. */
-    public static final int MAX_DIGITS = 10_000;
+    /** Largest number of significant digits accepted ({@link Limits#MAX_DIGITS}). */
+    public static final int MAX_DIGITS = Limits.MAX_DIGITS;
     /** Default time limit. */
     public static final Duration DEFAULT_TIME_LIMIT = Duration.ofSeconds(300);
 

@@ -54,7 +54,7 @@ final class ResponseJob {
         try {
             TransferFunction h = TransferParser.parse(request.transfer());
             Input input = Input.parse(request.input(), h.domain());
-            List<Frequency> frequencies = Points.read(request.frequencies(), Frequency::parse);
+            List<Frequency> frequencies = Points.read(request.frequencies(), "frequency", Frequency::parse);
             List<Rational> points = Points.parse(o.points());
             points.stream().filter(p -> p.signum() < 0).findFirst().ifPresent(p -> {
                 throw new InputException("value at " + p + ": the response starts at " + (h.continuous() ? "t" : "n")

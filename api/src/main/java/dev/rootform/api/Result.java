@@ -1,6 +1,7 @@
 package dev.rootform.api;
 
 import dev.rootform.export.Report;
+import dev.rootform.numeric.analysis.NumericSolution;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import java.time.Duration;
 import java.util.List;
@@ -34,7 +35,7 @@ import java.util.Optional;
  * @since 0.2
  */
 public sealed interface Result permits Result.Answered, Result.Contradictory, Result.Underdetermined, Result.Refused,
-        Result.OutOfTime {
+        Result.OutOfTime, Result.Numeric {
 
     /**
      * The finished answer when there is one.
@@ -139,6 +140,21 @@ public sealed interface Result permits Result.Answered, Result.Contradictory, Re
         public Refused {
             Objects.requireNonNull(message, "message");
             Objects.requireNonNull(source, "source");
+        }
+    }
+
+    /**
+     * The exact path did not finish within its share of the time limit, and the answer was
+     * computed numerically instead: certified roots, constants and values to the requested digits,
+     * checked by iteration or integration; not exact, and labelled so. {@link #answer()} is empty
+     * (there is no exact report); the text and JSON documents render the solution.
+     *
+     * @param solution the numeric solution with its checks and the reason
+     */
+    record Numeric(NumericSolution solution) implements Result {
+        /** @throws NullPointerException if the solution is null */
+        public Numeric {
+            Objects.requireNonNull(solution, "solution");
         }
     }
 

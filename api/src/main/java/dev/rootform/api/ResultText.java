@@ -32,6 +32,9 @@ public final class ResultText {
             return u.explanation() + u.freeSolution()
                     .map(f -> "; adding any multiple of " + Formulas.plain(f) + " keeps every condition").orElse("");
         }
+        if (result instanceof Result.Numeric n) {
+            return "only a numeric answer: " + n.solution().reason();
+        }
         if (result instanceof Result.CheckFailed f) {
             return "the solver's own answer failed its checks (" + String.join(", ", f.failed()) + ")";
         }

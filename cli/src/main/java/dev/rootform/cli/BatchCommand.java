@@ -2,6 +2,7 @@ package dev.rootform.cli;
 
 import dev.rootform.api.batch.BatchAnswer;
 import dev.rootform.api.batch.BatchRequest;
+import dev.rootform.symbolic.model.InputException;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStreamReader;
@@ -11,6 +12,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -92,6 +94,14 @@ final class BatchCommand implements Callable<Integer> {
         }
         if (output != null && output.toAbsolutePath().normalize().equals(input.toAbsolutePath().normalize())) {
             return "OUT must not be IN";
+        }
+        if (output != null) {
+            try {
+                // the log is appended line by line, not replaced; the target is checked as every output file is
+                OutputFiles.check(List.of(new OutputFiles.Target("-o", output)));
+            } catch (InputException e) {
+                return e.getMessage();
+            }
         }
         return null;
     }

@@ -46,6 +46,11 @@ final class DemoCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** The command line that gives the same answer as the demo's call for {@code e}: same input, points and digits. */
+    static String command(Example e) {
+        return "rootform solve \"" + e.input() + "\" --values-at " + e.valuesAt() + " --digits " + DIGITS;
+    }
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
@@ -55,7 +60,7 @@ final class DemoCommand implements Callable<Integer> {
             Result result = Rootform.solve(SolveRequest.of(e.input()).with(options));
             Report report = result.answer().orElseThrow(() -> new IllegalStateException(e.input() + ": " + result));
             out.println("== " + e.title());
-            out.println("   rootform solve \"" + e.input() + "\" --values-at " + e.valuesAt());
+            out.println("   " + command(e));
             out.println();
             out.println(TextRenderer.render(report));
             allVerified &= result instanceof Result.Solved;

@@ -6,6 +6,9 @@ import dev.rootform.symbolic.model.InputException;
 
 /** Formats problems for stderr: one line naming the problem, then the input with a caret under the place. */
 final class ErrorLine {
+    /** Characters of a long input line shown on each side of the caret. */
+    private static final int WINDOW = 60;
+
     private ErrorLine() {
     }
 
@@ -35,9 +38,12 @@ final class ErrorLine {
             int column = at - from;
             boolean several = from > 0 || to >= 0;
             sb.append(several ? " (at line " + (source.substring(0, from).chars().filter(c -> c == '\n').count() + 1) + ", column "
-                    : " (at column ").append(column + 1).append(')').append(System.lineSeparator())
-                    .append("  ").append(line).append(System.lineSeparator())
-                    .append("  ").append(" ".repeat(column)).append('^');
+                    : " (at column ").append(column + 1).append(')').append(System.lineSeparator());
+            int left = Math.max(0, column - WINDOW);
+            int right = Math.min(line.length(), column + WINDOW);
+            String shown = (left > 0 ? "..." : "") + line.substring(left, right) + (right < line.length() ? "..." : "");
+            sb.append("  ").append(shown).append(System.lineSeparator())
+                    .append("  ").append(" ".repeat(column - left + (left > 0 ? 3 : 0))).append('^');
         }
         return sb.toString();
     }

@@ -11,15 +11,16 @@ import dev.rootform.export.Exporter;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
 import dev.rootform.export.code.Identifiers;
+import dev.rootform.export.document.NumericDocument;
 import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.function.UnaryOperator;
 import picocli.CommandLine.Model.CommandSpec;
@@ -79,20 +80,40 @@ final class OutputOptions {
     int timeLimit = 300;
 
     /**
-     * Checks the format and the code names before any work.
+     * Checks the output files, the format and the code names before any work.
      *
-     * @throws InputException for an unknown format or a bad name
+     * @throws InputException for an output file that cannot be written, an unknown format or a bad name
      */
     void check() {
+        OutputFiles.check(files());
         exporter();
         codeNames();
     }
 
+    /** The files to write: --header, then -o. */
+    private List<OutputFiles.Target> files() {
+        List<OutputFiles.Target> files = new ArrayList<>();
+        if (header != null) {
+            files.add(new OutputFiles.Target("--header", header));
+        }
+        if (output != null) {
+            files.add(new OutputFiles.Target("-o", output));
+        }
+        return files;
+    }
+
     /**
      * Prints the answer of {@code result}, passed through {@code decorate}, to -o or standard output,
-     * or the one-line error of a result without one to standard error; returns the exit code.
+     * or the one-line error of a result without one to standard error; returns the exit code. A
+     * numeric answer (the exact path did not finish) is written as text or JSON, exit code 0 when its
+     * numerical checks held.
      */
-    int print(Result result, UnaryOperator<Rendering> decorate, CommandSpec spec) throws IOException {
+    int print(Result result, UnaryOperator<Rendering> decorate, CommandSpec spec) {
+        if (result instanceof Result.Numeric n) {
+            refuse(NumericDocument.refusal(format));
+            write(decorate.apply(Rendering.of(NumericDocument.render(format, n.solution()))), spec.commandLine().getOut());
+            return n.solution().verified() ? ExitCode.VERIFIED : ExitCode.CHECK_FAILED;
+        }
         Optional<Report> answer = result.answer();
         if (answer.isEmpty()) {
             PrintWriter err = spec.commandLine().getErr();
@@ -188,29 +209,32 @@ final class OutputOptions {
         });
     }
 
-    /** Writes the rendering: its text to -o or {@code out}, a C header to --header. */
-    void write(Rendering rendering, PrintWriter out) throws IOException {
-        if (header != null) {
-            write(header, rendering.header().orElseThrow(), out);
+    /**
+     * Writes the rendering: a C header to --header and the text to -o as one transaction (both or
+     * neither), or the text to {@code out} once the files are written.
+     *
+     * @throws InputException when a file cannot be written (then none has changed)
+     */
+    void write(Rendering rendering, PrintWriter out) {
+        Map<OutputFiles.Target, String> texts = new LinkedHashMap<>();
+        List<OutputFiles.Target> files = files();
+        for (OutputFiles.Target file : files) {
+            texts.put(file, lines(file.option().equals("--header") ? rendering.header().orElseThrow() : rendering.text()));
         }
-        write(output, rendering.text(), out);
+        try {
+            OutputFiles.write(texts);
+        } catch (IOException e) {
+            throw new InputException("the answer could not be written, no file was changed: " + e, "", -1);
+        }
+        if (output == null) {
+            out.print(lines(rendering.text()));
+            out.flush();
+        }
     }
 
-    private static void write(Path output, String answer, PrintWriter out) throws IOException {
-        String text = answer.endsWith("\n") ? answer : answer + System.lineSeparator();
-        if (output == null) {
-            out.print(text);
-            out.flush();
-            return;
-        }
-        Path target = output.toAbsolutePath();
-        Path temp = Files.createTempFile(target.getParent(), ".rootform-", ".tmp");
-        try {
-            Files.writeString(temp, text, StandardCharsets.UTF_8);
-            Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+    /** The text ending with a line break. */
+    private static String lines(String answer) {
+        return answer.endsWith("\n") ? answer : answer + System.lineSeparator();
     }
 
     /** The format names, for the help text. */

@@ -6,7 +6,6 @@ import dev.rootform.api.ResponseResult;
 import dev.rootform.api.Rootform;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.symbolic.model.InputException;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -45,7 +44,7 @@ final class ResponseCommand implements Callable<Integer> {
     OutputOptions out;
 
     @Override
-    public Integer call() throws IOException {
+    public Integer call() {
         try {
             out.check();
             ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format).orElseThrow(() -> new InputException(

@@ -3,7 +3,6 @@ package dev.rootform.cli;
 import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
 import dev.rootform.symbolic.model.InputException;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
@@ -37,7 +36,7 @@ final class SolveCommand implements Callable<Integer> {
     OutputOptions out;
 
     @Override
-    public Integer call() throws IOException {
+    public Integer call() {
         try {
             out.check();
             return out.print(Rootform.solve(SolveRequest.of(input, given).with(out.options(variable))), UnaryOperator.identity(), spec);

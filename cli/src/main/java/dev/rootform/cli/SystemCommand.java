@@ -78,7 +78,8 @@ final class SystemCommand implements Callable<Integer> {
                 Result reason = ((SystemResult.NoAnswer) result).reason();
                 err.println(ErrorLine.describe(reason));
                 err.flush();
-                return reason instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+                // a scalar part answered only numerically (the exact path ran out of its time) ends like a time-out
+                return reason instanceof Result.OutOfTime || reason instanceof Result.Numeric ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
             }
             return out.print(SystemExporters.render(answer.get(), out.format, out.names()),
                     result instanceof SystemResult.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED, spec);

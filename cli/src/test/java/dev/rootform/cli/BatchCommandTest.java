@@ -112,10 +112,11 @@ class BatchCommandTest {
     }
 
     @Test
-    void anOutThatCannotBeWrittenExitsWithOne() throws Exception {
+    void anOutThatIsNotAFileIsRefusedBeforeAnyWork() throws Exception {
+        // a directory, device or FIFO as OUT is bad input (exit 2), checked as every command's output file is
         MainTest.Run r = MainTest.run("batch", input(DOUBLING).toString(), "-o", dir.toString());
-        assertEquals(1, r.code());
-        assertTrue(r.err().startsWith("rootform: batch stopped: "), r.err());
+        assertEquals(2, r.code());
+        assertTrue(r.err().startsWith("rootform: -o " + dir + " is a directory"), r.err());
     }
 
     @Test

@@ -17,7 +17,7 @@ class EmbeddedCOptionsTest {
     void floatCodeUsesSinglePrecisionAndStatesItsOwnAccuracy() {
         MainTest.Run r = run("solve", FIBONACCI, "--format", "c", "--function", "fib", "--c-type", "float");
         assertEquals(0, r.code(), r.err());
-        assertTrue(r.out().contains("float fib(long n);") && r.out().contains("powf(") && r.out().contains("Float evaluation"), r.out());
+        assertTrue(r.out().contains("float fib(long n);") && r.out().contains("powf(") && r.out().contains("Valid input range of this code in float"), r.out());
         assertTrue(r.out().contains("int fib_term(long n, uint64_t *out);"), r.out());
         assertFalse(r.out().contains("double"), r.out());
     }

@@ -67,12 +67,23 @@ class MainTest {
 
     @Test
     void jsonOfABoundaryValueProblemHasTheConstants() throws Exception {
-        // y'' + y = 0, y(0) = 1, y(π/2) = 2 → cos t + 2 sin t (common practice)
-        Run r = run("solve", "y'' + y = 0; y(0) = 1; y(pi/2) = 2", "--format", "json");
+        // y'' - y = 0, y(0) = 0, y(1) = 1 → sinh t / sinh 1 = (e^t - e^(-t))/(e - 1/e) (common practice)
+        Run r = run("solve", "y'' - y = 0; y(0) = 0; y(1) = 1", "--format", "json");
         assertEquals(0, r.code(), r.err());
         JsonNode constants = new ObjectMapper().readTree(r.out()).get("solution").get("constantValues");
-        assertEquals(1, constants.get("C1").asDouble(), 1e-25);
-        assertEquals(2, constants.get("C2").asDouble(), 1e-25);
+        double c = 1 / (Math.E - 1 / Math.E);
+        assertEquals(-c, constants.get("C1").asDouble(), 1e-15);
+        assertEquals(c, constants.get("C2").asDouble(), 1e-15);
+    }
+
+    @Test
+    void jsonOfABoundaryValueProblemWithExactEntriesHasExactConstants() throws Exception {
+        // y'' + y = 0, y(0) = 1, y(π/2) = 2 → cos t + 2 sin t (common practice): cos(π/2) = 0, sin(π/2) = 1
+        Run r = run("solve", "y'' + y = 0; y(0) = 1; y(pi/2) = 2", "--format", "json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode solution = new ObjectMapper().readTree(r.out()).get("solution");
+        assertEquals("y(t) = cos(t) + 2·sin(t)", solution.get("text").asText());
+        assertTrue(solution.get("constantValues") == null || solution.get("constantValues").isEmpty(), solution.toString());
     }
 
     @ParameterizedTest(name = "[{index}] {0}")

@@ -11,6 +11,7 @@ import dev.rootform.export.Exporter;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
 import dev.rootform.export.code.Identifiers;
+import dev.rootform.export.document.NumericDocument;
 import dev.rootform.symbolic.model.InputException;
 import java.io.UncheckedIOException;
 import java.time.Duration;
@@ -97,6 +98,9 @@ final class OutputFields {
          * @param decorate what the command puts around the rendered answer
          */
         Reply reply(Result result, UnaryOperator<Rendering> decorate) {
+            if (result instanceof Result.Numeric n) {
+                return numeric(n, decorate);
+            }
             Optional<Report> answer = result.answer();
             if (answer.isEmpty()) {
                 return new Reply.Failed(ResultText.explain(result), result instanceof Result.OutOfTime ? 1 : 2);
@@ -113,6 +117,20 @@ final class OutputFields {
             ObjectNode body = Json.object().put("format", exporter.format()).put("text", rendering.text());
             rendering.header().ifPresent(h -> body.put("header", h));
             return new Reply.Answered(body, exit);
+        }
+
+        /** A numeric answer (the exact path did not finish), as JSON or text; other formats need an exact answer. */
+        private Reply numeric(Result.Numeric n, UnaryOperator<Rendering> decorate) {
+            Optional<String> refusal = NumericDocument.refusal(exporter.format());
+            if (refusal.isPresent()) {
+                return new Reply.Failed(refusal.get(), 2);
+            }
+            int exit = n.solution().verified() ? 0 : 3;
+            Rendering rendering = decorate.apply(Rendering.of(NumericDocument.render(exporter.format(), n.solution())));
+            if (exporter.format().equals(JSON)) {
+                return new Reply.Answered(parse(rendering.text()), exit);
+            }
+            return new Reply.Answered(Json.object().put("format", exporter.format()).put("text", rendering.text()), exit);
         }
 
         private static ObjectNode parse(String json) {

@@ -100,8 +100,12 @@ public final class CRenderer {
         WaveLoop.Dialect dialect = WaveLoop.Dialect.c(variant, function + "_ipow");
         StringBuilder c = new StringBuilder();
         for (WaveLoop.Array a : WaveLoop.arrays(form, dialect)) {
-            c.append("static const ").append(a.integer() ? "int " : real + " ").append(array(function, a.name()))
-                    .append("[] = {").append(String.join(", ", a.values())).append("};\n");
+            c.append("static const ").append(a.kind() == WaveLoop.Kind.REAL ? real : a.kind().name().toLowerCase(Locale.ROOT))
+                    .append(' ').append(array(function, a.name())).append("[] = {").append(String.join(", ", a.values())).append("};\n");
+        }
+        if (!form.series().isEmpty()) {
+            c.append("static const ").append(real).append(' ').append(array(function, "SERIES_RADIUS")).append(" = ")
+                    .append(WaveLoop.seriesRadius(form, dialect)).append(";\n");
         }
         if (!form.leading().isEmpty()) {
             c.append("static const ").append(real).append(' ').append(array(function, "LEADING")).append("[] = {")

@@ -3,12 +3,14 @@ package dev.rootform.export.code;
 import dev.rootform.export.CType;
 import dev.rootform.export.CVariant;
 import dev.rootform.export.CodeFacts;
+import dev.rootform.export.CodeFacts.Limit;
 import dev.rootform.export.NumericForm;
+import dev.rootform.export.Wave;
 import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.Solution;
+import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -16,24 +18,40 @@ import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.TreeSet;
-import java.util.function.LongFunction;
 
 /**
  * Measures the floating-point formula of generated code ({@link CodeFacts}) in each C variant that
- * can evaluate it: per floating type, the input range where every term stays finite and the largest
- * a normal number of that type (searched up to {@link CType#cap()}), and per variant the largest
- * relative error against exact values (sequences) or 30-digit values (functions) over a sample of
- * points inside that range, the formula evaluated as that variant's code computes it
- * ({@link NumericForm#sum(double, CVariant)}).
+ * can evaluate it (the formula evaluated as that variant's code computes it,
+ * {@link NumericForm#sum(double, CVariant)}). The valid range, per floating type: from the start
+ * (t0, or the first index the formula holds for) outward until a term overflows, every term
+ * underflows, or the rounding of rates and angles would make phase or growth drift by more than
+ * {@link CodeFacts#driftLimit} (searched up to {@link CType#cap()}). The sample follows the
+ * problem's own time scales (the waves' 1/|σ| and 1/ω; for sequences 1/|ln ρ| and periods 2π/θ):
+ * dense near the start (halving steps down to 2^-44 of the shortest scale for functions, every index
+ * of the first {@link #FIRST_INDICES} for sequences), quarter steps over the shortest and the longest
+ * scale, then log-spaced ({@link #PER_DECADE} per decade) to both ends of the range, which are
+ * included. Reference values come from the analysis to {@link #EXACT_DIGITS} digits (exact
+ * sequence values, or certified evaluation at large n; function values raised until two working
+ * precisions agree); errors are those of the double values the code computes at exactly those
+ * inputs.
  */
 final class CodeMeasurement {
-    /** Significant digits of the reference values of functions. */
+    /** Significant digits of the reference values. */
     static final int EXACT_DIGITS = 30;
-    /** Offsets from the first index (sequences) or from t0 (functions) tried as sample points. */
-    private static final double[] OFFSETS = {0, 0.25, 0.5, 1, 2, 3, 5, 7, 10, 15, 20, 30, 50, 100, 200, 500, 1000, 2000};
+    /** Every index of a sequence from the first one up to this many. */
+    static final int FIRST_INDICES = 64;
+    /** Log-spaced sample points per decade out to the ends of the range. */
+    static final int PER_DECADE = 8;
+    /** Halving steps from the shortest time scale towards t0. */
+    private static final int HALVINGS = 44;
 
     private CodeMeasurement() {
+    }
+
+    /** One end of the valid range. */
+    private record Edge(double at, Limit limit) {
     }
 
     /**
@@ -54,70 +72,93 @@ final class CodeMeasurement {
 
     /**
      * Measures {@code form}, the emitted formula of {@code solution}'s closed form (a fitted solution,
-     * see {@link CodeRequests}), in every variant of {@link #variants}.
+     * see {@link CodeRequests}, with origin t0), in every variant of {@link #variants}.
      */
-    static Map<CVariant, CodeFacts> measure(Solution solution, NumericForm form) {
-        Map<CType, double[]> ranges = new EnumMap<>(CType.class);
+    static Map<CVariant, CodeFacts> measure(Solution solution, NumericForm form, Rational origin) {
+        double start = form.differential() ? 0 : form.validFrom();
+        List<Double> scales = timeScales(form);
+        Map<CType, Edge[]> ranges = new EnumMap<>(CType.class);
         Map<CType, List<Rational>> samples = new EnumMap<>(CType.class);
         TreeSet<Rational> all = new TreeSet<>();
         for (CType type : CType.values()) {
-            double start = form.differential() ? 0 : form.validFrom();
-            double high = form.differential() ? edge(form, start, 1, type) : Math.min(edge(form, start, 1, type), type.cap());
-            double low = form.differential() ? edge(form, start, -1, type) : form.first();
-            ranges.put(type, new double[] {low, high});
-            samples.put(type, sample(solution, form, start, low, high));
+            Edge high = edge(form, start, 1, type);
+            Edge low = form.differential() ? edge(form, start, -1, type) : new Edge(form.first(), Limit.FIRST_INDEX);
+            ranges.put(type, new Edge[] {low, high});
+            samples.put(type, form.differential() ? functionPoints(origin, low.at(), high.at(), scales)
+                    : sequencePoints(form, high.at(), scales));
             all.addAll(samples.get(type));
         }
-        Map<Rational, BigDecimal> exact = exactValues(solution, form, List.copyOf(all));
+        List<Rational> points = List.copyOf(all);
+        List<PointValue> values = new Analyzer(EXACT_DIGITS).referenceValues(solution, points);
+        Map<Rational, BigDecimal> exact = new LinkedHashMap<>();
+        for (int i = 0; i < points.size(); i++) {
+            exact.put(points.get(i), values.get(i).value());
+        }
         Map<CVariant, CodeFacts> out = new LinkedHashMap<>();
         for (CVariant variant : variants(form)) {
-            CType type = variant.type();
-            List<Rational> points = samples.get(type);
-            double worst = 0;
-            for (Rational p : points) {
-                worst = Math.max(worst, relativeError(evaluate(form, p, variant), exact.get(p)));
-            }
-            double low = ranges.get(type)[0];
-            double high = ranges.get(type)[1];
-            out.put(variant, new CodeFacts(low, high, high < type.cap() || low > -type.cap(), points,
-                    points.stream().map(exact::get).toList(), worst));
+            out.put(variant, facts(form, variant, ranges.get(variant.type()), scales, samples.get(variant.type()), exact));
         }
         return out;
     }
 
-    /** The sample points inside [low, high] (offsets from start, and every early index of a sequence). */
-    private static List<Rational> sample(Solution solution, NumericForm form, double start, double low, double high) {
-        Rational origin = solution.exact().map(ExactSolution::origin).orElse(Rational.ZERO);
-        TreeSet<Rational> sample = new TreeSet<>();
-        for (double d : OFFSETS) {
-            for (double sign : form.differential() ? new double[] {1, -1} : new double[] {1}) {
-                double v = start + sign * d;
-                if (v <= high && v >= low && (form.differential() || d == Math.rint(d))) {
-                    sample.add(Rational.of(BigDecimal.valueOf(v)).add(form.differential() ? origin : Rational.ZERO));
+    /** The facts of one variant over its type's range and sample, forward and backward of t0. */
+    private static CodeFacts facts(NumericForm form, CVariant variant, Edge[] range, List<Double> scales, List<Rational> points,
+            Map<Rational, BigDecimal> exactValues) {
+        List<BigDecimal> exact = points.stream().map(exactValues::get).toList();
+        List<Integer> forward = new ArrayList<>();
+        List<Integer> backward = new ArrayList<>();
+        Rational t0 = form.differential() ? Rational.of(new BigDecimal(form.origin())) : Rational.ZERO;
+        for (int i = 0; i < points.size(); i++) {
+            (form.differential() && points.get(i).compareTo(t0) < 0 ? backward : forward).add(i);
+        }
+        Optional<CodeFacts.Accuracy> back = backward.isEmpty() ? Optional.empty()
+                : Optional.of(accuracy(form, variant, points, exact, backward));
+        return new CodeFacts(range[0].at(), range[1].at(), range[0].limit(), range[1].limit(), scales, points, exact,
+                accuracy(form, variant, points, exact, forward), back);
+    }
+
+    /** The worst errors of the code over the points with the given indices. */
+    private static CodeFacts.Accuracy accuracy(NumericForm form, CVariant variant, List<Rational> points, List<BigDecimal> exact,
+            List<Integer> which) {
+        double[] worst = new double[3];
+        Rational first = points.get(which.get(0));
+        Rational[] where = {first, first, first};
+        for (int i : which) {
+            Deadline.checkCurrent();
+            Rational p = points.get(i);
+            double value = evaluate(form, p, variant);
+            BigDecimal difference = Double.isFinite(value) ? measurable(new BigDecimal(value).subtract(exact.get(i)).abs(), exact.get(i))
+                    : BigDecimal.valueOf(Double.MAX_VALUE);
+            double term = largestTerm(form, p);
+            double size = exact.get(i).abs().doubleValue();
+            double[] errors = {
+                size == 0 || size * CodeFacts.CANCELLATION < term ? 0
+                        : difference.divide(exact.get(i).abs(), MathContext.DECIMAL64).doubleValue(),
+                difference.doubleValue(),
+                term == 0 ? 0 : difference.doubleValue() / term,
+            };
+            for (int k = 0; k < 3; k++) {
+                if (errors[k] > worst[k]) {
+                    worst[k] = errors[k];
+                    where[k] = p;
                 }
             }
         }
-        for (long n = form.first(); !form.differential() && n < form.validFrom() + 30 && n <= high; n++) {
-            sample.add(Rational.of(n));
-        }
-        return List.copyOf(sample);
+        return new CodeFacts.Accuracy(which.size(), worst[0], where[0], worst[1], where[1], worst[2], where[2]);
     }
 
-    /** Exact values (sequences) or values to {@link #EXACT_DIGITS} digits (functions) at the points. */
-    private static Map<Rational, BigDecimal> exactValues(Solution solution, NumericForm form, List<Rational> points) {
-        MathContext mc = new MathContext(EXACT_DIGITS);
-        Map<Rational, BigDecimal> out = new LinkedHashMap<>();
-        if (form.differential()) {
-            List<PointValue> values = new Analyzer(EXACT_DIGITS).values(solution, points);
-            for (int i = 0; i < points.size(); i++) {
-                out.put(points.get(i), values.get(i).value());
-            }
-            return out;
-        }
-        LongFunction<BigDecimal> sequence = solution.radical().<LongFunction<BigDecimal>>map(r -> n -> r.valueAt(n).toBigDecimal(mc))
-                .orElse(n -> solution.exact().orElseThrow().valueAt(n).toBigDecimal(mc));
-        points.forEach(p -> out.put(p, sequence.apply(p.toBigInteger().longValueExact())));
-        return out;
+    /**
+     * The difference, or 0 when it is below the resolution of the reference value (its last digit):
+     * the double is then exact as far as can be told, and no bound is stated below that resolution.
+     */
+    static BigDecimal measurable(BigDecimal difference, BigDecimal reference) {
+        BigDecimal resolution = reference.abs().movePointLeft(EXACT_DIGITS - 1);
+        return difference.compareTo(resolution) <= 0 ? BigDecimal.ZERO : difference;
+    }
+
+    /** The largest term the code adds up at a sample point ({@link NumericForm#largestTerm}). */
+    static double largestTerm(NumericForm form, Rational point) {
+        return form.differential() ? form.largestTerm(point.doubleValue()) : form.largestTerm(point.toBigInteger().longValueExact());
     }
 
     /** The value of {@code form} at a sample point, as the generated code of {@code variant} computes it. */
@@ -126,49 +167,183 @@ final class CodeMeasurement {
                 : form.valueAt(point.toBigInteger().longValueExact(), variant);
     }
 
-    /** |value − exact|/|exact|; 0 when exact is 0 (such points are compared by the zero count instead). */
-    static double relativeError(double value, BigDecimal exact) {
-        if (exact.signum() == 0) {
-            return 0;
-        }
-        if (Double.isNaN(value) || Double.isInfinite(value)) {
-            return Double.POSITIVE_INFINITY;
-        }
-        BigDecimal difference = new BigDecimal(value).subtract(exact).abs();
-        return difference.divide(exact.abs(), MathContext.DECIMAL64).doubleValue();
+    /** The value of {@code form} at a sample point, as the Java code (and the default C) computes it. */
+    static double evaluate(NumericForm form, Rational point) {
+        return evaluate(form, point, CVariant.DEFAULT);
     }
 
-    /** The farthest v from start in {@code direction} (up to the type's cap) at which every term is finite and the largest normal. */
-    private static double edge(NumericForm form, double start, int direction, CType type) {
+    /**
+     * The time scales of the waves, ascending and distinct: 1/|growth| and 1/|frequency| (functions),
+     * 1/|ln|growth|| and 2π/frequency (sequences); {1} when every wave is constant.
+     */
+    static List<Double> timeScales(NumericForm form) {
+        TreeSet<Double> scales = new TreeSet<>();
+        for (Wave w : form.waves()) {
+            if (w.amplitude() == 0.0) {
+                continue;
+            }
+            double rate = form.differential() ? Math.abs(w.growth()) : Math.abs(Math.log(Math.abs(w.growth())));
+            if (rate > 0 && Double.isFinite(1 / rate)) {
+                addScale(scales, 1 / rate);
+            }
+            if (w.frequency() != 0.0) {
+                double angle = w.reduced() ? w.frequency() * w.multiplier() : Math.abs(w.frequency());
+                addScale(scales, form.differential() ? 1 / angle : 2 * Math.PI / angle);
+            }
+        }
+        return scales.isEmpty() ? List.of(1.0) : List.copyOf(scales);
+    }
+
+    /** Adds a scale unless one within 10^-9 of it is there already (the two modes of one decay, say). */
+    private static void addScale(TreeSet<Double> scales, double scale) {
+        if (scales.stream().noneMatch(s -> Math.abs(s - scale) <= 1e-9 * scale)) {
+            scales.add(scale);
+        }
+    }
+
+    /** t0 + v for v near 0, over the scales and log-spaced to both ends; each the exact value of the double t. */
+    private static List<Rational> functionPoints(Rational origin, double low, double high, List<Double> scales) {
+        double shortest = scales.get(0);
+        double longest = scales.get(scales.size() - 1);
+        TreeSet<Double> offsets = new TreeSet<>(List.of(0.0, low, high));
+        for (int k = 1; k <= HALVINGS; k++) {
+            offsets.add(Math.scalb(shortest, -k));
+        }
+        for (int j = 1; j <= 16; j++) {
+            offsets.add(shortest * j / 4);
+            offsets.add(longest * j / 4);
+        }
+        offsets.addAll(logSpaced(shortest, Math.max(Math.abs(low), high)));
+        TreeSet<Rational> points = new TreeSet<>();
+        double t0 = origin.doubleValue();
+        for (double v : offsets) {
+            for (double signed : new double[] {v, -v}) {
+                if (signed >= low && signed <= high) {
+                    double t = t0 + signed;
+                    points.add(Rational.of(new BigDecimal(t)));
+                }
+            }
+        }
+        return List.copyOf(points);
+    }
+
+    /** The first indices, quarter steps over the scales, and log-spaced indices to the end. */
+    private static List<Rational> sequencePoints(NumericForm form, double high, List<Double> scales) {
+        long first = form.first();
+        long start = form.validFrom();
+        long last = (long) high;
+        TreeSet<Long> indices = new TreeSet<>(List.of(last));
+        for (long n = first; n <= Math.min(last, start + FIRST_INDICES); n++) {
+            indices.add(n);
+        }
+        for (double s : List.of(scales.get(0), scales.get(scales.size() - 1))) {
+            for (int j = 1; j <= 16; j++) {
+                indices.add(start + Math.round(s * j / 4));
+            }
+        }
+        for (double d : logSpaced(FIRST_INDICES, last - start)) {
+            indices.add(start + Math.round(d));
+        }
+        List<Rational> points = new ArrayList<>();
+        indices.stream().filter(n -> n >= first && n <= last).forEach(n -> points.add(Rational.of(n)));
+        return points;
+    }
+
+    /** {@link #PER_DECADE} points per decade from {@code from} to {@code to} (both positive), and {@code to}. */
+    private static List<Double> logSpaced(double from, double to) {
+        List<Double> out = new ArrayList<>();
+        if (!(from > 0) || !(to > from)) {
+            return out;
+        }
+        double step = Math.pow(10, 1.0 / PER_DECADE);
+        for (double x = from; x < to; x *= step) {
+            out.add(x);
+        }
+        out.add(to);
+        return out;
+    }
+
+    /** The farthest v from start in {@code direction} (up to the type's cap) at which the form fits, and what ends it there. */
+    private static Edge edge(NumericForm form, double start, int direction, CType type) {
         double good = start;
         for (double step = 1; step <= type.cap(); step *= 2) {
             double v = start + direction * step;
-            if (!fits(form, v, type)) {
+            if (misfit(form, v, type) != null) {
                 return bisect(form, good, v, type);
             }
             good = v;
         }
-        return start + direction * type.cap();
+        double last = start + direction * type.cap();
+        return misfit(form, last, type) == null ? new Edge(last, Limit.CAP) : bisect(form, good, last, type);
     }
 
-    private static double bisect(NumericForm form, double good, double bad, CType type) {
+    private static Edge bisect(NumericForm form, double good, double bad, CType type) {
         while (Math.abs(bad - good) > (form.differential() ? Math.ulp(Math.abs(good)) * 4 + 1e-12 : 1)) {
             double mid = form.differential() ? (good + bad) / 2 : Math.floor((good + bad) / 2);
             if (mid == good || mid == bad) {
                 break;
             }
-            if (fits(form, mid, type)) {
+            if (misfit(form, mid, type) == null) {
                 good = mid;
             } else {
                 bad = mid;
             }
         }
-        return good;
+        return new Edge(good, misfit(form, bad, type));
     }
 
-    /** Whether the largest term at v lies below ln(max) − 1 and above ln(min normal) + 1 of the type (margins of a factor e). */
-    private static boolean fits(NumericForm form, double v, CType type) {
+    /**
+     * Why the form does not fit at v in {@code type} (a term or a growth factor overflows, every term
+     * underflows — margins of a factor e —, or it drifts), or null when it fits.
+     */
+    private static Limit misfit(NumericForm form, double v, CType type) {
         double m = form.logMagnitude(v);
-        return m < Math.log(type.max()) - 1 && m > Math.log(type.minNormal()) + 1;
+        double lnMax = Math.log(type.max()) - 1;
+        if (m >= lnMax || form.waves().stream().anyMatch(w -> growthExponent(form, w, v) >= lnMax)) {
+            return Limit.OVERFLOW;
+        }
+        if (m <= Math.log(type.minNormal()) + 1) {
+            return Limit.UNDERFLOW;
+        }
+        return drift(form, v, m, type) > CodeFacts.driftLimit(type) ? Limit.DRIFT : null;
+    }
+
+    /** ln of the growth factor alone, which the code computes before multiplying by the amplitude. */
+    private static double growthExponent(NumericForm form, Wave w, double v) {
+        return w.amplitude() == 0.0 ? Double.NEGATIVE_INFINITY
+                : form.differential() ? w.growth() * v : v * Math.log(Math.abs(w.growth()));
+    }
+
+    /** Relative rounding of one operation in {@code type}. */
+    private static double unit(CType type) {
+        return type == CType.FLOAT ? 0x1p-24 : 0x1p-53;
+    }
+
+    /** Relative rounding of x·v per unit of v: none when x is 0 or a power of two (the product is exact). */
+    private static double productRounding(double x, CType type) {
+        return x == 0.0 || Math.abs(x) == Math.scalb(1.0, Math.getExponent(x)) ? 0 : Math.abs(x) * unit(type);
+    }
+
+    /**
+     * The drift at v that the rounding of growth rates and angles to {@code type} causes, weighted by
+     * each wave's size relative to the largest term (ln of it: {@code largest}): |v|·(growth error +
+     * rounding of growth·v) for e^{growth·v}, |n|·growth error/|growth| for growth^n, and
+     * |v|·(frequency error + rounding of frequency·v + phase) for an angle that is not reduced exactly.
+     */
+    private static double drift(NumericForm form, double v, double largest, CType type) {
+        double total = 0;
+        for (Wave w : form.waves()) {
+            double size = Math.exp(form.logMagnitude(w, v) - largest);
+            if (size == 0) {
+                continue;
+            }
+            double growthError = w.growthError() + Math.abs(w.growth() - type.round(w.growth()));
+            double frequencyError = w.frequencyError() + Math.abs(w.frequency() - type.round(w.frequency()));
+            double growth = form.differential() ? growthError + productRounding(w.growth(), type) : growthError / Math.abs(w.growth());
+            double angle = w.reduced() || w.frequency() == 0.0 ? 0
+                    : frequencyError + (w.phase() == 0.0 ? productRounding(w.frequency(), type) : Math.abs(w.frequency()) * unit(type));
+            total += size * Math.abs(v) * (growth + angle);
+        }
+        return total;
     }
 }

@@ -112,8 +112,12 @@ public final class JavaRenderer {
         out.append("\n/** The closed form evaluated in double precision; see the comment above for range and accuracy. */\n")
                 .append("public final class ").append(className).append(" {\n");
         for (WaveLoop.Array a : WaveLoop.arrays(form, WaveLoop.Dialect.JAVA)) {
-            out.append("    private static final ").append(a.integer() ? "int" : "double").append("[] ").append(a.name())
-                    .append(" = {").append(String.join(", ", a.values())).append("};\n");
+            out.append("    private static final ").append(a.kind().name().toLowerCase(java.util.Locale.ROOT).replace("real", "double"))
+                    .append("[] ").append(a.name()).append(" = {").append(String.join(", ", a.values())).append("};\n");
+        }
+        if (!form.series().isEmpty()) {
+            out.append("    private static final double SERIES_RADIUS = ").append(WaveLoop.seriesRadius(form, WaveLoop.Dialect.JAVA))
+                    .append(";\n");
         }
         if (form.differential()) {
             out.append("    private static final double ORIGIN = ").append(form.origin()).append(";\n");

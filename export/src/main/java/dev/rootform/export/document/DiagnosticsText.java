@@ -35,7 +35,7 @@ public final class DiagnosticsText {
         lines.add("stability: " + s.verdict().text() + s.root().map(x -> " (λ = " + root(x, r) + ": " + s.reason() + ")").orElse(""));
         lines.add("dominant: " + d.growth().root().map(x -> "λ = " + root(x, r) + ", ").orElse("") + "growth " + d.growth().theta());
         for (Mode m : d.modes()) {
-            String quantities = m.quantities().stream().map(q -> q.symbol() + " = " + Numbers.decimal(new BigDecimal(q.value()), SHORT_DIGITS))
+            String quantities = m.quantities().stream().map(q -> q.symbol() + " = " + Numbers.decimal(q.value(), SHORT_DIGITS))
                     .collect(Collectors.joining(", "));
             lines.add("mode λ = " + root(m.root(), r) + (m.root().im().signum() > 0 ? " (and conjugate)" : "")
                     + (m.multiplicity() > 1 ? " ×" + m.multiplicity() : "") + (quantities.isEmpty() ? "" : ": " + quantities));

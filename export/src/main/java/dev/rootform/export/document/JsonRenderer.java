@@ -58,7 +58,8 @@ public final class JsonRenderer {
         ArrayNode constants = root.putArray("constants");
         BasisCoefficient.of(s.closedForm()).forEach(c -> constants.addObject()
                 .put("coefficient", r.numeric() ? c.decimal(r.digits()) : c.coefficient()).put("basis", c.basis()));
-        verification(root.putObject("verification"), r);
+        verification(root.putObject("verification"), r.verified(),
+                Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).toList());
         ObjectNode diagnostics = root.putObject("diagnostics");
         r.diagnostics().ifPresent(d -> DiagnosticsText.json(diagnostics, d, r));
         ArrayNode values = root.putArray("values");
@@ -72,11 +73,21 @@ public final class JsonRenderer {
                 .put("phaseDegrees", Numbers.decimal(st.phaseDegrees(), r.digits())));
         ArrayNode warnings = root.putArray("warnings");
         r.warnings().forEach(warnings::add);
+        return text(root);
+    }
+
+    /** The object as indented JSON text. */
+    static String text(ObjectNode root) {
         try {
             return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root);
         } catch (JsonProcessingException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /** A new empty JSON object. */
+    static ObjectNode object() {
+        return MAPPER.createObjectNode();
     }
 
     private static void roots(ArrayNode out, List<ExactRoot> roots, List<RootApproximation> approx, int digits) {
@@ -114,10 +125,11 @@ public final class JsonRenderer {
         }
     }
 
-    private static void verification(ObjectNode out, Report r) {
-        out.put("verified", r.verified());
+    /** The verdict and the checks. */
+    static void verification(ObjectNode out, boolean verified, List<Check> all) {
+        out.put("verified", verified);
         ArrayNode checks = out.putArray("checks");
-        Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).forEach((Check c) ->
-                checks.addObject().put("name", c.name()).put("passed", c.passed()).put("detail", c.detail()));
+        all.forEach((Check c) ->
+                checks.addObject().put("name", c.name()).put("passed", c.passed()).put("ran", c.ran()).put("detail", c.detail()));
     }
 }

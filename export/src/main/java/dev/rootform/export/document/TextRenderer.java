@@ -5,11 +5,15 @@ import dev.rootform.export.notation.BasisCoefficient;
 import dev.rootform.export.notation.EquationText;
 import dev.rootform.export.notation.Formulas;
 import dev.rootform.export.notation.Numbers;
+import dev.rootform.export.notation.NumericConstants;
 import dev.rootform.export.notation.RootText;
 import dev.rootform.numeric.analysis.PointValue;
+import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.analysis.SteadyState;
 import dev.rootform.symbolic.closedform.ClosedForm;
+import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.ExactRoot;
+import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -46,7 +50,8 @@ public final class TextRenderer {
                 .line("basis", BasisCoefficient.of(s.general()).stream().map(BasisCoefficient::basis)
                         .collect(Collectors.joining(", ")))
                 .section("solution", r.numeric() ? numericSolution(s.closedForm(), r) : solution(s.closedForm(), r))
-                .section("verification", verification(r));
+                .section("verification", verification(Stream.concat(r.solution().checks().stream(),
+                        r.numericChecks().stream()).toList(), r.verified()));
         r.diagnostics().ifPresent(d -> out.section("diagnostics", DiagnosticsText.lines(d, r)));
         if (!r.values().isEmpty()) {
             out.section("values", r.values().stream().map(v -> value(s.closedForm(), v, r.digits())).toList());
@@ -68,7 +73,7 @@ public final class TextRenderer {
                 + ", phase " + Numbers.decimal(st.phaseDegrees(), digits) + "°";
     }
 
-    private static String conditions(LinearEquation eq, List<Condition> conditions) {
+    static String conditions(LinearEquation eq, List<Condition> conditions) {
         return conditions.isEmpty() ? "none (general solution)"
                 : conditions.stream().map(c -> EquationText.condition(eq, c)).collect(Collectors.joining(", "));
     }
@@ -95,8 +100,9 @@ public final class TextRenderer {
         List<String> lines = new ArrayList<>();
         lines.add(EquationText.unknownAt(f, f.variable()) + " = " + Formulas.plain(f));
         if (!f.particularTerms().isEmpty()) {
-            lines.add("transient (homogeneous) part: " + Formulas.plain(f.withTerms(f.transientTerms())));
-            lines.add("steady (particular) part: " + Formulas.plain(f.withTerms(f.particularTerms())));
+            boolean settles = r.diagnostics().map(Diagnostics::settles).orElse(false);
+            lines.add((settles ? "transient (homogeneous)" : "homogeneous") + " part: " + Formulas.plain(f.withTerms(f.transientTerms())));
+            lines.add((settles ? "steady (particular)" : "particular") + " part: " + Formulas.plain(f.withTerms(f.particularTerms())));
         }
         if (f.domain() == Domain.DIFFERENCE) {
             lines.add("for " + f.variable() + " ≥ " + f.validFrom());
@@ -113,7 +119,7 @@ public final class TextRenderer {
         }
         Map<String, BigDecimal> values = r.analysis().constantValues();
         if (!values.isEmpty()) {
-            lines.add("constants fixed numerically (not exact rationals; solved to " + r.digits() + " digits):");
+            lines.add("constants fixed numerically (" + NumericConstants.REASON + "; solved to " + r.digits() + " digits):");
             values.forEach((name, value) -> lines.add("  " + name + " ≈ " + Numbers.decimal(value, r.digits())));
         }
         List<String> free = f.freeConstants().stream().filter(n -> !values.containsKey(n)).toList();
@@ -123,24 +129,49 @@ public final class TextRenderer {
         return lines;
     }
 
-    /** With --numeric: the solution as Σ decimal·basis, then the same range lines as the exact form. */
+    /**
+     * With --numeric: the solution as Σ ± decimal·basis, conjugate sums written mode by mode (real
+     * modes and cos/sin pairs in decimals), then the same range lines as the exact form.
+     */
     private static List<String> numericSolution(ClosedForm f, Report r) {
         int digits = r.digits();
         List<String> lines = new ArrayList<>(solution(f, r));
-        String sum = BasisCoefficient.of(f).stream().filter(c -> !c.value().isZero())
-                .map(c -> "(" + c.decimal(digits) + ")·" + c.basis()).collect(Collectors.joining(" + "));
-        lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.isEmpty() ? "0" : sum));
+        List<ModalText.Summand> summands = new ArrayList<>();
+        int sums = 0;
+        for (Term t : f.terms()) {
+            if (t instanceof Term.ConjugateSum && sums < r.analysis().conjugateSumModes().size()
+                    && t.coefficients().stream().allMatch(Coefficient.Exact.class::isInstance)) {
+                summands.addAll(ModalText.summands(f, r.analysis().conjugateSumModes().get(sums++), digits));
+                continue;
+            }
+            for (BasisCoefficient c : BasisCoefficient.of(f.withTerms(List.of(t)))) {
+                if (!c.value().isZero()) {
+                    String decimal = c.decimal(digits);
+                    boolean negative = decimal.startsWith("-");
+                    String size = negative ? decimal.substring(1) : decimal;
+                    summands.add(new ModalText.Summand(negative,
+                            c.basis().equals("1") ? size : size.equals("1") ? c.basis() : size + "·" + c.basis()));
+                }
+            }
+        }
+        StringBuilder sum = new StringBuilder();
+        for (ModalText.Summand s : summands) {
+            sum.append(sum.length() == 0 ? (s.negative() ? "-" : "") : s.negative() ? " - " : " + ").append(s.text());
+        }
+        lines.set(0, EquationText.unknownAt(f, f.variable()) + " ≈ " + (sum.length() == 0 ? "0" : sum));
         return lines;
     }
 
-    private static List<String> verification(Report r) {
-        List<Check> checks = Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).toList();
+    /** One line per check, then the verdict ({@code verified} as the caller's answer states it). */
+    static List<String> verification(List<Check> checks, boolean verified) {
         List<String> lines = new ArrayList<>();
         for (Check c : checks) {
-            lines.add(pad(c.passed() ? "[ok]" : "[FAILED]", 9) + c.name() + ": " + c.detail());
+            String label = c.passed() ? "[ok]" : c.ran() ? "[FAILED]" : "[not run]";
+            lines.add(pad(label, 9) + (label.length() >= 9 ? " " : "") + c.name() + ": " + c.detail());
         }
         List<String> failed = checks.stream().filter(c -> !c.passed()).map(Check::name).toList();
-        lines.add(failed.isEmpty() ? "verified" : "NOT verified: " + String.join(", ", failed));
+        lines.add(failed.isEmpty() ? "verified" : verified ? "verified by the checks that ran; not run: " + String.join(", ", failed)
+                : "NOT verified: " + String.join(", ", checks.stream().filter(Check::failed).map(Check::name).toList()));
         return lines;
     }
 

@@ -38,7 +38,10 @@ class EmbeddedCTest {
     private static final List<String> STRICT = List.of("-std=c99", "-Wall", "-Wextra", "-Werror", "-pedantic");
     private static final List<String> CORTEX_M4F = List.of("-mcpu=cortex-m4", "-mthumb", "-mfloat-abi=hard", "-mfpu=fpv4-sp-d16",
             "-Os", "-Wstack-usage=512");
-    /** Allowance for a C math library that differs from the model's correctly rounded functions in the last bits. */
+    /**
+     * Allowance, in units of the largest term, for a C math library that differs from the model's
+     * correctly rounded functions in the last bits.
+     */
     private static final Map<CType, Double> SLACK = Map.of(CType.DOUBLE, 1e-15, CType.FLOAT, 1e-6);
     private static final List<CVariant> VARIANTS = List.of(CVariant.DEFAULT, new CVariant(CType.FLOAT, true),
             new CVariant(CType.DOUBLE, false), new CVariant(CType.FLOAT, false));
@@ -54,8 +57,11 @@ class EmbeddedCTest {
         }
     }
 
-    /** One line the check program prints, and what it must be. */
-    private record Expected(String what, String call, BigDecimal value, double tolerance, int code, BigInteger term) {
+    /**
+     * One line the check program prints, and what it must be: a value within {@code allowed} of
+     * {@code value} (absolute), or an exact term with its return code.
+     */
+    private record Expected(String what, String call, BigDecimal value, double allowed, int code, BigInteger term) {
     }
 
     @Test
@@ -68,7 +74,7 @@ class EmbeddedCTest {
             List<Expected> expected = new ArrayList<>();
             for (Generated g : cases) {
                 main.append("#include \"").append(g.function()).append(".h\"\n");
-                expected.addAll(values(g));
+                expected.addAll(values(g, Files.readString(g.source(dir))));
                 expected.addAll(terms(g));
             }
             main.append("int main(void) {\n");
@@ -174,30 +180,37 @@ class EmbeddedCTest {
                 assertFalse(c.source().contains("stdio") || c.source().contains("malloc"), g.input());
                 Files.writeString(g.source(dir), c.source());
                 Files.writeString(dir.resolve(g.function() + ".h"), c.header().orElseThrow());
-                r.code().orElseThrow().facts(variant).ifPresent(f -> assertTrue(c.source().replace("\n *   ", " ")
-                        .contains("max relative error " + CodeHeader.statedError(f) + " against"), g.input() + " " + variant));
+                r.code().orElseThrow().facts(variant).ifPresent(f -> assertTrue(StatedBound.of(c.source()).get(0).relative()
+                        >= f.forward().relativeBound(), g.input() + " " + variant));
                 out.add(g);
             }
         }
         return out;
     }
 
-    /** The value function at its variant's sample points: within twice the stated error plus the slack of a C library. */
-    private static List<Expected> values(Generated g) {
+    /**
+     * The value function at its variant's sample points: within the bound its header states, plus the
+     * slack of a C library in units of the largest term.
+     */
+    private static List<Expected> values(Generated g, String source) {
         Optional<CodeFacts> facts = g.report().code().orElseThrow().facts(g.variant());
         if (facts.isEmpty()) {
             return List.of();
         }
         NumericForm form = g.report().code().orElseThrow().form();
         CType type = g.variant().type();
-        double tolerance = 2 * Double.parseDouble(CodeHeader.statedError(facts.get())) + SLACK.get(type);
+        List<StatedBound> bounds = StatedBound.of(source);
         List<Expected> out = new ArrayList<>();
         for (int p = 0; p < facts.get().points().size(); p++) {
             Rational at = facts.get().points().get(p);
             String arg = form.differential() ? (type == CType.FLOAT ? Float.toString((float) at.doubleValue()) + "f"
                     : Double.toString(at.doubleValue())) : at.toBigInteger() + "L";
+            BigDecimal exact = facts.get().exact().get(p);
+            StatedBound bound = StatedBound.at(bounds, form.differential() && at.doubleValue() < form.origin());
+            double allowed = Math.max(bound.relative() * Math.abs(exact.doubleValue()),
+                    (bound.term() + SLACK.get(type)) * CodeMeasurement.largestTerm(form, at));
             out.add(new Expected(g.input() + " (" + g.variant() + ") at " + at,
-                    "printf(\"%.17g\\n\", (double) " + g.function() + "(" + arg + "));", facts.get().exact().get(p), tolerance, 0, null));
+                    "printf(\"%.17g\\n\", (double) " + g.function() + "(" + arg + "));", exact, allowed, 0, null));
         }
         return out;
     }
@@ -256,8 +269,11 @@ class EmbeddedCTest {
 
     private static void check(Expected e, String line) {
         if (e.value() != null) {
-            double error = CodeMeasurement.relativeError(Double.parseDouble(line), e.value());
-            assertTrue(error <= e.tolerance(), e.what() + ": C value " + line + " vs " + e.value() + ", error " + error);
+            double got = Double.parseDouble(line);
+            BigDecimal error = Double.isFinite(got) ? CodeMeasurement.measurable(new BigDecimal(got).subtract(e.value()).abs(), e.value())
+                    : BigDecimal.valueOf(Double.MAX_VALUE);
+            assertTrue(error.compareTo(new BigDecimal(e.allowed())) <= 0, e.what() + ": C value " + line + " vs " + e.value()
+                    + ", error " + error + " > " + e.allowed());
             return;
         }
         String[] parts = line.split(" ");

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** Compiles the generated C of every corpus equation with gcc (strict C99) and checks its values. */
 class GeneratedCTest {
-    /** Allowance for a C math library that differs from StrictMath in the last bits. */
+    /** Allowance, in units of the largest term, for a C math library that differs from StrictMath in the last bits. */
     private static final double LIBM_SLACK = 1e-15;
 
     @TempDir
@@ -31,7 +31,7 @@ class GeneratedCTest {
         List<String> sources = new ArrayList<>(List.of("main.c"));
         StringBuilder main = new StringBuilder("#include <stdio.h>\n");
         StringBuilder calls = new StringBuilder();
-        List<double[]> expected = new ArrayList<>();
+        List<Expected> expected = new ArrayList<>();
         for (int i = 0; i < all.size(); i++) {
             Report r = Corpus.codeReport(all.get(i));
             NumericForm form = r.code().orElseThrow().form();
@@ -43,11 +43,13 @@ class GeneratedCTest {
             c.header().ifPresent(h -> write(dir.resolve(f + ".h"), h));
             sources.add(f + ".c");
             main.append(separate ? "#include \"" + f + ".h\"\n" : "double " + f + (form.differential() ? "(double);\n" : "(long);\n"));
+            List<StatedBound> bounds = StatedBound.of(c.source());
             for (int p = 0; p < facts.points().size(); p++) {
                 Rational at = facts.points().get(p);
                 String arg = form.differential() ? Double.toString(at.doubleValue()) : at.toBigInteger() + "L";
                 calls.append("    printf(\"%.17g\\n\", ").append(f).append('(').append(arg).append("));\n");
-                expected.add(new double[] {facts.exact().get(p).doubleValue(), facts.maxRelativeError(), i});
+                StatedBound bound = StatedBound.at(bounds, form.differential() && at.doubleValue() < form.origin());
+                expected.add(new Expected(all.get(i), at, facts.exact().get(p), bound, CodeMeasurement.largestTerm(form, at)));
             }
         }
         main.append("int main(void) {\n").append(calls).append("    return 0;\n}\n");
@@ -59,11 +61,15 @@ class GeneratedCTest {
         List<String> lines = run(List.of(dir.resolve("check").toString())).lines().toList();
         assertEquals(expected.size(), lines.size());
         for (int i = 0; i < lines.size(); i++) {
-            double[] e = expected.get(i);
+            Expected e = expected.get(i);
             double got = Double.parseDouble(lines.get(i));
-            double error = e[0] == 0 ? 0 : Math.abs(got - e[0]) / Math.abs(e[0]);
-            assertTrue(error <= 2 * e[1] + LIBM_SLACK, all.get((int) e[2]) + ": C value " + got + " vs " + e[0]);
+            assertTrue(e.bound().holds(got, e.exact(), e.largestTerm(), LIBM_SLACK), e.input() + " at " + e.at() + ": C value " + got
+                    + " vs " + e.exact());
         }
+    }
+
+    /** One value the C program prints, with what it must agree with. */
+    private record Expected(String input, Rational at, java.math.BigDecimal exact, StatedBound bound, double largestTerm) {
     }
 
     private static void write(Path p, String text) {

@@ -42,6 +42,10 @@ public final class Analyzer {
     static final long[] SAMPLE_OFFSETS = {1, 10, 100};
     /** Digits of the sample values: enough to size a double-precision evaluation's error. */
     static final int SAMPLE_DIGITS = 17;
+    /** Largest estimated size, in digits, of an exact sequence value that is computed exactly. */
+    static final int EXACT_SIZE_LIMIT = 20_000;
+    /** Digits of a state (y, y', …) that starts an integrator window away from t0. */
+    static final int STATE_DIGITS = 30;
 
     private final int digits;
     private final boolean plots;
@@ -93,17 +97,15 @@ public final class Analyzer {
             }
             if (!solution.problem().conditions().isEmpty()) {
                 checks.add(bvp.conditionsCheck(digits));
-                checks.add(bvp.integratorCheck());
+                checks.add(bvp.integratorCheck(TimeScales.of(solution.problem().equation(), roots)));
             }
         }
-        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p))));
+        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p, cache))));
         Optional<ExactSolution> exact = solution.exact();
-        if (exact.isPresent()) {
-            ExactSolution s = exact.get();
-            points.forEach(p -> values.add(exactValue(s, p, cache)));
-            if (s.domain() == Domain.DIFFERENTIAL) {
-                checks.add(integratorCheck(s, cache));
-            }
+        exact.ifPresent(s -> points.forEach(p -> values.add(exactValue(s, p, cache))));
+        if (solution.problem().equation().domain() == Domain.DIFFERENTIAL) {
+            exact.map(s -> FittedFunction.of(s, cache)).or(() -> solution.radical().map(r -> FittedFunction.of(r, cache)))
+                    .ifPresent(f -> checks.add(f.integratorCheck(roots)));
         }
         List<PointValue> samples = new ArrayList<>(values);
         exact.ifPresent(s -> samples.addAll(samples(s, cache)));
@@ -114,7 +116,8 @@ public final class Analyzer {
         Optional<Plots> sampled = plots
                 ? Optional.of(PlotSampler.sample(solution, diagnostics, fixed, values, !steady.isEmpty(), cache))
                 : Optional.empty();
-        return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings(), sampled);
+        return new Analysis(roots, values, checks, constants, steady, Optional.of(diagnostics), diagnostics.warnings(), sampled,
+                ConjugateSumModes.of(solution.closedForm(), digits, cache));
     }
 
     /**
@@ -136,13 +139,32 @@ public final class Analyzer {
         ValueRequests.refusal(solution, points).ifPresent(message -> {
             throw new IllegalArgumentException(message);
         });
+        return valuesOfAnySize(solution, points);
+    }
+
+    /**
+     * Like {@link #values}, for points of any size that rootform chose itself, such as the sample
+     * that measures generated code up to n = 10^15 (sequence values there come from certified
+     * evaluation of the modes, never from a huge exact fraction).
+     *
+     * @throws IllegalArgumentException if the points are refused for a reason other than their size
+     *     (a general solution, a non-integer index, an index below the first)
+     */
+    public List<PointValue> referenceValues(Solution solution, List<Rational> points) {
+        ValueRequests.refusalOfAnySize(solution, points).ifPresent(message -> {
+            throw new IllegalArgumentException(message);
+        });
+        return valuesOfAnySize(solution, points);
+    }
+
+    private List<PointValue> valuesOfAnySize(Solution solution, List<Rational> points) {
         RootCache cache = new RootCache();
         List<PointValue> values = new ArrayList<>();
         if (solution.hasNumericConstants()) {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);
             points.forEach(p -> values.add(boundaryValue(bvp, p)));
         }
-        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p))));
+        solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p, cache))));
         solution.exact().ifPresent(s -> points.forEach(p -> values.add(exactValue(s, p, cache))));
         return values;
     }
@@ -152,15 +174,15 @@ public final class Analyzer {
     }
 
     private PointValue exactValue(ExactSolution s, Rational p, RootCache cache) {
-        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p) : functionValue(s, p, digits, cache);
+        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p, digits, cache) : FittedFunction.of(s, cache).value(p, digits);
     }
 
     /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
     private List<PointValue> samples(ExactSolution s, RootCache cache) {
         List<PointValue> samples = new ArrayList<>();
         for (long offset : SAMPLE_OFFSETS) {
-            samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset))
-                    : functionValue(s, s.origin().add(Rational.of(offset)), SAMPLE_DIGITS, cache));
+            samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset), SAMPLE_DIGITS, cache)
+                    : FittedFunction.of(s, cache).value(s.origin().add(Rational.of(offset)), SAMPLE_DIGITS));
         }
         return samples;
     }
@@ -186,58 +208,51 @@ public final class Analyzer {
         throw new AssertionError(root);
     }
 
-    /** x[n] = a + b·√r exactly; shown exact when b = 0. */
-    private PointValue radicalValue(RadicalSolution r, Rational at) {
-        Surd v = r.valueAt(at.toBigInteger().longValueExact());
-        return new PointValue(at, v.toBigDecimal(new MathContext(digits)),
-                v.isRational() ? Optional.of(v.rational()) : Optional.empty(), v.isRational() ? Optional.empty() : Optional.of(v));
-    }
-
-    /** x[n] exactly, at an index {@link ValueRequests} accepts. */
-    private PointValue sequenceValue(ExactSolution s, Rational at) {
-        Rational v = s.valueAt(at.toBigInteger().longValueExact());
-        return new PointValue(at, v.toBigDecimal(new MathContext(digits)), Optional.of(v));
-    }
-
-    /** y(t) to {@code wanted} significant digits. */
-    private static PointValue functionValue(ExactSolution s, Rational t, int wanted, RootCache cache) {
-        if (t.equals(s.origin())) {
-            Rational v = s.derivativeAtOrigin(0);
-            return new PointValue(t, v.toBigDecimal(new MathContext(wanted)), Optional.of(v));
+    /**
+     * x[n] = a + b·√r: exact (shown exact when b = 0) while both parts are small, else evaluated to
+     * the digits asked ({@link #sequenceValue}).
+     */
+    private PointValue radicalValue(RadicalSolution r, Rational at, RootCache cache) {
+        if (r.rational().domain() == Domain.DIFFERENTIAL) {
+            return FittedFunction.of(r, cache).value(at, digits);
         }
-        Apfloat[] settled = WorkingPrecision.settle(wanted, working -> ModeSum.of(s, cache, working).valueAndLargest(t),
-                (low, high, working) -> agree(low, high, working, wanted),
-                (working, high) -> working + WorkingPrecision.GUARD_DIGITS
-                        + (int) Math.ceil(ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10)),
-                "value at t = " + t);
-        return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
+        long n = at.toBigInteger().longValueExact();
+        double size = Math.max(SequenceSum.exactDigits(r.rational(), n, cache), SequenceSum.exactDigits(r.radical(), n, cache));
+        if (n < r.rational().validFrom() || size <= Math.max(EXACT_SIZE_LIMIT, digits)) {
+            Surd v = r.valueAt(n);
+            return new PointValue(at, v.toBigDecimal(new MathContext(digits)),
+                    v.isRational() ? Optional.of(v.rational()) : Optional.empty(), v.isRational() ? Optional.empty() : Optional.of(v));
+        }
+        Apfloat[] value = settledSequence(n, digits, working -> {
+            Apfloat root = ApfloatMath.sqrt(new Apfloat(r.radicand(), working));
+            Apfloat[] a = SequenceSum.of(r.rational(), cache, working).valueAndLargest(n);
+            Apfloat[] b = SequenceSum.of(r.radical(), cache, working).valueAndLargest(n);
+            Apfloat scaled = b[1].multiply(root);
+            return new Apfloat[] {a[0].add(root.multiply(b[0])), a[1].compareTo(scaled) > 0 ? a[1] : scaled};
+        });
+        return new PointValue(at, Decimals.toBigDecimal(value[0], digits), Optional.empty());
     }
 
     /**
-     * Whether two evaluations {value, largest mode magnitude} agree to {@code wanted} digits, or to
-     * the working precision's floor below the largest mode (a value that cancels to about 0).
+     * x[n] at an index {@link ValueRequests} accepts, to {@code wanted} digits: exact while the exact
+     * fraction is estimated at no more than {@link #EXACT_SIZE_LIMIT} digits (or the digits asked, when
+     * more), else from the modes in apfloat, confirmed by two working precisions agreeing.
      */
-    private static boolean agree(Apfloat[] low, Apfloat[] high, int working, int wanted) {
-        Apfloat difference = ApfloatMath.abs(low[0].subtract(high[0]));
-        Apfloat relative = ApfloatMath.abs(high[0]).multiply(new Apfloat("1e-" + (wanted + 2), working));
-        Apfloat floor = high[1].multiply(new Apfloat("1e-" + (working - WorkingPrecision.GUARD_DIGITS / 2), working));
-        return difference.compareTo(relative) <= 0 || difference.compareTo(floor) <= 0;
+    private static PointValue sequenceValue(ExactSolution s, Rational at, int wanted, RootCache cache) {
+        long n = at.toBigInteger().longValueExact();
+        if (n < s.validFrom() || SequenceSum.exactDigits(s, n, cache) <= Math.max(EXACT_SIZE_LIMIT, wanted)) {
+            Rational v = s.valueAt(n);
+            return new PointValue(at, v.toBigDecimal(new MathContext(wanted)), Optional.of(v));
+        }
+        Apfloat[] value = settledSequence(n, wanted, working -> SequenceSum.of(s, cache, working).valueAndLargest(n));
+        return new PointValue(at, Decimals.toBigDecimal(value[0], wanted), Optional.empty());
     }
 
-    /** The integrator cross-check from the exact derivatives at the origin t0, at t0 + {@link IntegratorCheck#OFFSETS}. */
-    private static Check integratorCheck(ExactSolution s, RootCache cache) {
-        int k = s.equation().order();
-        List<Rational> initial = new ArrayList<>(k);
-        for (int d = 0; d < k; d++) {
-            initial.add(s.derivativeAtOrigin(d));
-        }
-        double t0 = s.origin().doubleValue();
-        double[] points = new double[IntegratorCheck.OFFSETS.length];
-        double[] closed = new double[points.length];
-        for (int i = 0; i < points.length; i++) {
-            points[i] = t0 + IntegratorCheck.OFFSETS[i];
-            closed[i] = functionValue(s, Rational.of(BigDecimal.valueOf(points[i])), 17, cache).value().doubleValue();
-        }
-        return IntegratorCheck.compare(s.equation(), s.origin(), initial, points, closed, "at t0 + " + IntegratorCheck.offsets());
+    /** {value, largest mode} at the first two working precisions that agree; log10|n| digits more to start with. */
+    private static Apfloat[] settledSequence(long n, int wanted, java.util.function.IntFunction<Apfloat[]> evaluate) {
+        int lost = (int) Math.ceil(Math.log10(Math.abs((double) n) + 1));
+        return WorkingPrecision.settle(wanted + lost, evaluate,
+                (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
+                (working, high) -> working + WorkingPrecision.GUARD_DIGITS + lost, "value at n = " + n);
     }
 }

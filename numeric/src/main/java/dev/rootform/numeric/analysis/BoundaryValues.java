@@ -36,10 +36,12 @@ import org.apfloat.ApfloatMath;
  * numerically); that is reported, never papered over.
  */
 final class BoundaryValues {
-    /** Generic points where L y = g is imposed on a trial form (as many as it has constants). */
-    private static final String[] COLLOCATION = {"0.3", "0.91803398874989484820", "1.5360679774997896964",
-        "2.1541019662496845446", "2.7721359549995793928", "3.3901699437494742410", "4.0082039324993690892",
-        "4.6262379212492639374"};
+    /**
+     * Generic points where L y = g is imposed on a trial form, as many as it has constants: the k-th
+     * is 0.3 + k·(√5 − 1)/2 (the golden-ratio steps never meet a residual point or each other).
+     */
+    private static final BigDecimal COLLOCATION_START = new BigDecimal("0.3");
+    private static final BigDecimal COLLOCATION_STEP = new BigDecimal("0.61803398874989484820");
     /** Further points where the residual L y - g of a trial form is checked afterwards. */
     private static final String[] RESIDUAL_POINTS = {"0.77", "1.9", "3.14159"};
 
@@ -88,7 +90,7 @@ final class BoundaryValues {
             Deadline.checkCurrent();
             boolean condition = row < conditions.size();
             Condition c = condition ? conditions.get(row) : null;
-            Apfloat t = condition ? point(c, working) : new Apfloat(COLLOCATION[row - conditions.size()], working);
+            Apfloat t = condition ? point(c, working) : collocation(row - conditions.size(), working);
             for (int j = 0; j < n; j++) {
                 ModeSum f = basis.get(first + j);
                 a[row][j] = condition ? f.derivative(c.derivative(), t) : applied(eq, f, t);
@@ -104,6 +106,11 @@ final class BoundaryValues {
             constants.put(names.get(j), x.get(j));
         }
         return new BoundaryValues(solution, basis, first, particular, constants, working);
+    }
+
+    /** The k-th collocation point (from 0). */
+    private static Apfloat collocation(int k, int working) {
+        return new Apfloat(COLLOCATION_START.add(COLLOCATION_STEP.multiply(BigDecimal.valueOf(k))), working);
     }
 
     /** (L f)(t) = Σ a_l f^(l)(t). */
@@ -147,73 +154,20 @@ final class BoundaryValues {
     }
 
     /**
-     * Gauss–Jordan elimination with partial pivoting; an entry below 10^-(working - 10) of its row's
-     * scale counts as zero. A singular system is explained: contradictory conditions, or a free
-     * solution Σ v_j·C_j-basis (the kernel vector, largest entry 1) that can be added.
+     * The solution of the system by {@link Elimination}; a singular system is explained:
+     * contradictory conditions, or a free solution Σ v_j·C_j-basis (the kernel vector, largest
+     * entry 1) that can be added.
      */
     private static List<Apfloat> eliminate(Apfloat[][] a, long working, Solution solution, List<String> names) {
-        int k = a.length;
-        Apfloat tiny = new Apfloat("1e-" + (working - 10), working);
-        Apfloat[] scales = new Apfloat[k];
-        for (int r = 0; r < k; r++) {
-            scales[r] = scale(a, r);
+        Elimination.Reduced r = Elimination.reduce(a, working);
+        if (r.singular()) {
+            throw BoundarySingularity.explain(r.a(), r.pivotRow(), r.rank(), r.tiny(), r.scales(), working, solution, names);
         }
-        int[] pivotRow = new int[k];
-        java.util.Arrays.fill(pivotRow, -1);
-        int rank = 0;
-        for (int c = 0; c < k; c++) {
-            int p = -1;
-            for (int r = rank; r < k; r++) {
-                if (ApfloatMath.abs(a[r][c]).compareTo(tiny.multiply(scales[r])) > 0
-                        && (p < 0 || ApfloatMath.abs(a[r][c]).compareTo(ApfloatMath.abs(a[p][c])) > 0)) {
-                    p = r;
-                }
-            }
-            if (p < 0) {
-                continue;
-            }
-            swap(a, scales, p, rank);
-            for (int r = 0; r < k; r++) {
-                if (r != rank) {
-                    Deadline.checkCurrent();
-                    Apfloat f = a[r][c].divide(a[rank][c]);
-                    for (int j = c; j <= k; j++) {
-                        a[r][j] = a[r][j].subtract(f.multiply(a[rank][j]));
-                    }
-                }
-            }
-            pivotRow[c] = rank++;
-        }
-        if (rank < k) {
-            throw BoundarySingularity.explain(a, pivotRow, rank, tiny, scales, working, solution, names);
-        }
-        Apfloat[] x = new Apfloat[k];
-        for (int c = 0; c < k; c++) {
-            x[c] = a[pivotRow[c]][k].divide(a[pivotRow[c]][c]);
-        }
-        return List.of(x);
+        return r.solution();
     }
 
-    private static void swap(Apfloat[][] a, Apfloat[] scales, int i, int j) {
-        Apfloat[] row = a[i];
-        a[i] = a[j];
-        a[j] = row;
-        Apfloat s = scales[i];
-        scales[i] = scales[j];
-        scales[j] = s;
-    }
-
-    /** Which of the two ways a singular system fails, and why, as one line. */
-    private static Apfloat scale(Apfloat[][] a, int row) {
-        Apfloat max = Apfloat.ONE;
-        for (int j = 0; j < a.length; j++) {
-            Apfloat v = ApfloatMath.abs(a[row][j]);
-            max = v.compareTo(max) > 0 ? v : max;
-        }
-        return max;
-    }
-
-    private static boolean agree(Map<String, Apfloat> x, Map<String, Apfloat> y, int digits) {
+    /** Whether every value of {@code y} agrees with the one of {@code x} of the same name to {@code digits}. */
+    static boolean agree(Map<String, Apfloat> x, Map<String, Apfloat> y, int digits) {
         for (Map.Entry<String, Apfloat> e : y.entrySet()) {
             Apfloat d = ApfloatMath.abs(x.get(e.getKey()).subtract(e.getValue()));
             Apfloat unit = new Apfloat("1e-" + digits, digits + WorkingPrecision.GUARD_DIGITS);
@@ -305,29 +259,34 @@ final class BoundaryValues {
 
     /**
      * The integrator cross-check from the first condition point t0, starting from this solution's
-     * derivatives there, at the other condition points and at t0 + {@link IntegratorCheck#OFFSETS}.
+     * derivatives there, on the problem's time scales and at the other condition points.
      */
-    Check integratorCheck() {
+    Check integratorCheck(TimeScales scales) {
         List<Condition> conditions = solution.problem().conditions();
         // the start, rounded to a rational when it is a multiple of π; the derivatives are taken there
         Rational t0 = Rational.of(Decimals.toBigDecimal(point(conditions.get(0), precision), 40));
-        int k = solution.problem().equation().order();
-        List<Rational> initial = new ArrayList<>();
-        for (int d = 0; d < k; d++) {
-            initial.add(Rational.of(Decimals.toBigDecimal(derivative(d, t0), 30)));
-        }
-        List<Apfloat> points = new ArrayList<>();
+        List<Double> others = new ArrayList<>();
         for (Condition c : conditions) {
             if (!c.samePoint(conditions.get(0))) {
-                points.add(point(c, precision));
+                others.add(point(c, precision).doubleValue());
             }
         }
-        for (double offset : IntegratorCheck.OFFSETS) {
-            points.add(Decimals.toApfloat(t0, precision).add(new Apfloat(offset, precision)));
-        }
-        double[] at = points.stream().mapToDouble(Apfloat::doubleValue).toArray();
-        double[] closed = points.stream().mapToDouble(p -> derivative(0, p).doubleValue()).toArray();
-        return IntegratorCheck.compare(solution.problem().equation(), t0, initial, at, closed, "from t = "
-                + conditions.get(0).point() + " to the other condition points and t0 + " + IntegratorCheck.offsets());
+        IntegratorCheck.Solved closed = new IntegratorCheck.Solved() {
+            @Override
+            public double value(double t) {
+                return derivative(0, new Apfloat(new BigDecimal(t), precision)).doubleValue();
+            }
+
+            @Override
+            public List<Rational> state(Rational t) {
+                List<Rational> state = new ArrayList<>();
+                for (int d = 0; d < solution.problem().equation().order(); d++) {
+                    state.add(Rational.of(Decimals.toBigDecimal(derivative(d, t), Analyzer.STATE_DIGITS)));
+                }
+                return state;
+            }
+        };
+        return IntegratorCheck.compare(solution.problem().equation(), t0, closed.state(t0), scales, others, closed,
+                "t = " + conditions.get(0).point());
     }
 }

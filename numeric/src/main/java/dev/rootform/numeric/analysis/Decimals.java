@@ -14,7 +14,8 @@ final class Decimals {
         return new Apfloat(r.toBigDecimal(new MathContext((int) precision)), precision);
     }
 
+    /** {@code a} rounded to {@code digits}; read from apfloat's scientific form, so a huge exponent costs nothing. */
     static BigDecimal toBigDecimal(Apfloat a, int digits) {
-        return new BigDecimal(a.toString(true)).round(new MathContext(digits));
+        return new BigDecimal(a.toString(false)).round(new MathContext(digits));
     }
 }

@@ -8,6 +8,7 @@ import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
+import dev.rootform.symbolic.solve.RadicalSolution;
 import dev.rootform.symbolic.work.Deadline;
 import java.math.BigDecimal;
 import java.util.ArrayList;
@@ -65,6 +66,16 @@ public final class ModeSum {
             }
         }
         return new ModeSum(s.origin(), modes, precision);
+    }
+
+    /** y = a + √r·b of a radical solution: the modes of a, and those of b with weights times √r. */
+    static ModeSum of(RadicalSolution r, RootCache cache, long precision) {
+        List<Mode> modes = new ArrayList<>(of(r.rational(), cache, precision).modes);
+        Apfloat root = org.apfloat.ApfloatMath.sqrt(new Apfloat(r.radicand(), precision));
+        for (Mode m : of(r.radical(), cache, precision).modes) {
+            modes.add(new Mode(m.weight().multiply(root), m.power(), m.rate()));
+        }
+        return new ModeSum(r.rational().origin(), modes, precision);
     }
 
     /**
@@ -201,11 +212,17 @@ public final class ModeSum {
         return new ModeSum(Rational.ZERO, List.of(m), m.weight().precision());
     }
 
+    /** The one mode w·u^p·e^{zu}, u = t - origin. */
+    static ModeSum of(Rational origin, Apcomplex weight, int power, Apcomplex rate, long precision) {
+        return new ModeSum(origin, List.of(new Mode(weight, power, rate)), precision);
+    }
+
     private static Apcomplex pow(Apcomplex z, int n) {
         return n == 0 ? new Apfloat(1, z.precision()) : org.apfloat.ApcomplexMath.pow(z, n);
     }
 
-    private static List<Apcomplex> roots(RationalPolynomial f, RootCache cache, long precision) {
+    /** The roots of f at the working precision: exact for a linear f, else from certified enclosures. */
+    static List<Apcomplex> roots(RationalPolynomial f, RootCache cache, long precision) {
         if (f.degree() == 1) {
             return List.of(Decimals.toApfloat(f.coefficient(0).negate(), precision));
         }
@@ -213,7 +230,8 @@ public final class ModeSum {
                 .map(r -> new Apcomplex(new Apfloat(r.re(), precision), new Apfloat(r.im(), precision))).toList();
     }
 
-    private static Apcomplex polynomialAt(RationalPolynomial c, Apcomplex alpha, long precision) {
+    /** c(α) by Horner's rule at the working precision. */
+    static Apcomplex polynomialAt(RationalPolynomial c, Apcomplex alpha, long precision) {
         Apcomplex v = Apcomplex.ZERO;
         for (int j = c.degree(); j >= 0; j--) {
             v = v.multiply(alpha).add(Decimals.toApfloat(c.coefficient(j), precision));

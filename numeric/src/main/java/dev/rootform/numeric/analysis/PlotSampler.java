@@ -119,10 +119,15 @@ final class PlotSampler {
         if (bvp.isPresent()) {
             total = bvp.get().inDoubles(false);
             steady = forced ? Optional.of(bvp.get().inDoubles(true)) : Optional.empty();
-        } else {
-            ExactSolution e = s.exact().orElseThrow(() -> new IllegalStateException("no values for " + s.closedForm()));
+        } else if (s.exact().isPresent()) {
+            ExactSolution e = s.exact().get();
             total = ModeSum.of(e, cache, PRECISION).inDoubles();
             steady = forced ? Optional.of(ModeSum.of(steadyPart(s, e), cache, PRECISION).inDoubles()) : Optional.empty();
+        } else {
+            // constants in Q(√r) (boundary conditions at multiples of π): the √r part is homogeneous
+            RadicalSolution r = s.radical().orElseThrow(() -> new IllegalStateException("no values for " + s.closedForm()));
+            total = ModeSum.of(r, cache, PRECISION).inDoubles();
+            steady = forced ? Optional.of(ModeSum.of(steadyPart(s, r.rational()), cache, PRECISION).inDoubles()) : Optional.empty();
         }
         List<Sample> all = new ArrayList<>();
         List<Sample> particular = new ArrayList<>();

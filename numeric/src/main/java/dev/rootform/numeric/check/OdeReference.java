@@ -3,7 +3,10 @@ package dev.rootform.numeric.check;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.work.Deadline;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.exception.MaxCountExceededException;
+import org.apache.commons.math3.exception.NumberIsTooSmallException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 import org.apache.commons.math3.ode.sampling.StepHandler;
@@ -58,6 +61,26 @@ public final class OdeReference {
      */
     public static double[] values(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
             List<Rational> initialDerivatives, double[] points) {
+        return integrate(coefficients, forcing, t0, initialDerivatives, points, Integer.MAX_VALUE);
+    }
+
+    /**
+     * As {@link #values(List, DoubleUnaryOperator, Rational, List, double[])}, but empty when an
+     * integration cannot reach a point: it would need more than {@code maxEvaluations} evaluations
+     * of the right-hand side, or a step below the smallest allowed (a solution far faster than the
+     * span, such as ω = 10^31 over [0, π]).
+     */
+    public static Optional<double[]> values(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
+            List<Rational> initialDerivatives, double[] points, int maxEvaluations) {
+        try {
+            return Optional.of(integrate(coefficients, forcing, t0, initialDerivatives, points, maxEvaluations));
+        } catch (MaxCountExceededException | NumberIsTooSmallException e) {
+            return Optional.empty();
+        }
+    }
+
+    private static double[] integrate(List<Rational> coefficients, DoubleUnaryOperator forcing, Rational t0,
+            List<Rational> initialDerivatives, double[] points, int maxEvaluations) {
         int k = coefficients.size() - 1;
         if (k < 1 || coefficients.get(k).isZero()) {
             throw new IllegalArgumentException("need order ≥ 1 and a non-zero leading coefficient");
@@ -87,6 +110,7 @@ public final class OdeReference {
             }
             DormandPrince853Integrator integrator = new DormandPrince853Integrator(
                     MIN_STEP_FRACTION * span, span, RELATIVE_TOLERANCE * scale, RELATIVE_TOLERANCE);
+            integrator.setMaxEvaluations(maxEvaluations);
             integrator.addStepHandler(new DeadlineCheck());
             double[] state = start.clone();
             integrator.integrate(system, begin, state, points[i], state);

@@ -34,7 +34,7 @@ final class Cancellation {
             if (p.value().signum() == 0) {
                 continue;
             }
-            double lost = largestTerm(s, roots, p.at()) - log10(p.value());
+            double lost = largestTerm(s, roots, p.at()) - FactorRoot.log10(p.value());
             if (lost > worst) {
                 worst = lost;
                 where = p;
@@ -60,7 +60,7 @@ final class Cancellation {
                 if (!r.factor().equals(c.factor())) {
                     continue;
                 }
-                double growth = discrete ? x * Math.log10(r.modulus()) : r.re() * x / Math.log(10);
+                double growth = discrete ? x * r.log10Modulus() : r.re() * x / Math.log(10);
                 for (int i = 0; i < c.coefficients().size(); i++) {
                     double size = log10Modulus(c.coefficients().get(i), r.re(), r.im());
                     double power = i == 0 ? 0 : i * logX;
@@ -81,12 +81,5 @@ final class Cancellation {
             a = na;
         }
         return Math.log10(Math.hypot(a, b));
-    }
-
-    /** log10 |x| of a nonzero decimal of any size. */
-    private static double log10(BigDecimal x) {
-        BigDecimal a = x.abs();
-        int exponent = a.precision() - a.scale();
-        return exponent + Math.log10(a.movePointLeft(exponent).doubleValue());
     }
 }

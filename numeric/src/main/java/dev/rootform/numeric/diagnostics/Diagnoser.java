@@ -49,7 +49,10 @@ public final class Diagnoser {
         Optional<BigDecimal> kappa = solution.exact().isEmpty() ? Optional.empty()
                 : ConditionFitter.conditionNumber(eq, solution.problem().conditions())
                         .map(k -> k.toBigDecimal(new MathContext(digits)));
-        return new Diagnostics(stability, growth, ModeFacts.of(eq.domain(), entries), kappa, warnings);
+        boolean settles = stability.verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE && !eq.isHomogeneous()
+                && eq.forcing().stream().allMatch(t -> eq.domain() == Domain.DIFFERENTIAL ? t.exponential().isZero()
+                        : t.exponential().abs().isOne());
+        return new Diagnostics(stability, growth, ModeFacts.of(eq.domain(), entries), kappa, warnings, settles);
     }
 
     /** Per factor, one more than the highest power of t or n whose coefficient is nonzero. */

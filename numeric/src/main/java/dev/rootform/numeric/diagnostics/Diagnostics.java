@@ -16,10 +16,16 @@ import java.util.Optional;
  * @param conditionNumber κ_∞ of the constant-fitting system, computed exactly and rounded here;
  *     empty for a general solution
  * @param warnings nearly repeated roots, severe cancellation in double precision
+ * @param settles whether the homogeneous part of a forced solution is a transient and its particular
+ *     part a steady state: the system is asymptotically stable and no forcing term decays or grows
+ *     (each is a polynomial times a constant, an oscillation or a sequence with |base| = 1), so the
+ *     homogeneous part dies out and the particular part is what remains; otherwise the parts are
+ *     only homogeneous and particular (a loan balance, an unstable recurrence, a decaying input, a
+ *     beam in space)
  * @since 0.2
  */
 public record Diagnostics(Stability stability, Growth growth, List<Mode> modes, Optional<BigDecimal> conditionNumber,
-        List<String> warnings) {
+        List<String> warnings, boolean settles) {
     public Diagnostics {
         Objects.requireNonNull(stability, "stability");
         Objects.requireNonNull(growth, "growth");

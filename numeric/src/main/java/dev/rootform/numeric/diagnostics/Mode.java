@@ -1,6 +1,7 @@
 package dev.rootform.numeric.diagnostics;
 
 import dev.rootform.numeric.roots.RootApproximation;
+import java.math.BigDecimal;
 import java.util.List;
 import java.util.Objects;
 
@@ -20,16 +21,18 @@ public record Mode(RootApproximation root, int multiplicity, List<Quantity> quan
     }
 
     /**
-     * A named approximate quantity of a mode (double precision, from the certified root value).
+     * A named approximate quantity of a mode (16 significant digits, the precision of a double,
+     * from the certified root value; any size, also beyond the double range).
      *
      * @param key machine name, e.g. {@code "dampingRatio"}
      * @param symbol name for people, e.g. {@code "ζ"}
      * @param value the value
      */
-    public record Quantity(String key, String symbol, double value) {
+    public record Quantity(String key, String symbol, BigDecimal value) {
         public Quantity {
             Objects.requireNonNull(key, "key");
             Objects.requireNonNull(symbol, "symbol");
+            Objects.requireNonNull(value, "value");
         }
     }
 }

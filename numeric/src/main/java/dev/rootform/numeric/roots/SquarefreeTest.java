@@ -15,7 +15,7 @@ import java.math.BigInteger;
  * gcd(p, p') = 1. When every prime in {@link #PRIMES} is inconclusive, the exact rational Euclidean
  * algorithm of {@link RationalPolynomial#gcd} decides (slow for high degree).
  */
-final class SquarefreeTest {
+public final class SquarefreeTest {
     /** Known primes below 2^31, so that products of residues fit in a {@code long}. */
     static final long[] PRIMES = {2_147_483_647L, 2_147_483_563L, 2_147_483_399L, 1_000_000_007L, 998_244_353L};
 
@@ -23,7 +23,7 @@ final class SquarefreeTest {
     }
 
     /** Whether gcd(p, p') is a non-zero constant; exact. */
-    static boolean isSquarefree(RationalPolynomial p) {
+    public static boolean isSquarefree(RationalPolynomial p) {
         BigInteger[] integer = integerMultiple(p);
         int d = integer.length - 1;
         for (long q : PRIMES) {

@@ -22,7 +22,7 @@ class DiagnoserTest {
     }
 
     static double quantity(Mode m, String key) {
-        return m.quantities().stream().filter(q -> q.key().equals(key)).findFirst().orElseThrow(() -> new AssertionError(key)).value();
+        return m.quantities().stream().filter(q -> q.key().equals(key)).findFirst().orElseThrow(() -> new AssertionError(key)).value().doubleValue();
     }
 
     @ParameterizedTest(name = "[{index}] {0} is {1}")

@@ -12,6 +12,7 @@ import java.util.Objects;
  * @since 0.1
  */
 public final class Rational implements Comparable<Rational> {
+    private static final MathContext DOUBLE_ROUNDING = new MathContext(40);
     public static final Rational ZERO = new Rational(BigInteger.ZERO, BigInteger.ONE);
     public static final Rational ONE = new Rational(BigInteger.ONE, BigInteger.ONE);
     public static final Rational MINUS_ONE = new Rational(BigInteger.ONE.negate(), BigInteger.ONE);
@@ -192,8 +193,12 @@ public final class Rational implements Comparable<Rational> {
         return (shift >= 0 ? quotient.multiply(power, wide) : quotient.divide(power, wide)).round(context);
     }
 
+    /**
+     * The nearest double, through 40 significant digits (so a rational that is a double, such as the
+     * exact value of an input, converts back to exactly that double).
+     */
     public double doubleValue() {
-        return toBigDecimal(MathContext.DECIMAL64).doubleValue();
+        return toBigDecimal(DOUBLE_ROUNDING).doubleValue();
     }
 
     @Override

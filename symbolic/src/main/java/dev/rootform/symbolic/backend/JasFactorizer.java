@@ -6,7 +6,6 @@ import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.work.Cancelled;
 import dev.rootform.symbolic.work.Deadline;
 import edu.jas.arith.BigInteger;
-import edu.jas.kern.ComputerThreads;
 import edu.jas.kern.PreemptStatus;
 import edu.jas.kern.PreemptingException;
 import edu.jas.poly.ExpVector;
@@ -26,7 +25,9 @@ import java.util.concurrent.locks.ReentrantLock;
  * Factorisation over Q into monic irreducible factors with multiplicities, by JAS over Z after
  * clearing denominators (measured 2–4× faster than over Q at degree 120). The only class that
  * touches JAS types. JAS's parallel GCD thread pool is switched off, so no non-daemon thread keeps
- * the JVM alive after use, and the work runs on the calling thread.
+ * the JVM alive after use, and the work runs on the calling thread. JAS's classes are initialised
+ * once by {@link JasStartup}, on a thread no time limit interrupts, so that no interrupt can break
+ * them; this class's own initialiser touches no JAS class.
  *
  * <p>Cancellation: JAS checks {@link Thread#isInterrupted()} whenever it builds a polynomial in a
  * ring made while preemption is allowed ({@code PreemptStatus.setAllow()}, switched on before each
@@ -44,14 +45,8 @@ import java.util.concurrent.locks.ReentrantLock;
  * @since 0.1
  */
 public final class JasFactorizer {
-    static {
-        ComputerThreads.NO_THREADS = true;
-    }
-
     /** One JAS factorisation at a time (see the class comment). */
     private static final ReentrantLock JAS = new ReentrantLock();
-    /** How often a thread waiting for {@link #JAS} checks its deadline, in milliseconds. */
-    private static final long WAIT_STEP_MILLIS = 10;
 
     private static final int RECENT_SIZE = 64;
     /**
@@ -101,6 +96,7 @@ public final class JasFactorizer {
     }
 
     private static List<Factor> factorsOf(RationalPolynomial p) {
+        JasStartup.await();
         Deadline.checkCurrent();
         FactorAbstract<BigInteger> engine = FactorFactory.getImplementation(BigInteger.ONE);
         List<Factor> factors = new ArrayList<>();
@@ -134,14 +130,7 @@ public final class JasFactorizer {
 
     /** Takes {@link #JAS}, checking the current deadline while another thread holds it. */
     private static void lock() {
-        try {
-            while (!JAS.tryLock(WAIT_STEP_MILLIS, TimeUnit.MILLISECONDS)) {
-                Deadline.checkCurrent();
-            }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new Cancelled("interrupted while waiting to factor");
-        }
+        JasStartup.waitFor(step -> JAS.tryLock(step, TimeUnit.MILLISECONDS), "waiting to factor");
     }
 
     /**

@@ -66,6 +66,48 @@ public record Surd(Rational rational, Rational coefficient, BigInteger radicand)
         return isRational() ? of(rational.multiply(f)) : of(rational.multiply(f), coefficient.multiply(f), Rational.of(radicand));
     }
 
+    /**
+     * The exact sum. @throws ArithmeticException if both have a √ part with different radicands
+     * (the sum is then not of the form a + b·√r)
+     */
+    public Surd add(Surd other) {
+        BigInteger r = commonRadicand(other);
+        return of(rational.add(other.rational), coefficient.add(other.coefficient), Rational.of(r));
+    }
+
+    /**
+     * The exact product (a + b√r)(c + d√r) = (ac + bd·r) + (ad + bc)√r. @throws ArithmeticException if
+     * both have a √ part with different radicands
+     */
+    public Surd multiply(Surd other) {
+        BigInteger r = commonRadicand(other);
+        Rational radicandValue = Rational.of(r);
+        return of(rational.multiply(other.rational).add(coefficient.multiply(other.coefficient).multiply(radicandValue)),
+                rational.multiply(other.coefficient).add(coefficient.multiply(other.rational)), radicandValue);
+    }
+
+    /** The exact inverse 1/(a + b√r) = (a - b√r)/(a² - b²r). @throws ArithmeticException if this is zero */
+    public Surd inverse() {
+        if (isZero()) {
+            throw new ArithmeticException("zero has no inverse");
+        }
+        Rational r = Rational.of(radicand);
+        Rational norm = rational.multiply(rational).subtract(coefficient.multiply(coefficient).multiply(r));
+        return of(rational.divide(norm), coefficient.negate().divide(norm), r);
+    }
+
+    /** Whether {@link #add} and {@link #multiply} accept the pair (at most one radicand other than 1). */
+    public boolean sameField(Surd other) {
+        return isRational() || other.isRational() || radicand.equals(other.radicand);
+    }
+
+    private BigInteger commonRadicand(Surd other) {
+        if (!sameField(other)) {
+            throw new ArithmeticException("√" + radicand + " and √" + other.radicand + " in one number");
+        }
+        return isRational() ? other.radicand : radicand;
+    }
+
     public Surd negate() {
         return multiply(Rational.MINUS_ONE);
     }
@@ -99,22 +141,36 @@ public record Surd(Rational rational, Rational coefficient, BigInteger radicand)
         return toBigDecimal(MathContext.DECIMAL64).doubleValue();
     }
 
-    /** {s, r} with n = s²·r and r free of the squares of primes below the trial limit. */
+    /**
+     * {s, r} with n = s²·r and r free of the squares of primes below the trial limit: each such prime
+     * is divided out (squared into s, once into r); what is left has only larger prime factors and
+     * goes into s when it is a square, else into r.
+     */
     private static BigInteger[] squareSplit(BigInteger n) {
         BigInteger outside = BigInteger.ONE;
-        BigInteger inside = n;
-        BigInteger whole = inside.sqrt();
-        if (whole.multiply(whole).equals(inside)) {
+        BigInteger kept = BigInteger.ONE;
+        BigInteger rest = n;
+        BigInteger whole = rest.sqrt();
+        if (whole.multiply(whole).equals(rest)) {
             return new BigInteger[] {whole, BigInteger.ONE};
         }
-        for (int p = 2; p < TRIAL_LIMIT && BigInteger.valueOf((long) p * p).compareTo(inside) <= 0; p++) {
+        for (int p = 2; p < TRIAL_LIMIT && BigInteger.valueOf((long) p * p).compareTo(rest) <= 0; p++) {
+            BigInteger prime = BigInteger.valueOf(p);
             BigInteger sq = BigInteger.valueOf((long) p * p);
-            while (inside.mod(sq).signum() == 0) {
-                inside = inside.divide(sq);
-                outside = outside.multiply(BigInteger.valueOf(p));
+            while (rest.mod(sq).signum() == 0) {
+                rest = rest.divide(sq);
+                outside = outside.multiply(prime);
+            }
+            if (rest.mod(prime).signum() == 0) {
+                rest = rest.divide(prime);
+                kept = kept.multiply(prime);
             }
         }
-        return new BigInteger[] {outside, inside};
+        BigInteger root = rest.sqrt();
+        if (root.multiply(root).equals(rest)) {
+            return new BigInteger[] {outside.multiply(root), kept};
+        }
+        return new BigInteger[] {outside, kept.multiply(rest)};
     }
 
     /** e.g. {@code 3}, {@code √5}, {@code 1/2 + 3/2·√5}. */

@@ -70,8 +70,9 @@ public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.Co
     /**
      * A conjugate sum: Σ over the roots α of the irreducible {@code factor} (all conjugates of one
      * algebraic number) of c(α)·v^power·e^{αv} (or α^v), with c(α) = Σ_j coefficients[j]·α^j; real
-     * because the sum runs over all conjugates. Used for factors of degree &ge; 3, and for any factor of
-     * degree &ge; 2 whose coefficients carry a second square root √r from the forcing.
+     * because the sum runs over all conjugates. Used for factors of degree &ge; 3 other than the
+     * cyclotomic quartics Φ_8 and Φ_12 (which become cos/sin pairs), and for a quadratic or such
+     * quartic factor whose coefficients would need a second square root next to √r from the forcing.
      */
     record ConjugateSum(RationalPolynomial factor, List<Coefficient> coefficients, int power) implements Term {
         public ConjugateSum {
@@ -82,6 +83,42 @@ public sealed interface Term permits Term.Exponential, Term.Oscillating, Term.Co
         @Override
         public Term withCoefficients(List<Coefficient> replacement) {
             return new ConjugateSum(factor, replacement, power);
+        }
+
+        /**
+         * The sum with every exact coefficient a + b√r replaced by its conjugate a − b√r (free ones kept):
+         * c'(α) for {@link #vanishesAtSomeRoots}.
+         */
+        public ConjugateSum conjugated() {
+            return new ConjugateSum(factor, coefficients.stream().map(c -> c instanceof Coefficient.Exact e && !e.value().isRational()
+                    ? (Coefficient) new Coefficient.Exact(Surd.of(e.value().rational(), e.value().coefficient().negate(),
+                            dev.rootform.symbolic.algebra.Rational.of(e.value().radicand())))
+                    : c).toList(), power);
+        }
+
+        /**
+         * Whether c(α) = a(α) + √r·b(α) vanishes exactly at some roots α of the factor (coefficients
+         * that carry the √r of a forcing; all exact): then c(α)·c'(α) = a(α)² − r·b(α)² = 0, so the
+         * irreducible factor divides a² − r·b²; conversely, when it does, c or c' (of {@link #conjugated})
+         * vanishes at each root, and at a root where c' vanishes and c does not,
+         * |c(α)| = 2√r·|b(α)| &gt; |c'(α)| = 0. So when this holds, a root with |c(α)| &lt; |c'(α)|
+         * (at any precision that tells them apart) has c(α) = 0 exactly, and contributes no mode.
+         */
+        public boolean vanishesAtSomeRoots() {
+            List<dev.rootform.symbolic.algebra.Rational> a = new java.util.ArrayList<>();
+            List<dev.rootform.symbolic.algebra.Rational> b = new java.util.ArrayList<>();
+            dev.rootform.symbolic.algebra.Rational radicand = dev.rootform.symbolic.algebra.Rational.ONE;
+            for (Coefficient c : coefficients) {
+                if (!(c instanceof Coefficient.Exact e)) {
+                    return false;
+                }
+                a.add(e.value().rational());
+                b.add(e.value().coefficient());
+                radicand = e.value().isRational() ? radicand : dev.rootform.symbolic.algebra.Rational.of(e.value().radicand());
+            }
+            RationalPolynomial pa = RationalPolynomial.of(a);
+            RationalPolynomial pb = RationalPolynomial.of(b);
+            return !pb.isZero() && pa.multiply(pa).subtract(pb.multiply(pb).multiply(radicand)).mod(factor).isZero();
         }
     }
 }

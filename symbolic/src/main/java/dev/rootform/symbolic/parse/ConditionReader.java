@@ -4,6 +4,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -12,7 +13,7 @@ import java.util.regex.Pattern;
 final class ConditionReader {
     /** A point written as a rational multiple of π. */
     private static final Pattern PI_POINT =
-            Pattern.compile("(-?)\\s*(\\d+(?:\\.\\d+)?)?\\s*\\*?\\s*pi\\s*(?:/\\s*(\\d+))?");
+            Pattern.compile("(-?)\\s*(\\d+(?:\\.\\d+)?)?\\s*[*\u00b7]?\\s*(?:pi|\u03c0)\\s*(?:/\\s*(\\d+))?");
 
     private final Shape shape;
     private final int order;
@@ -60,13 +61,24 @@ final class ConditionReader {
         Optional<Rational> piMultiple = shape.domain() == Domain.DIFFERENTIAL
                 ? piMultiple(source.substring(point.start(), point.end())) : Optional.empty();
         if (piMultiple.isPresent()) {
-            return new Condition(derivative, piMultiple.get(), true, value);
+            return new Condition(derivative, within(piMultiple.get(), text, source, point), true, value);
         }
         Rational at = constants.rational(point, "condition point");
         if (shape.domain() == Domain.DIFFERENCE && !at.isInteger()) {
             throw new InputException("condition " + text + ": index must be an integer", source, point.start());
         }
-        return new Condition(derivative, at, value);
+        return new Condition(derivative, within(at, text, source, point), value);
+    }
+
+    /** {@code at}, unless it lies beyond {@link Limits#MAX_INDEX} (sequences) or {@link Limits#MAX_POINT} (functions). */
+    private Rational within(Rational at, String text, String source, Node point) {
+        boolean sequence = shape.domain() == Domain.DIFFERENCE;
+        long limit = sequence ? Limits.MAX_INDEX : Limits.MAX_POINT;
+        if (at.abs().compareTo(Rational.of(limit)) > 0) {
+            throw new InputException("condition " + Lexer.shorten(text) + ": " + (sequence ? "indices" : "points")
+                    + " up to " + limit + " in size are accepted", source, point.start());
+        }
+        return at;
     }
 
     /** q for a point written as a rational multiple of π: {@code pi}, {@code -2pi}, {@code 3*pi/4}, {@code pi/2}. */
@@ -76,6 +88,9 @@ final class ConditionReader {
             return Optional.empty();
         }
         Rational q = m.group(2) == null ? Rational.ONE : Rational.parse(m.group(2));
+        if (m.group(3) != null && Rational.parse(m.group(3)).isZero()) {
+            return Optional.empty();
+        }
         q = m.group(3) == null ? q : q.divide(Rational.parse(m.group(3)));
         return Optional.of(m.group(1).isEmpty() ? q : q.negate());
     }

@@ -139,13 +139,20 @@ final class Forcing {
         return new Forcing(domain, product);
     }
 
-    /** this^exponent for exponent &ge; 0. */
-    Forcing pow(int exponent) {
-        Forcing result = constant(domain, Rational.ONE);
-        for (int i = 0; i < exponent; i++) {
-            result = result.multiply(this);
-        }
-        return result;
+    /** The highest power of the variable in any term (0 for none). */
+    int degree() {
+        return terms.keySet().stream().mapToInt(Key::power).max().orElse(0);
+    }
+
+    /** The number of distinct terms. */
+    int size() {
+        return terms.size();
+    }
+
+    /** Every exact number this holds: coefficients, exponential bases or rates, frequencies. */
+    java.util.stream.Stream<Rational> numbers() {
+        return terms.entrySet().stream().flatMap(e -> java.util.stream.Stream.of(e.getValue(), e.getKey().exponential(),
+                e.getKey().frequency()));
     }
 
     /** The terms in a fixed order. */

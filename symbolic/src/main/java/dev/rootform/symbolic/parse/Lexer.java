@@ -1,6 +1,7 @@
 package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Matcher;
@@ -14,10 +15,13 @@ import java.util.regex.Pattern;
 final class Lexer {
     private static final Pattern LEIBNIZ = Pattern.compile(
             "d(?:\\^?(\\d+))?\\s*([A-Za-z]+)\\s*/\\s*d\\s*([A-Za-z]+)(?:\\^?(\\d+))?");
-    private static final String SINGLE = "+-*/^()[]!";
+    /** One-character tokens; the middle dot and the times sign, as rootform prints products, multiply too. */
+    private static final String SINGLE = "+-*/^()[]!\u00b7\u00d7";
     private static final Token.Kind[] SINGLE_KINDS = {Token.Kind.PLUS, Token.Kind.MINUS, Token.Kind.STAR,
         Token.Kind.SLASH, Token.Kind.CARET, Token.Kind.LPAREN, Token.Kind.RPAREN, Token.Kind.LBRACKET,
-        Token.Kind.RBRACKET, Token.Kind.BANG};
+        Token.Kind.RBRACKET, Token.Kind.BANG, Token.Kind.STAR, Token.Kind.STAR};
+    /** The letter π, as rootform prints it: read as the name pi. */
+    private static final char PI_LETTER = '\u03c0';
 
     private final String source;
     private final int end;
@@ -58,37 +62,62 @@ final class Lexer {
                 return leibniz(m);
             }
         }
+        if (c == PI_LETTER) {
+            return new Token(Token.Kind.NAME, Names.PI, position, position + 1, null, null);
+        }
         if (Character.isLetter(c)) {
-            return Token.of(Token.Kind.NAME, run(Character::isLetter), position);
+            return Token.of(Token.Kind.NAME, run(ch -> Character.isLetter(ch) && ch != PI_LETTER), position);
         }
         if (c == '\'') {
             return Token.of(Token.Kind.PRIMES, run(ch -> ch == '\''), position);
         }
         if (c == '=') {
-            boolean twice = position + 1 < end && source.charAt(position + 1) == '=';
-            return Token.of(Token.Kind.EQUALS, twice ? "==" : "=", position);
+            if (position + 1 < end && source.charAt(position + 1) == '=') {
+                throw new InputException("'==' is not an equation sign: write '=' for an equation", source, position);
+            }
+            return Token.of(Token.Kind.EQUALS, "=", position);
         }
         int single = SINGLE.indexOf(c);
         if (single < 0) {
-            throw new InputException("unexpected character '" + c + "'", source, position);
+            String shown = c >= 0x20 && c < 0x7f ? "'" + c + "'" : String.format("U+%04X", (int) c);
+            throw new InputException("unexpected character " + shown, source, position);
         }
         return Token.of(SINGLE_KINDS[single], String.valueOf(c), position);
     }
 
+    /** A number literal, read and bounded by {@link NumberLiteral}. */
     private Token number() {
         NumberLiteral n = NumberLiteral.read(source, position, end, "number");
         return new Token(Token.Kind.NUMBER, n.text(), position, n.end(), n.value(), null);
     }
 
     private Token leibniz(Matcher m) {
-        int top = m.group(1) == null ? 1 : Integer.parseInt(m.group(1));
-        int bottom = m.group(4) == null ? 1 : Integer.parseInt(m.group(4));
+        int top = order(m.group(1), m);
+        int bottom = order(m.group(4), m);
         if (top != bottom) {
-            throw new InputException("derivative " + m.group() + ": orders " + top + " and " + bottom + " differ",
+            throw new InputException("derivative " + shorten(m.group()) + ": orders " + top + " and " + bottom + " differ",
                     source, position);
         }
         Token.Leibniz parts = new Token.Leibniz(m.group(2), m.group(3), top);
         return new Token(Token.Kind.LEIBNIZ, m.group(), position, m.end(), null, parts);
+    }
+
+    /** The order written in a Leibniz derivative (1 when absent), at most {@link Limits#MAX_ORDER}. */
+    private int order(String digits, Matcher m) {
+        if (digits == null) {
+            return 1;
+        }
+        String significant = digits.replaceFirst("^0+(?=.)", "");
+        if (significant.length() > 9 || Integer.parseInt(significant) > Limits.MAX_ORDER) {
+            throw new InputException("derivative " + shorten(m.group()) + ": order " + shorten(significant)
+                    + " is above the limit " + Limits.MAX_ORDER, source, position);
+        }
+        return Integer.parseInt(significant);
+    }
+
+    /** {@code text}, cut to 40 characters for a message. */
+    static String shorten(String text) {
+        return text.length() <= 40 ? text : text.substring(0, 37) + "...";
     }
 
     private String run(java.util.function.IntPredicate member) {

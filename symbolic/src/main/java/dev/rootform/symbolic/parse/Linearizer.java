@@ -4,6 +4,8 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm.Oscillation;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
+import java.math.BigInteger;
 import java.util.Optional;
 
 /**
@@ -12,8 +14,8 @@ import java.util.Optional;
  * naming the offending term and pointing at its start.
  */
 final class Linearizer {
-    /** Bound on shifts and exponents, which keeps expansions small. */
-    private static final int MAX_INTEGER = 1000;
+    /** Bound on integer exponents; the sizes of the results are bounded by {@link Limits}. */
+    private static final int MAX_EXPONENT = 10_000;
 
     private final String source;
     private final Shape shape;
@@ -27,7 +29,20 @@ final class Linearizer {
         this.zero = Forcing.zero(shape.domain());
     }
 
+    /**
+     * The value of {@code node}, refused when it exceeds a size of {@link Limits} (checked at every
+     * node, so that no intermediate result grows beyond them).
+     */
     Value evaluate(Node node) {
+        Value value = evaluateNode(node);
+        bounded(value.forcing(), node);
+        if (value.unknown().values().stream().anyMatch(Linearizer::huge)) {
+            throw tooLarge(node);
+        }
+        return value;
+    }
+
+    private Value evaluateNode(Node node) {
         if (node instanceof Node.Num num) {
             return constant(num.value());
         }
@@ -71,7 +86,10 @@ final class Linearizer {
         if (!intercept.isInteger()) {
             throw error("non-integer shift " + text(term) + " is out of scope", term);
         }
-        return small(intercept, term);
+        if (intercept.abs().compareTo(Rational.of(Limits.MAX_ORDER)) > 0) {
+            throw error("shift " + text(term) + " is above the order limit " + Limits.MAX_ORDER, term);
+        }
+        return intercept.toBigInteger().intValueExact();
     }
 
     /** The value of a constant expression such as {@code -3/4} or {@code 2^10}. */
@@ -170,10 +188,59 @@ final class Linearizer {
                     + " (rootform solves constant-coefficient equations)", b));
             return linear.scale(c);
         }
-        if (left.forcing().mixesFrequencyKinds(right.forcing())) {
-            throw error(text(b) + ": frequencies must be all rational or all rational multiples of pi", b);
+        return Value.of(times(left.forcing(), right.forcing(), b));
+    }
+
+    /** The product of two forcings, within the limits of {@link #bounded}. */
+    private Forcing times(Forcing left, Forcing right, Node term) {
+        if (left.mixesFrequencyKinds(right)) {
+            throw error(text(term) + ": frequencies must be all rational or all rational multiples of pi", term);
         }
-        return Value.of(left.forcing().multiply(right.forcing()));
+        if (left.size() * right.size() > Limits.MAX_FORCING_TERMS * Limits.MAX_FORCING_TERMS
+                || left.degree() + right.degree() > Limits.MAX_FORCING_DEGREE) {
+            throw tooLarge(term);
+        }
+        return bounded(left.multiply(right), term);
+    }
+
+    /**
+     * {@code forcing}, unless it has more than {@link Limits#MAX_FORCING_TERMS} terms, a power of the
+     * variable above {@link Limits#MAX_FORCING_DEGREE} or a number of more than
+     * {@link Limits#MAX_NUMBER_DIGITS} digits.
+     */
+    private Forcing bounded(Forcing forcing, Node term) {
+        if (forcing.size() > Limits.MAX_FORCING_TERMS || forcing.degree() > Limits.MAX_FORCING_DEGREE
+                || forcing.numbers().anyMatch(Linearizer::huge)) {
+            throw tooLarge(term);
+        }
+        return forcing;
+    }
+
+    private InputException tooLarge(Node term) {
+        return error(shorten(text(term)) + " is too large: at most " + Limits.MAX_FORCING_TERMS + " forcing terms, powers up to "
+                + shape.variable() + "^" + Limits.MAX_FORCING_DEGREE + " and numbers of " + Limits.MAX_NUMBER_DIGITS
+                + " digits are accepted", term);
+    }
+
+    /** True for a number with more than {@link Limits#MAX_NUMBER_DIGITS} digits above or below the line. */
+    private static boolean huge(Rational r) {
+        return Math.max(log10(r.numerator()), log10(r.denominator())) >= Limits.MAX_NUMBER_DIGITS;
+    }
+
+    /** log10 |x| for x ≠ 0, of any size (0 for 0). */
+    private static double log10(BigInteger x) {
+        int shift = Math.max(0, x.abs().bitLength() - 60);
+        double leading = x.abs().shiftRight(shift).doubleValue();
+        return leading == 0 ? 0 : Math.log10(leading) + shift * Math.log10(2);
+    }
+
+    /** c^n for a constant c, refused when the result would exceed {@link Limits#MAX_NUMBER_DIGITS} digits. */
+    private Rational power(Rational c, int n, Node term) {
+        double digits = Math.max(log10(c.numerator()), log10(c.denominator())) * Math.abs((double) n);
+        if (digits >= Limits.MAX_NUMBER_DIGITS) {
+            throw tooLarge(term);
+        }
+        return c.pow(n);
     }
 
     private Value quotient(Node.Binary b) {
@@ -208,14 +275,21 @@ final class Linearizer {
             throw error(text(b) + " is out of scope", b);
         }
         int n = small(k.get(), b);
-        if (n >= 0) {
-            return Value.of(base.forcing().pow(n));
+        Optional<Rational> c = base.constantValue();
+        if (c.isPresent()) {
+            if (c.get().isZero() && n < 0) {
+                throw error("division by zero", b);
+            }
+            return constant(power(c.get(), n, b));
         }
-        Rational c = base.constantValue().orElseThrow(() -> error(text(b) + " is out of scope", b));
-        if (c.isZero()) {
-            throw error("division by zero", b);
+        if (n < 0) {
+            throw error(text(b) + " is out of scope", b);
         }
-        return constant(c.pow(n));
+        Forcing result = Forcing.constant(shape.domain(), Rational.ONE);
+        for (int i = 0; i < n; i++) {
+            result = times(result, base.forcing(), b);
+        }
+        return Value.of(result);
     }
 
     /** c^(a·n + b) for a sequence, with a and b integers. */
@@ -233,8 +307,8 @@ final class Linearizer {
         Forcing.Linear linear = exponent.asLinear()
                 .filter(l -> l.slope().isInteger() && l.intercept().isInteger() && !l.timesPi())
                 .orElseThrow(() -> error(text(b) + " is out of scope", b));
-        Rational factor = c.get().pow(small(linear.intercept(), b));
-        Rational ratio = c.get().pow(small(linear.slope(), b));
+        Rational factor = power(c.get(), small(linear.intercept(), b), b);
+        Rational ratio = power(c.get(), small(linear.slope(), b), b);
         return Value.of(Forcing.exponential(shape.domain(), ratio).scale(factor));
     }
 
@@ -263,10 +337,10 @@ final class Linearizer {
         return Value.of(Forcing.oscillation(shape.domain(), kind, linear.slope(), linear.timesPi()));
     }
 
-    /** The integer {@code value} as an int, if it is small enough to use as a shift or an exponent. */
+    /** The integer {@code value} as an int, if it is small enough to use as an exponent. */
     private int small(Rational value, Node term) {
-        if (value.abs().compareTo(Rational.of(MAX_INTEGER)) > 0) {
-            throw error(text(term) + ": number too large", term);
+        if (value.abs().compareTo(Rational.of(MAX_EXPONENT)) > 0) {
+            throw error(shorten(text(term)) + ": exponent above " + MAX_EXPONENT, term);
         }
         return value.toBigInteger().intValueExact();
     }
@@ -285,6 +359,10 @@ final class Linearizer {
 
     private InputException error(String message, Node node) {
         return new InputException(message, source, node.start());
+    }
+
+    private static String shorten(String text) {
+        return Lexer.shorten(text);
     }
 
     private String text(Node node) {

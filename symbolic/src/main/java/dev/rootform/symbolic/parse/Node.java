@@ -1,7 +1,12 @@
 package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.algebra.Rational;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 import java.util.stream.Stream;
 
 /**
@@ -19,9 +24,32 @@ sealed interface Node {
     /** Direct subexpressions. */
     List<Node> children();
 
-    /** This node and all its descendants, parents first. */
+    /** This node and all its descendants, parents first (walked without recursion, so deep trees are safe). */
     default Stream<Node> descendants() {
-        return Stream.concat(Stream.of(this), children().stream().flatMap(Node::descendants));
+        List<Node> all = new ArrayList<>();
+        Deque<Node> pending = new ArrayDeque<>(List.of(this));
+        while (!pending.isEmpty()) {
+            Node node = pending.pop();
+            all.add(node);
+            List<Node> children = node.children();
+            for (int i = children.size() - 1; i >= 0; i--) {
+                pending.push(children.get(i));
+            }
+        }
+        return all.stream();
+    }
+
+    /** The first node found at {@code depth} levels below this one (this is level 0), if the tree is that deep. */
+    default Optional<Node> atDepth(int depth) {
+        Deque<Map.Entry<Node, Integer>> pending = new ArrayDeque<>(List.of(Map.entry(this, 0)));
+        while (!pending.isEmpty()) {
+            Map.Entry<Node, Integer> entry = pending.pop();
+            if (entry.getValue() >= depth) {
+                return Optional.of(entry.getKey());
+            }
+            entry.getKey().children().forEach(child -> pending.push(Map.entry(child, entry.getValue() + 1)));
+        }
+        return Optional.empty();
     }
 
     /** A number literal. */

@@ -3,6 +3,7 @@ package dev.rootform.symbolic.parse;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
 import java.util.ArrayList;
 import java.util.List;
@@ -34,6 +35,9 @@ final class NormalForm {
         if (high == low) {
             throw new InputException("order 0: " + (recurrence ? "no shift of " : "no derivative of ")
                     + shape.function() + " besides a multiple of it", source, position);
+        }
+        if (high - low > Limits.MAX_ORDER) {
+            throw new InputException("order " + (high - low) + " is above the limit " + Limits.MAX_ORDER, source, position);
         }
         List<Rational> coefficients = new ArrayList<>();
         for (int j = low; j <= high; j++) {

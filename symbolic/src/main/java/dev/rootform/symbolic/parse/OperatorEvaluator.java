@@ -4,6 +4,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 
 /**
  * Reads an operator expression such as {@code (D+1)^2 (D^2+4)} or {@code E^2 - E - 1} as an exact
@@ -59,7 +60,9 @@ final class OperatorEvaluator {
             case SUB:
                 return left.subtract(polynomial(b.right()));
             case MUL:
-                return left.multiply(polynomial(b.right()));
+                RationalPolynomial right = polynomial(b.right());
+                requireOrder(b, left.degree() + right.degree());
+                return left.multiply(right);
             case DIV:
                 Rational divisor = constant(b.right(), "divisor");
                 if (divisor.isZero()) {
@@ -72,7 +75,17 @@ final class OperatorEvaluator {
                     throw new InputException("operator exponent " + text(b.right())
                             + " must be a whole number up to 64", source, b.right().start());
                 }
-                return left.pow(exponent.toBigInteger().intValueExact());
+                int k = exponent.toBigInteger().intValueExact();
+                requireOrder(b, left.degree() * k);
+                return left.pow(k);
+        }
+    }
+
+    /** @throws InputException when an operator of {@code degree} would exceed {@link Limits#MAX_ORDER} */
+    private void requireOrder(Node node, int degree) {
+        if (degree > Limits.MAX_ORDER) {
+            throw new InputException("operator " + Lexer.shorten(text(node)) + " has degree " + degree + ", above the order limit "
+                    + Limits.MAX_ORDER, source, node.start());
         }
     }
 

@@ -1,6 +1,8 @@
 package dev.rootform.symbolic.parse;
 
+import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.parse.Node.Binary.Op;
 import dev.rootform.symbolic.parse.Token.Kind;
 import java.util.List;
@@ -18,6 +20,8 @@ final class Parser {
     private final List<Token> tokens;
     private final String variable;
     private int next;
+    /** How many expressions, signs and exponents enclose the token being read. */
+    private int nesting;
 
     /**
      * @param source the whole text being read
@@ -45,7 +49,16 @@ final class Parser {
         if (!peek().is(Kind.END)) {
             throw unexpected(peek());
         }
-        return new Equality(left, right);
+        return new Equality(shallow(left), shallow(right));
+    }
+
+    /** {@code side}, unless its tree is deeper than {@link Limits#MAX_EXPRESSION_DEPTH}. */
+    private Node shallow(Node side) {
+        side.atDepth(Limits.MAX_EXPRESSION_DEPTH + 1).ifPresent(deep -> {
+            throw new InputException("expression too long: more than " + Limits.MAX_EXPRESSION_DEPTH
+                    + " operations one after another", source, deep.start());
+        });
+        return side;
     }
 
     /** Reads the whole range as one expression (no {@code =}). */
@@ -58,6 +71,7 @@ final class Parser {
     }
 
     private Node expression() {
+        enter();
         int start = peek().start();
         Node node = term();
         while (peek().is(Kind.PLUS) || peek().is(Kind.MINUS)) {
@@ -65,7 +79,16 @@ final class Parser {
             Node right = term();
             node = new Node.Binary(op, node, right, start, consumedEnd());
         }
+        nesting--;
         return node;
+    }
+
+    /** One level deeper, refused beyond {@link Limits#MAX_NESTING} (so reading never exhausts the stack). */
+    private void enter() {
+        if (++nesting > Limits.MAX_NESTING) {
+            throw new InputException("nested too deeply: more than " + Limits.MAX_NESTING
+                    + " levels of parentheses, signs or exponents", source, peek().start());
+        }
     }
 
     private Node term() {
@@ -78,6 +101,9 @@ final class Parser {
                 op = advance().is(Kind.STAR) ? Op.MUL : Op.DIV;
                 right = unary();
             } else if (startsPrimary(peek())) {
+                if (peek().is(Kind.NUMBER) && tokens.get(next - 1).is(Kind.NUMBER)) {
+                    throw new InputException("two numbers side by side: write '*' to multiply them", source, peek().start());
+                }
                 op = Op.MUL;
                 right = power();
             } else {
@@ -88,14 +114,12 @@ final class Parser {
     }
 
     private Node unary() {
-        if (peek().is(Kind.MINUS)) {
-            Token minus = advance();
+        if (peek().is(Kind.MINUS) || peek().is(Kind.PLUS)) {
+            Token sign = advance();
+            enter();
             Node operand = unary();
-            return new Node.Negation(operand, minus.start(), consumedEnd());
-        }
-        if (peek().is(Kind.PLUS)) {
-            advance();
-            return unary();
+            nesting--;
+            return sign.is(Kind.PLUS) ? operand : new Node.Negation(operand, sign.start(), consumedEnd());
         }
         return power();
     }
@@ -111,7 +135,9 @@ final class Parser {
             return base;
         }
         advance();
+        enter();
         Node exponent = unary();
+        nesting--;
         return new Node.Binary(Op.POW, base, exponent, start, consumedEnd());
     }
 
@@ -166,6 +192,10 @@ final class Parser {
                 && at(2).number().isInteger() && at(3).is(Kind.RPAREN);
         if (!braced || Names.isReserved(name, variable)) {
             return 0;
+        }
+        if (at(2).number().abs().compareTo(Rational.of(Limits.MAX_ORDER)) > 0) {
+            throw new InputException("derivative " + name + "^(" + Lexer.shorten(at(2).text()) + "): order above the limit "
+                    + Limits.MAX_ORDER, source, peek().start());
         }
         int order = at(2).number().toBigInteger().intValueExact();
         next += 4;

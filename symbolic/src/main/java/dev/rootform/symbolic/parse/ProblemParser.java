@@ -4,6 +4,7 @@ import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import java.util.ArrayList;
@@ -41,6 +42,7 @@ public final class ProblemParser {
      */
     public static Problem parse(String text, List<String> given, String variable) {
         String source = text == null ? "" : text;
+        requireShort(source);
         List<int[]> segments = segments(source);
         if (segments.isEmpty()) {
             throw new InputException("empty input", source, 0);
@@ -58,6 +60,7 @@ public final class ProblemParser {
             conditions.add(reader.read(source, segment[0], segment[1]));
         }
         for (String condition : given == null ? List.<String>of() : given) {
+            requireShort(condition);
             for (int[] segment : segments(condition)) {
                 conditions.add(reader.read(condition, segment[0], segment[1]));
             }
@@ -81,10 +84,19 @@ public final class ProblemParser {
         if (source.isBlank()) {
             throw new InputException("empty input", source, 0);
         }
+        requireShort(source);
         String variable = domain == Domain.DIFFERENCE ? Names.DEFAULT_INDEX : Names.DEFAULT_TIME;
         Node node = new Parser(source, 0, source.length(), variable).expressionOnly();
         Value value = new Linearizer(source, new Shape(domain, "", variable)).evaluate(node);
         return value.forcing().toTerms();
+    }
+
+    /** @throws InputException for a text longer than {@link Limits#MAX_INPUT_LENGTH} characters */
+    private static void requireShort(String text) {
+        if (text.length() > Limits.MAX_INPUT_LENGTH) {
+            throw new InputException("input of " + text.length() + " characters: at most " + Limits.MAX_INPUT_LENGTH
+                    + " are accepted", text.substring(0, 60), -1);
+        }
     }
 
     /** The [begin, end) ranges between semicolons that contain more than white space. */

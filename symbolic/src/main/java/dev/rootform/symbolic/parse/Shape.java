@@ -69,8 +69,10 @@ record Shape(Domain domain, String function, String variable) {
         Map<String, Node> bare = new LinkedHashMap<>();
         for (Node node : nodes) {
             if (node instanceof Node.Derivative d) {
+                refuseFixedName(source, d.name(), d);
                 applied.putIfAbsent(d.name(), d);
             } else if (node instanceof Node.Indexed i) {
+                refuseFixedName(source, i.name(), i);
                 applied.putIfAbsent(i.name(), i);
             } else if (node instanceof Node.Call c && !Names.isReserved(c.name(), variable)) {
                 applied.putIfAbsent(c.name(), c);
@@ -89,6 +91,21 @@ record Shape(Domain domain, String function, String variable) {
                     + ": one unknown function expected", source, second.start());
         }
         return names.get(0);
+    }
+
+    /**
+     * A derivative or sequence of a name with a fixed meaning (Euler's e, π, the operators D and E)
+     * would be written like that constant in the answer ({@code e(t) = 1 - e^(-t)}): refused.
+     */
+    private static void refuseFixedName(String source, String name, Node node) {
+        if (name.equals(Names.EULER)) {
+            throw new InputException("e is Euler's number and cannot name the unknown function; use another name such as y",
+                    source, node.start());
+        }
+        if (name.equals(Names.PI) || name.equals(Names.DERIVATIVE_OPERATOR) || name.equals(Names.SHIFT_OPERATOR)) {
+            throw new InputException(name + " has a fixed meaning and cannot name the unknown function; use another name such as y",
+                    source, node.start());
+        }
     }
 
     private static String text(String source, Node node) {

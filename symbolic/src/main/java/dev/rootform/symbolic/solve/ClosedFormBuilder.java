@@ -4,7 +4,6 @@ import dev.rootform.symbolic.algebra.Cyclotomic;
 import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
-import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.ExactRoot;
@@ -20,11 +19,7 @@ import java.util.function.Supplier;
 /**
  * Builds the real closed forms of a solve (fitted, general with free constants, general plus a
  * particular solution) and lists the exact roots. Exact components become the real closed-form
- * tree: linear factors give exponentials or powers, quadratic factors give surd roots or (for
- * complex pairs) cos/sin terms with no i, and factors of degree &ge; 3 stay as conjugate sums over
- * their roots. For f = x² + bx + c and
- * c(α) = p + qα: real roots (-b ± √D)/2 take coefficients p - qb/2 ± (q/2)√D; complex roots a ± iω
- * combine to 2(p + qa)·cos - 2qω·sin.
+ * tree, factor by factor and power by power ({@link RealTerms}).
  *
  * @since 0.1
  */
@@ -58,8 +53,8 @@ final class ClosedFormBuilder {
                 int power = i;
                 RationalPolynomial root = radical.map(r -> r.radical().components().get(index).coefficients().get(power))
                         .orElse(RationalPolynomial.ZERO);
-                List<Term> terms = root.isZero() ? terms(eq.domain(), c.factor().polynomial(), i, ci)
-                        : List.of(radicalTerm(c.factor().polynomial(), i, ci, root, radical.get().radicand()));
+                List<Term> terms = root.isZero() ? RealTerms.of(eq.domain(), c.factor().polynomial(), i, ci)
+                        : radicalTerms(eq.domain(), c.factor().polynomial(), i, ci, root, radical.get().radicand());
                 (i < homogeneous ? transients : particular).addAll(terms);
             }
         }
@@ -71,18 +66,19 @@ final class ClosedFormBuilder {
                 s.leadingValues(), all, List.of(), transients.size());
     }
 
-    /** (c(α) + √r·d(α))·v^i·α^v as an exponential (linear f) or a conjugate sum with surd coefficients. */
-    private static Term radicalTerm(RationalPolynomial f, int i, RationalPolynomial c, RationalPolynomial d, int r) {
+    /**
+     * (c(α) + √r·d(α))·v^i·α^v as real terms with surd coefficients a + b√r ({@link #terms(Domain,
+     * RationalPolynomial, int, List)}), or as a conjugate sum with surd coefficients where a second
+     * square root would be needed.
+     */
+    private static List<Term> radicalTerms(Domain domain, RationalPolynomial f, int i, RationalPolynomial c,
+            RationalPolynomial d, int r) {
         Rational radicand = Rational.of(r);
-        if (f.degree() == 1) {
-            return new Term.Exponential(exact(Surd.of(c.coefficient(0), d.coefficient(0), radicand)), i,
-                    Surd.of(f.coefficient(0).negate()));
-        }
-        List<Coefficient> cs = new ArrayList<>();
+        List<Surd> cs = new ArrayList<>();
         for (int j = 0; j < f.degree(); j++) {
-            cs.add(exact(Surd.of(c.coefficient(j), d.coefficient(j), radicand)));
+            cs.add(Surd.of(c.coefficient(j), d.coefficient(j), radicand));
         }
-        return new Term.ConjugateSum(f, cs, i);
+        return RealTerms.of(domain, f, i, cs);
     }
 
     /** The general solution: basis terms with free constants, followed by a particular solution's terms. */
@@ -111,7 +107,7 @@ final class ClosedFormBuilder {
                 continue;
             }
             for (int i = 0; i < f.multiplicity(); i++) {
-                terms.addAll(freeTerms(eq.domain(), f.polynomial(), i, next));
+                terms.addAll(RealTerms.free(eq.domain(), f.polynomial(), i, next));
             }
         }
         return new ClosedForm(eq.domain(), eq.function(), eq.variable(), Rational.ZERO, zeros, List.of(), terms, names);
@@ -126,13 +122,13 @@ final class ClosedFormBuilder {
             if (p.degree() == 1) {
                 roots.add(new ExactRoot.Explicit(Surd.of(p.coefficient(0).negate()), Surd.of(Rational.ZERO), m));
             } else if (p.degree() == 2) {
-                Quadratic q = new Quadratic(p);
+                RealTerms.Quadratic q = new RealTerms.Quadratic(p);
                 if (q.real()) {
-                    roots.add(new ExactRoot.Explicit(Surd.of(q.a, Rational.of(1, 2), q.disc), Surd.of(Rational.ZERO), m));
-                    roots.add(new ExactRoot.Explicit(Surd.of(q.a, Rational.of(-1, 2), q.disc), Surd.of(Rational.ZERO), m));
+                    roots.add(new ExactRoot.Explicit(Surd.of(q.a(), Rational.of(1, 2), q.disc()), Surd.of(Rational.ZERO), m));
+                    roots.add(new ExactRoot.Explicit(Surd.of(q.a(), Rational.of(-1, 2), q.disc()), Surd.of(Rational.ZERO), m));
                 } else {
-                    roots.add(new ExactRoot.Explicit(Surd.of(q.a), q.omega(), m));
-                    roots.add(new ExactRoot.Explicit(Surd.of(q.a), q.omega().negate(), m));
+                    roots.add(new ExactRoot.Explicit(Surd.of(q.a()), q.omega(), m));
+                    roots.add(new ExactRoot.Explicit(Surd.of(q.a()), q.omega().negate(), m));
                 }
             } else if (Cyclotomic.order(p).isPresent()) {
                 int order = Cyclotomic.order(p).getAsInt();
@@ -148,102 +144,5 @@ final class ClosedFormBuilder {
             }
         }
         return roots;
-    }
-
-    /** f = x² + bx + c with a = -b/2 and discriminant D = b² - 4c. */
-    private static final class Quadratic {
-        final Rational a;
-        final Rational disc;
-        final Rational c;
-
-        Quadratic(RationalPolynomial f) {
-            Rational b = f.coefficient(1);
-            c = f.coefficient(0);
-            a = b.multiply(Rational.of(-1, 2));
-            disc = b.multiply(b).subtract(c.multiply(4));
-        }
-
-        boolean real() {
-            return disc.signum() > 0;
-        }
-
-        /** ω = √(-D)/2 for complex roots a ± iω. */
-        Surd omega() {
-            return Surd.of(Rational.ZERO, Rational.of(1, 2), disc.negate());
-        }
-    }
-
-    /** The terms of c(α)·v^i over the roots of f, with c(α) = Σ_j c_j α^j. */
-    private static List<Term> terms(Domain domain, RationalPolynomial f, int i, RationalPolynomial c) {
-        if (f.degree() == 1) {
-            return List.of(new Term.Exponential(exact(Surd.of(c.coefficient(0))), i, Surd.of(f.coefficient(0).negate())));
-        }
-        if (f.degree() > 2) {
-            List<Coefficient> cs = new ArrayList<>();
-            for (int j = 0; j <= c.degree(); j++) {
-                cs.add(exact(Surd.of(c.coefficient(j))));
-            }
-            return List.of(new Term.ConjugateSum(f, cs, i));
-        }
-        Quadratic q = new Quadratic(f);
-        Rational half = c.coefficient(1).multiply(Rational.of(1, 2));
-        Rational center = c.coefficient(0).add(c.coefficient(1).multiply(q.a));
-        if (q.real()) {
-            return List.of(
-                    new Term.Exponential(exact(Surd.of(center, half, q.disc)), i, Surd.of(q.a, Rational.of(1, 2), q.disc)),
-                    new Term.Exponential(exact(Surd.of(center, half.negate(), q.disc)), i, Surd.of(q.a, Rational.of(-1, 2), q.disc)));
-        }
-        Coefficient cosine = exact(Surd.of(center.multiply(2)));
-        Coefficient sine = exact(Surd.of(Rational.ZERO, c.coefficient(1).negate(), q.disc.negate()));
-        return List.of(oscillating(domain, q, cosine, sine, i));
-    }
-
-    private static List<Term> freeTerms(Domain domain, RationalPolynomial f, int i, Supplier<Coefficient> next) {
-        if (f.degree() == 1) {
-            return List.of(new Term.Exponential(next.get(), i, Surd.of(f.coefficient(0).negate())));
-        }
-        if (f.degree() > 2) {
-            List<Coefficient> cs = new ArrayList<>();
-            for (int j = 0; j < f.degree(); j++) {
-                cs.add(next.get());
-            }
-            return List.of(new Term.ConjugateSum(f, cs, i));
-        }
-        Quadratic q = new Quadratic(f);
-        if (q.real()) {
-            return List.of(new Term.Exponential(next.get(), i, Surd.of(q.a, Rational.of(1, 2), q.disc)),
-                    new Term.Exponential(next.get(), i, Surd.of(q.a, Rational.of(-1, 2), q.disc)));
-        }
-        Coefficient cosine = next.get();
-        return List.of(oscillating(domain, q, cosine, next.get(), i));
-    }
-
-    private static Term oscillating(Domain domain, Quadratic q, Coefficient cosine, Coefficient sine, int i) {
-        if (domain == Domain.DIFFERENTIAL) {
-            return new Term.Oscillating(cosine, sine, i, Surd.of(q.a), new Angle.Value(q.omega()));
-        }
-        return new Term.Oscillating(cosine, sine, i, Surd.sqrt(q.c), argument(q.a, q.c));
-    }
-
-    /** arg(a + iω) in (0, π) for |a + iω|² = c: a rational multiple of π when cos² is 0, 1/4, 1/2 or 3/4. */
-    private static Angle argument(Rational a, Rational c) {
-        Rational cos2 = a.multiply(a).divide(c);
-        int sign = a.signum();
-        Rational[][] table = {
-            {Rational.ZERO, Rational.of(1, 2), Rational.of(1, 2)},
-            {Rational.of(1, 4), Rational.of(1, 3), Rational.of(2, 3)},
-            {Rational.of(1, 2), Rational.of(1, 4), Rational.of(3, 4)},
-            {Rational.of(3, 4), Rational.of(1, 6), Rational.of(5, 6)},
-        };
-        for (Rational[] row : table) {
-            if (row[0].equals(cos2)) {
-                return new Angle.PiMultiple(sign >= 0 ? row[1] : row[2]);
-            }
-        }
-        return new Angle.ArcCos(Surd.of(Rational.ZERO, a.divide(c), c));
-    }
-
-    private static Coefficient exact(Surd s) {
-        return new Coefficient.Exact(s);
     }
 }

@@ -83,9 +83,15 @@ public final class ConditionFitter {
      * The condition number κ_∞(A) = ‖A‖_∞·‖A⁻¹‖_∞ of the fitting {@link #matrix}, exactly: relative
      * errors in the condition values (measured in the max norm) can be amplified by up to this factor
      * in the initial state, and so in the fitted constants. 1 when the conditions are the initial
-     * values themselves; empty when the conditions do not determine the solution.
+     * values themselves; empty when the conditions do not determine the solution, and for a
+     * differential equation's conditions at several points or at a multiple of π (a boundary-value
+     * problem, whose system is not this one).
      */
     public static Optional<Rational> conditionNumber(LinearEquation equation, List<Condition> conditions) {
+        if (equation.domain() == Domain.DIFFERENTIAL
+                && conditions.stream().anyMatch(c -> c.atTimesPi() || !c.samePoint(conditions.get(0)))) {
+            return Optional.empty();
+        }
         List<List<Rational>> a = matrix(equation, conditions);
         return LinearSystem.inverse(a).map(inverse -> maxRowSum(a).multiply(maxRowSum(inverse)));
     }

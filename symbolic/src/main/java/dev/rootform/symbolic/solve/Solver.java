@@ -9,6 +9,8 @@ import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
+import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import dev.rootform.symbolic.work.Deadline;
@@ -26,6 +28,9 @@ import java.util.Optional;
  * @since 0.1
  */
 public final class Solver {
+    /** Highest order of χ times the forcing's annihilator: the equation's limit plus one forcing term's. */
+    static final int MAX_OPERATOR_ORDER = Limits.MAX_ORDER + 2 * (Limits.MAX_FORCING_DEGREE + 1);
+
     private Solver() {
     }
 
@@ -43,6 +48,11 @@ public final class Solver {
         List<Factor> factors = JasFactorizer.factor(chi);
         boolean trial = eq.domain() == Domain.DIFFERENTIAL && eq.forcing().stream().anyMatch(Solver::transcendentalFrequency);
         List<Factor> operatorFactors = merge(factors, eq.isHomogeneous() || trial ? List.of() : Annihilator.of(eq));
+        int order = operatorFactors.stream().mapToInt(f -> f.polynomial().degree() * f.multiplicity()).sum();
+        if (order > MAX_OPERATOR_ORDER) {
+            throw new InputException("the equation with its forcing has order " + order + " (the forcing adds "
+                    + (order - chi.degree()) + "): at most " + MAX_OPERATOR_ORDER + " is accepted", "", -1);
+        }
         int radicand = eq.domain() == Domain.DIFFERENCE && !eq.isHomogeneous() ? ForcingValues.radicand(eq) : 1;
         Operator mu = new Operator(product(chi.leadingCoefficient(), operatorFactors), operatorFactors, factors, radicand);
         if (trial) {
@@ -97,7 +107,7 @@ public final class Solver {
     /** The checks of the √r part, named as such. */
     private static List<Check> radicalChecks(ExactSolution radical, List<Condition> zero, int radicand) {
         return ExactVerifier.verify(radical, zero).stream()
-                .map(c -> new Check(c.name() + " (√" + radicand + " part)", c.passed(), c.detail())).toList();
+                .map(c -> new Check(c.name() + " (√" + radicand + " part)", c.passed(), c.detail(), c.ran())).toList();
     }
 
     /**
@@ -126,8 +136,9 @@ public final class Solver {
         ClosedForm general = ClosedFormBuilder.general(eq, factors);
         List<Check> checks = new ArrayList<>(List.of(basisCheck(eq, factors)));
         if (eq.isHomogeneous()) {
-            return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), general, general, Optional.empty(),
-                    Optional.empty(), Optional.empty(), false, checks);
+            return exactBoundary(problem, chi, mu, general, general).orElseGet(() -> new Solution(problem, chi, factors,
+                    ClosedFormBuilder.roots(factors), general, general, Optional.empty(), Optional.empty(), Optional.empty(), false,
+                    checks));
         }
         List<Condition> zero = zeroConditions(eq);
         ExactSolution particular = withoutTransient(fitted(eq, mu, zero, ForcingPart.RATIONAL), factors);
@@ -138,9 +149,26 @@ public final class Solver {
             checks.addAll(radicalChecks(radical, List.of(), mu.radicand()));
             both = Optional.of(new RadicalSolution(mu.radicand(), particular, radical));
         }
-        return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors),
-                ClosedFormBuilder.withParticular(general, ClosedFormBuilder.fitted(particular, both, factors)), general,
-                Optional.empty(), Optional.of(particular), Optional.empty(), false, checks);
+        ClosedForm form = ClosedFormBuilder.withParticular(general, ClosedFormBuilder.fitted(particular, both, factors));
+        return exactBoundary(problem, chi, mu, general, form).orElseGet(() -> new Solution(problem, chi, factors,
+                ClosedFormBuilder.roots(factors), form, general, Optional.empty(), Optional.of(particular), Optional.empty(), false,
+                checks));
+    }
+
+    /**
+     * The exact answer to conditions of a differential equation at several points or at a multiple of
+     * π, when the constants are exact ({@link ExactBoundary}); empty when there are no conditions or an
+     * entry of their system is not exact.
+     */
+    private static Optional<Solution> exactBoundary(Problem problem, RationalPolynomial chi, Operator mu, ClosedForm general,
+            ClosedForm form) {
+        LinearEquation eq = problem.equation();
+        if (problem.conditions().isEmpty() || eq.domain() != Domain.DIFFERENTIAL) {
+            return Optional.empty();
+        }
+        return ExactBoundary.solve(problem, chi, mu.characteristic(), general, form,
+                conditions -> fitted(eq, mu, conditions, ForcingPart.RATIONAL),
+                conditions -> fitted(eq.homogeneous(), mu, conditions, ForcingPart.RATIONAL));
     }
 
     /** {@link ConditionFitter#fit}, with a free solution attached when the conditions leave one. */

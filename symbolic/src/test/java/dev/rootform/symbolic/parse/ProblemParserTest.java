@@ -44,7 +44,6 @@ class ProblemParserTest {
         "(D^2 + 2D + 5) y = 0               | 5 2 1",
         "D^2 y + 2 D y + 5y = 0             | 5 2 1",
         "d2y/dt2 + 2 dy/dt + 5y = 0         | 5 2 1",
-        "d^2y/dt^2 + 2dy/dt + 5 y == 0      | 5 2 1",
         "y''(t) + 2y'(t) + 5y(t) = 0        | 5 2 1",
         "2y'' = -3y' - y                    | 1 3 2",
         "y^(4) - y = 0                      | -1 0 0 0 1",
@@ -294,8 +293,15 @@ class ProblemParserTest {
         "x[n+1] = y'                   | mixes x and y                        | 9",
         "d2y/dt3 = 0                   | orders 2 and 3 differ                | 0",
         "y'(x) = y(t)                  | the variable is x, not t             | 8",
-        "y' = 1e999999999              | number 1e999999999 is too large      | 5",
-        "x[n+2000] = x[n]              | x[n+2000]: number too large          | 0",
+        "y' = 1e999999999              | number 1e999999999 is out of range   | 5",
+        "x[n+2000] = x[n]              | shift x[n+2000] is above the order limit 200 | 0",
+        "d^2y/dt^2 + 5 y == 0          | write '=' for an equation            | 16",
+        "y' = 1.5.2 y                  | malformed number '1.5.2'             | 5",
+        "y' = 1.5 2 y                  | two numbers side by side             | 9",
+        "y^(201) = y                   | order above the limit 200            | 1",
+        "x[n+1] = x[n] + n^101         | too large                            | 16",
+        "e''' + 3e'' + e = 1           | e is Euler's number and cannot name the unknown function | 0",
+        "e[n+1] = e[n] + 1             | e is Euler's number                  | 0",
     })
     void errors(String text, String message, int position) {
         assertError(text, message, position);

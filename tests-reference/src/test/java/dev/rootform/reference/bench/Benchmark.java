@@ -37,6 +37,7 @@ public final class Benchmark {
                 Runtime.getRuntime().availableProcessors());
         warm();
         RecoverBenchmark.run();
+        AccuracyBenchmark.run();
         cold(Path.of(args.length > 0 ? args[0] : "../rootform"));
         scaling();
         CheckBenchmark.run();

@@ -1,0 +1,38 @@
+package dev.rootform.symbolic.model;
+
+/**
+ * The sizes rootform accepts, in one place. Input beyond any of them is refused at once as bad
+ * input (a {@link InputException} naming the size and the limit) instead of running into the time
+ * limit or out of memory; input within them is answered. The README's "Limits" table lists them.
+ *
+ * @since 0.2
+ */
+public final class Limits {
+    /** Characters of one input string (the equation with its conditions, or one further condition). */
+    public static final int MAX_INPUT_LENGTH = 10_000;
+    /** Levels of nesting: parentheses, brackets, signs and exponents inside one another. */
+    public static final int MAX_NESTING = 100;
+    /** Operations one after another in one side of an equation (the depth of its expression tree). */
+    public static final int MAX_EXPRESSION_DEPTH = 500;
+    /** Digits of one number literal. */
+    public static final int MAX_LITERAL_DIGITS = 1000;
+    /** Size of the decimal exponent of a literal ({@code 1e1000} is the largest power of ten). */
+    public static final int MAX_DECIMAL_EXPONENT = 1000;
+    /** Digits of numerator and denominator of any exact number computed while reading (e.g. {@code 3^2000}). */
+    public static final int MAX_NUMBER_DIGITS = 2000;
+    /** Order of the equation: the highest derivative, the span of the shifts, the degree of an operator. */
+    public static final int MAX_ORDER = 200;
+    /** Degree of the polynomial part of one forcing term ({@code n^100}). */
+    public static final int MAX_FORCING_DEGREE = 100;
+    /** Distinct terms of the forcing after expansion. */
+    public static final int MAX_FORCING_TERMS = 100;
+    /** Size of a sequence index in conditions and values ({@code x[1000000]}). */
+    public static final long MAX_INDEX = 1_000_000;
+    /** Size of a point of a function in conditions and values ({@code y(1e6)}). */
+    public static final long MAX_POINT = 1_000_000;
+    /** Significant digits of numeric output. */
+    public static final int MAX_DIGITS = 10_000;
+
+    private Limits() {
+    }
+}
