@@ -9,6 +9,7 @@ import dev.rootform.export.document.ResponseLatex;
 import dev.rootform.export.document.ResponseMathMl;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.export.document.ResponseText;
+import dev.rootform.export.html.HtmlRenderer;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -17,10 +18,12 @@ import java.util.function.Function;
 
 /**
  * The renderers of a {@link ResponseReport} by format name: {@code text}, {@code json},
- * {@code latex}, {@code mathml}, and {@code java}, {@code c}, which write the code of the solved
- * problem (the response's evaluator) with the transfer function named in its header; they need the
- * answer's code model ({@link Options#code()}). The report page ({@code html}) is not available for
- * responses.
+ * {@code latex}, {@code mathml}, {@code html} (the report page: facts, poles and zeros, the
+ * response and the frequency response drawn from {@link ResponseReport#frequencyPlot()} and the
+ * solved report's plots, present when the response ran with {@link Options#plots()}), and
+ * {@code java}, {@code c}, which write the code of the solved problem (the response's evaluator)
+ * with the transfer function named in its header; they need the answer's code model
+ * ({@link Options#code()}), and so does a page with code ({@link DocumentOptions#withCode()}).
  *
  * <pre>{@code
  * ResponseReport report = Rootform.response(ResponseRequest.of("H(s) = 1/(s + 1)").to("step")).answer().orElseThrow();
@@ -46,7 +49,7 @@ public final class ResponseExporters {
         Rendering render(ResponseReport report, CodeNames names);
     }
 
-    private static final Map<String, Renderer> BY_NAME = index();
+    private static final Map<String, Renderer> BY_NAME = index(DocumentOptions.defaults());
 
     private ResponseExporters() {
     }
@@ -56,20 +59,44 @@ public final class ResponseExporters {
         return Optional.ofNullable(BY_NAME.get(format));
     }
 
+    /**
+     * The renderer of {@code format}, laid out as {@code options} say (the code on the report page);
+     * empty for an unknown name.
+     */
+    public static Optional<Renderer> byName(String format, DocumentOptions options) {
+        return Optional.ofNullable(index(options).get(format));
+    }
+
     /** Every format name, in a fixed order. */
     public static List<String> names() {
         return List.copyOf(BY_NAME.keySet());
     }
 
-    private static Map<String, Renderer> index() {
+    private static Map<String, Renderer> index(DocumentOptions o) {
         Map<String, Renderer> map = new LinkedHashMap<>();
         map.put("text", document(ResponseText::render));
         map.put("json", document(ResponseJson::render));
         map.put("latex", document(ResponseLatex::render));
         map.put("mathml", document(ResponseMathMl::render));
+        map.put("html", page(o.withCode()));
         map.put("java", code(Exporters.byName("java").orElseThrow()));
         map.put("c", code(Exporters.byName("c").orElseThrow()));
         return java.util.Collections.unmodifiableMap(map);
+    }
+
+    /** The report page, with the code of {@code language} when given (refused as that code format refuses it). */
+    private static Renderer page(Optional<String> language) {
+        return new Renderer() {
+            @Override
+            public Optional<String> refusal(ResponseReport report) {
+                return language.flatMap(l -> Exporters.byName(l).orElseThrow().refusal(report.response()));
+            }
+
+            @Override
+            public Rendering render(ResponseReport report, CodeNames names) {
+                return Rendering.of(HtmlRenderer.render(report, language, names));
+            }
+        };
     }
 
     private static Renderer document(Function<ResponseReport, String> writer) {

@@ -67,14 +67,16 @@ final class ResponseJob {
             if (refusal.isPresent()) {
                 return new ResponseResult.Unanswered(new Result.Refused(refusal.get(), "", -1));
             }
-            Analysis analysis = new Analyzer(o.digits()).analyze(solution, points);
+            Analysis analysis = new Analyzer(o.digits(), o.plots()).analyze(solution, points);
             Report analysed = new Report(solution, analysis, o.digits(), o.numeric());
             Report report = o.code() && CodeRequests.fitted(analysed).isEmpty() ? analysed.withCode(CodeModels.of(analysed)) : analysed;
             Optional<StepFigures> figures = stepFigures(h, input, facts, solution, o.digits());
+            Optional<FrequencySweep> sweep = frequencies.isEmpty() && !o.plots() ? Optional.empty()
+                    : Optional.of(new FrequencySweep(h.value(), h.continuous(), o.digits()));
             ResponseReport answer = new ResponseReport(request.transfer(), h, facts, values(facts.poleRoots(), report),
                     values(facts.zeroRoots(), report), plan, report, SolveSyntax.relation(h), SolveSyntax.problem(plan.problem()),
-                    frequencies.isEmpty() ? List.of() : new FrequencySweep(h.value(), h.continuous(), o.digits()).at(frequencies),
-                    figures, warnings(h, input, facts));
+                    sweep.map(w -> w.at(frequencies)).orElse(List.of()), figures,
+                    sweep.filter(w -> o.plots()).map(FrequencySweep::plot), warnings(h, input, facts));
             if (answer.verified()) {
                 return new ResponseResult.Answered(answer);
             }

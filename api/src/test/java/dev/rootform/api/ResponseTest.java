@@ -59,6 +59,6 @@ class ResponseTest {
     void anUnansweredResultCarriesNoAnswer() {
         assertThrows(IllegalArgumentException.class, () -> new ResponseResult.Unanswered(new Result.Solved(
                 ((ResponseResult.Answered) Rootform.response(ResponseRequest.of("H(s) = 1/(s + 1)"))).report().response())));
-        assertEquals(List.of("text", "json", "latex", "mathml", "java", "c"), ResponseExporters.names());
+        assertEquals(List.of("text", "json", "latex", "mathml", "html", "java", "c"), ResponseExporters.names());
     }
 }

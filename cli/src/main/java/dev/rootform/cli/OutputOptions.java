@@ -154,7 +154,7 @@ final class OutputOptions {
             throw new InputException("--with-code " + withCode + " is not one of " + String.join(", ", DocumentOptions.CODE_LANGUAGES),
                     "", -1);
         }
-        return Exporters.byName(format, new DocumentOptions(standalone, Optional.ofNullable(withCode))).orElseThrow(
+        return Exporters.byName(format, documentOptions()).orElseThrow(
                 () -> new InputException("--format " + format + " is not one of " + String.join(", ", Exporters.names()), "", -1));
     }
 
@@ -173,6 +173,11 @@ final class OutputOptions {
         return Options.builder().digits(digits).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
                 .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable)
                 .code(format.equals("java") || format.equals("c") || withCode != null).plots(format.equals("html")).build();
+    }
+
+    /** --standalone and --with-code as the API takes them. */
+    DocumentOptions documentOptions() {
+        return new DocumentOptions(standalone, Optional.ofNullable(withCode));
     }
 
     /** @throws InputException for a bad class, package, function or header name, or a C option without --format c */

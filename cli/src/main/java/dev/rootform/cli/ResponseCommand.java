@@ -47,7 +47,7 @@ final class ResponseCommand implements Callable<Integer> {
     public Integer call() {
         try {
             out.check();
-            ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format).orElseThrow(() -> new InputException(
+            ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format, out.documentOptions()).orElseThrow(() -> new InputException(
                     "--format " + out.format + " is not available for a response; use one of "
                             + String.join(", ", ResponseExporters.names()), "", -1));
             List<String> list = frequencies == null ? List.of() : List.of(frequencies.split(",", -1));

@@ -75,10 +75,16 @@ class ResponseCommandTest {
     }
 
     @Test
-    void theReportPageIsNotAResponseFormat() {
-        MainTest.Run r = MainTest.run("response", "H(s) = 1/(s + 1)", "--format", "html");
-        assertEquals(2, r.code(), r.out());
-        assertTrue(r.err().contains("not available for a response"), r.err());
+    void writesTheReportPage(@TempDir Path dir) throws Exception {
+        Path page = dir.resolve("lag.html");
+        MainTest.Run r = MainTest.run("response", "H(s) = 1/(s + 1)", "--to", "step", "--format", "html", "--with-code", "c",
+                "-o", page.toString());
+        assertEquals(0, r.code(), r.err());
+        String html = Files.readString(page);
+        assertTrue(html.startsWith("<!DOCTYPE html>"), html);
+        for (String part : new String[] {"poles-plot", "time-plot", "frequency-plot", "Response of H(s) = 1/(s + 1)"}) {
+            assertTrue(html.contains(part), "the page lacks " + part);
+        }
     }
 
     @Test

@@ -30,12 +30,8 @@ public final class ResponseMathMl {
         StringBuilder out = new StringBuilder("<!--\n");
         CommentText.wrap(comment).forEach(l -> out.append("  ").append(l).append('\n'));
         out.append("-->\n<math xmlns=\"").append(MathMlRenderer.NAMESPACE).append("\" display=\"block\">\n<mtable>\n");
-        String v = "<mi>" + h.variable() + "</mi>";
-        String num = Formulas.mathMl(h.value().numerator(), h.variable());
-        String transfer = h.value().isPolynomial() ? num
-                : "<mfrac><mrow>" + num + "</mrow><mrow>" + Formulas.mathMl(h.value().denominator(), h.variable()) + "</mrow></mfrac>";
         List<String> rows = new ArrayList<>();
-        rows.add("<mrow><mi>" + Xml.escape(h.name()) + "</mi><mo>(</mo>" + v + "<mo>)</mo><mo>=</mo>" + transfer + "</mrow>");
+        rows.add(transfer(h));
         rows.add(text("input: " + r.plan().input().text() + ", from zero initial state"));
         rows.add("<mrow>" + unknown(h) + "<mo>=</mo>" + response(h, r.plan().impulses(), f) + "</mrow>");
         rows.add(text(h.continuous() ? "for t > 0" : "for n ≥ 0"));
@@ -44,11 +40,30 @@ public final class ResponseMathMl {
         return out.append("</mtable>\n</math>\n").toString();
     }
 
+    /** {@code H(s) = N(s)/D(s)} as one {@code <mrow>}, the fraction in lowest terms. */
+    public static String transfer(TransferFunction h) {
+        String v = "<mi>" + h.variable() + "</mi>";
+        String num = Formulas.mathMl(h.value().numerator(), h.variable());
+        String transfer = h.value().isPolynomial() ? num
+                : "<mfrac><mrow>" + num + "</mrow><mrow>" + Formulas.mathMl(h.value().denominator(), h.variable()) + "</mrow></mfrac>";
+        return "<mrow><mi>" + Xml.escape(h.name()) + "</mi><mo>(</mo>" + v + "<mo>)</mo><mo>=</mo>" + transfer + "</mrow>";
+    }
+
     private static String unknown(TransferFunction h) {
         return h.continuous() ? "<mi>y</mi><mo>(</mo><mi>t</mi><mo>)</mo>" : "<mi>y</mi><mo>[</mo><mi>n</mi><mo>]</mo>";
     }
 
     private static String response(TransferFunction h, List<Impulse> impulses, ClosedForm f) {
+        StringBuilder sb = new StringBuilder(impulses(h, impulses));
+        if (impulses.isEmpty() || !f.terms().isEmpty()) {
+            String formula = Formulas.mathMl(f);
+            sb.append(sb.length() == 0 || formula.startsWith("<mo>&#x2212;</mo>") ? "" : "<mo>+</mo>").append(formula);
+        }
+        return sb.toString();
+    }
+
+    /** The impulses with their signs, e.g. {@code 2·δ(t) − δ'(t)}; empty for none. */
+    public static String impulses(TransferFunction h, List<Impulse> impulses) {
         StringBuilder sb = new StringBuilder();
         for (Impulse i : impulses) {
             Rational c = i.coefficient();
@@ -65,10 +80,6 @@ public final class ResponseMathMl {
                         .append("<mo>]</mo>");
             }
         }
-        if (impulses.isEmpty() || !f.terms().isEmpty()) {
-            String formula = Formulas.mathMl(f);
-            sb.append(sb.length() == 0 || formula.startsWith("<mo>&#x2212;</mo>") ? "" : "<mo>+</mo>").append(formula);
-        }
         return sb.toString();
     }
 
@@ -77,7 +88,8 @@ public final class ResponseMathMl {
                 : "<mfrac><mn>" + q.numerator() + "</mn><mn>" + q.denominator() + "</mn></mfrac>";
     }
 
-    private static String text(String s) {
+    /** Plain text as an {@code <mtext>}. */
+    public static String text(String s) {
         return "<mtext>" + Xml.escape(s) + "</mtext>";
     }
 }

@@ -32,7 +32,7 @@ public final class ResponseNotation {
      * {@code H(z) = (1 + z^-1)/(1 - 3/2·z^-1 + 14/25·z^-2)}; the numerator's powers are negative when
      * H is proper.
      */
-    static String delayForm(TransferFunction h) {
+    public static String delayForm(TransferFunction h) {
         int top = h.value().denominator().degree();
         String num = delays(h.value().numerator(), top);
         String den = delays(h.value().denominator(), top);
@@ -75,12 +75,12 @@ public final class ResponseNotation {
     }
 
     /** An exact pole or zero as solve writes roots, with an implicit root's factor in the transfer variable. */
-    static String root(TransferFunction h, ExactRoot root) {
+    public static String root(TransferFunction h, ExactRoot root) {
         return RootText.exact(root).replace("λ", h.variable());
     }
 
     /** {@code y(t)} or {@code y[n]}. */
-    static String unknown(TransferFunction h) {
+    public static String unknown(TransferFunction h) {
         return h.continuous() ? "y(t)" : "y[n]";
     }
 

@@ -1,6 +1,7 @@
 package dev.rootform.export.document;
 
 import dev.rootform.export.Report;
+import dev.rootform.numeric.plot.FrequencyPlot;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.numeric.response.FrequencyPoint;
 import dev.rootform.numeric.response.StepFigures;
@@ -29,12 +30,15 @@ import java.util.Optional;
  * @param problem the solved problem in solve's syntax
  * @param frequencyResponse at the requested frequencies
  * @param stepFigures for a step input to a stable system
+ * @param frequencyPlot |H| and arg H sampled for the report page; present when the response was
+ *     asked with plot data (the response's own samples are {@code response.plots()})
  * @param warnings hidden modes and other cautions
  * @since 0.3
  */
 public record ResponseReport(String source, TransferFunction transfer, TransferFacts facts, List<RootApproximation> poleValues,
         List<RootApproximation> zeroValues, ResponsePlan plan, Report response, String relation, String problem,
-        List<FrequencyPoint> frequencyResponse, Optional<StepFigures> stepFigures, List<String> warnings) {
+        List<FrequencyPoint> frequencyResponse, Optional<StepFigures> stepFigures, Optional<FrequencyPlot> frequencyPlot,
+        List<String> warnings) {
     public ResponseReport {
         Objects.requireNonNull(source, "source");
         Objects.requireNonNull(transfer, "transfer");
@@ -47,6 +51,7 @@ public record ResponseReport(String source, TransferFunction transfer, TransferF
         Objects.requireNonNull(problem, "problem");
         frequencyResponse = List.copyOf(frequencyResponse);
         Objects.requireNonNull(stepFigures, "stepFigures");
+        Objects.requireNonNull(frequencyPlot, "frequencyPlot");
         warnings = List.copyOf(warnings);
     }
 

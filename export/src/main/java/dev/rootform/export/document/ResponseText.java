@@ -65,12 +65,7 @@ public final class ResponseText {
         ClosedForm f = r.response().solution().closedForm();
         List<String> lines = new ArrayList<>();
         lines.add(ResponseNotation.response(h, r.plan().impulses(), f));
-        if (h.continuous()) {
-            lines.add(r.plan().impulses().isEmpty() ? "for t > 0 (0 before the input starts)"
-                    : "the formula for t > 0; the impulses act at t = 0");
-        } else {
-            lines.add("for n ≥ 0 (0 before the input starts)");
-        }
+        lines.add(validity(r));
         if (r.plan().split() == ResponsePlan.Split.FORCED && !f.particularTerms().isEmpty()) {
             lines.add("transient (natural): " + Formulas.plain(f.withTerms(f.transientTerms())));
             lines.add("steady (forced): " + Formulas.plain(f.withTerms(f.particularTerms())));
@@ -82,7 +77,17 @@ public final class ResponseText {
         return lines;
     }
 
-    static String hidden(TransferFunction h, TransferFacts.HiddenMode m) {
+    /** Where the response formula holds: {@code for t > 0 (0 before the input starts)} and the like. */
+    public static String validity(ResponseReport r) {
+        if (r.transfer().continuous()) {
+            return r.plan().impulses().isEmpty() ? "for t > 0 (0 before the input starts)"
+                    : "the formula for t > 0; the impulses act at t = 0";
+        }
+        return "for n ≥ 0 (0 before the input starts)";
+    }
+
+    /** A cancelled factor: its pole–zero pair and whether the hidden mode is stable. */
+    public static String hidden(TransferFunction h, TransferFacts.HiddenMode m) {
         Factor f = m.factor();
         String roots = m.roots().stream().map(x -> ResponseNotation.root(h, x)).collect(Collectors.joining(", "));
         return f.polynomial().toString(h.variable()) + (f.multiplicity() > 1 ? " (multiplicity " + f.multiplicity() + ")" : "")
@@ -102,12 +107,14 @@ public final class ResponseText {
         return lines;
     }
 
-    static String dcGain(TransferFunction h, TransferFacts f) {
+    /** {@code H(0) = q} (s) or {@code H(1) = q} (z), or infinite at a pole. */
+    public static String dcGain(TransferFunction h, TransferFacts f) {
         String at = h.name() + "(" + (h.continuous() ? "0" : "1") + ")";
         return f.dcGain().map(g -> at + " = " + g).orElse("infinite: " + at + " is a pole");
     }
 
-    static String properness(int relativeDegree) {
+    /** Strictly proper, biproper or improper, with the relative degree. */
+    public static String properness(int relativeDegree) {
         if (relativeDegree > 0) {
             return "strictly proper, relative degree " + relativeDegree;
         }
@@ -115,7 +122,8 @@ public final class ResponseText {
                 : "improper, relative degree " + relativeDegree;
     }
 
-    static String stability(TransferFunction h, TransferFacts f) {
+    /** BIBO stable or not, and by which exact test. */
+    public static String stability(TransferFunction h, TransferFacts f) {
         if (!f.stable()) {
             String why = f.relativeDegree() < 0 ? (h.continuous() ? " (improper: it differentiates its input)" : " (not causal)")
                     : h.continuous() ? " (a pole with real part ≥ 0)" : " (a pole on or outside the unit circle)";
@@ -125,7 +133,8 @@ public final class ResponseText {
                 : "BIBO stable: every pole lies inside the unit circle (Routh–Hurwitz after z = (1 + w)/(1 − w), exact)";
     }
 
-    private static String frequency(TransferFunction h, FrequencyPoint p, int digits) {
+    /** {@code ω = 1 rad/s: |H| = ..., ... dB, phase ...°}, exact parts first. */
+    public static String frequency(TransferFunction h, FrequencyPoint p, int digits) {
         String unit = h.continuous() ? " rad/s" : " rad/sample";
         String at = "ω = " + p.frequency().text() + unit + ": ";
         if (p.kind() == FrequencyPoint.Kind.POLE) {
@@ -142,7 +151,8 @@ public final class ResponseText {
         return at + magnitude + ", " + db + ", " + phase;
     }
 
-    private static List<String> figures(TransferFunction h, StepFigures s, int digits) {
+    /** The step figures, one per line, with the final value first. */
+    public static List<String> figures(TransferFunction h, StepFigures s, int digits) {
         String unit = s.discrete() ? " samples" : "";
         List<String> lines = new ArrayList<>();
         lines.add("final value " + s.finalValue() + " (final-value theorem: " + h.name() + "(" + (h.continuous() ? "0" : "1") + "))");

@@ -11,6 +11,7 @@ import java.awt.Shape;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Rectangle2D;
 import java.text.DecimalFormat;
+import java.util.ArrayList;
 import java.util.List;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.LogAxis;
@@ -23,6 +24,7 @@ import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYBarRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.util.ShapeUtils;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.jfree.svg.SVGGraphics2D;
@@ -99,44 +101,84 @@ final class Charts {
         return svg(chart(plot, true), WIDTH, 330, "time");
     }
 
+    /** How one kind of point in the complex plane is drawn. */
+    record Look(Color color, Shape shape, boolean filled) {
+    }
+
+    /** A root of a characteristic polynomial. */
+    static final Look ROOT = new Look(SOLUTION, new Ellipse2D.Double(-5, -5, 10, 10), true);
+    /** The dominant root. */
+    static final Look DOMINANT = new Look(MARK, new Rectangle2D.Double(-6, -6, 12, 12), true);
+    /** A pole of a transfer function: a cross. */
+    static final Look POLE = new Look(MARK, ShapeUtils.createDiagonalCross(6, 1.2f), true);
+    /** A zero of a transfer function: a ring. */
+    static final Look ZERO = new Look(SOLUTION, new Ellipse2D.Double(-5.5, -5.5, 11, 11), false);
+
+    /** Points of one kind, each {re, im} with a label (e.g. its multiplicity), named in the legend. */
+    record Marks(String name, Look look, List<double[]> points, List<String> labels) {
+        Marks {
+            points = List.copyOf(points);
+            labels = List.copyOf(labels);
+        }
+    }
+
     /**
      * The roots in the complex plane against the stability boundary: the imaginary axis
      * (continuous) or the unit circle (discrete); labels give multiplicities above 1.
      */
     static String roots(List<double[]> roots, List<String> labels, int dominant, boolean discrete) {
+        List<double[]> top = new ArrayList<>();
+        List<String> topLabels = new ArrayList<>();
+        List<double[]> rest = new ArrayList<>();
+        List<String> restLabels = new ArrayList<>();
+        for (int i = 0; i < roots.size(); i++) {
+            (i == dominant ? top : rest).add(roots.get(i));
+            (i == dominant ? topLabels : restLabels).add(labels.get(i));
+        }
+        return plane(List.of(new Marks("dominant root", DOMINANT, top, topLabels), new Marks("roots", ROOT, rest, restLabels)),
+                discrete, "λ", "roots");
+    }
+
+    /**
+     * Points in the complex plane of {@code variable} against the stability boundary: the imaginary
+     * axis (continuous) or the unit circle (discrete); drawn square, so the circle stays round.
+     *
+     * @param id the SVG element is {@code id-plot}
+     */
+    static String plane(List<Marks> marks, boolean discrete, String variable, String id) {
+        List<Marks> drawn = marks.stream().filter(m -> !m.points().isEmpty()).toList();
         XYPlot plot = new XYPlot();
-        NumberAxis re = new NumberAxis("Re λ");
-        NumberAxis im = new NumberAxis("Im λ");
+        NumberAxis re = new NumberAxis("Re " + variable);
+        NumberAxis im = new NumberAxis("Im " + variable);
         double extent = 0;
-        for (double[] r : roots) {
-            extent = Math.max(extent, Math.max(Math.abs(r[0]), Math.abs(r[1])));
+        for (Marks m : drawn) {
+            for (double[] r : m.points()) {
+                extent = Math.max(extent, Math.max(Math.abs(r[0]), Math.abs(r[1])));
+            }
         }
         extent = Math.max(extent, discrete ? 1 : 0.5) * 1.2;
         re.setRange(-extent, extent);
         im.setRange(-extent, extent);
         plot.setDomainAxis(re);
         plot.setRangeAxis(im);
-        XYSeries all = new XYSeries("roots", false, true);
-        XYSeries top = new XYSeries("dominant root", false, true);
-        for (int i = 0; i < roots.size(); i++) {
-            (i == dominant ? top : all).add(roots.get(i)[0], roots.get(i)[1]);
-        }
         XYSeriesCollection data = new XYSeriesCollection();
-        data.addSeries(top);
-        data.addSeries(all);
         XYLineAndShapeRenderer shapes = new XYLineAndShapeRenderer(false, true);
-        shapes.setSeriesPaint(0, MARK);
-        shapes.setSeriesShape(0, new Rectangle2D.Double(-6, -6, 12, 12));
-        shapes.setSeriesPaint(1, SOLUTION);
-        shapes.setSeriesShape(1, new Ellipse2D.Double(-5, -5, 10, 10));
-        shapes.setDefaultItemLabelGenerator((dataset, series, item) -> label(roots, labels, dataset.getXValue(series, item),
-                dataset.getYValue(series, item)));
+        for (int i = 0; i < drawn.size(); i++) {
+            Marks m = drawn.get(i);
+            XYSeries series = new XYSeries(m.name(), false, true);
+            m.points().forEach(p -> series.add(p[0], p[1]));
+            data.addSeries(series);
+            shapes.setSeriesPaint(i, m.look().color());
+            shapes.setSeriesShape(i, m.look().shape());
+            shapes.setSeriesShapesFilled(i, m.look().filled());
+        }
+        shapes.setDefaultItemLabelGenerator((dataset, series, item) -> drawn.get(series).labels().get(item));
         shapes.setDefaultItemLabelsVisible(true);
         shapes.setDefaultItemLabelFont(FONT);
         plot.setDataset(0, data);
         plot.setRenderer(0, shapes);
         if (discrete) {
-            XYSeries circle = new XYSeries("unit circle |λ| = 1", false, true);
+            XYSeries circle = new XYSeries("unit circle |" + variable + "| = 1", false, true);
             for (int k = 0; k <= 180; k++) {
                 double a = 2 * Math.PI * k / 180;
                 circle.add(Math.cos(a), Math.sin(a));
@@ -148,13 +190,13 @@ final class Charts {
             plot.setRenderer(1, line);
         } else {
             ValueMarker axis = new ValueMarker(0, BOUNDARY, dashed());
-            axis.setLabel("Re λ = 0");
+            axis.setLabel("Re " + variable + " = 0");
             axis.setLabelFont(FONT);
             axis.setLabelOffset(new RectangleInsets(4, 4, 4, 4));
             plot.addDomainMarker(axis);
         }
         plot.addRangeMarker(new ValueMarker(0, BOUNDARY, new BasicStroke(0.6f)));
-        return svg(chart(plot, true), SQUARE, SQUARE + 40, "roots");
+        return svg(chart(plot, true), SQUARE, SQUARE + 40, id);
     }
 
     /** Magnitude (dB) above phase (degrees) against frequency, the input frequencies marked. */
@@ -191,15 +233,6 @@ final class Charts {
             plot.addDomainMarker(m);
         }
         return plot;
-    }
-
-    private static String label(List<double[]> roots, List<String> labels, double x, double y) {
-        for (int i = 0; i < roots.size(); i++) {
-            if (roots.get(i)[0] == x && roots.get(i)[1] == y) {
-                return labels.get(i);
-            }
-        }
-        return "";
     }
 
     private static XYLineAndShapeRenderer points(Color color, Shape shape) {

@@ -1,15 +1,19 @@
 package dev.rootform.export.html;
 
 import dev.rootform.export.CodeNames;
+import dev.rootform.export.Rendering;
 import dev.rootform.export.Report;
 import dev.rootform.export.code.CRenderer;
 import dev.rootform.export.code.CodeRequests;
 import dev.rootform.export.code.JavaRenderer;
+import dev.rootform.export.code.ResponseCode;
+import dev.rootform.export.document.ResponseReport;
 import java.util.Optional;
 
 /**
- * A solve answer as one self-contained HTML report page ({@link ReportPage}, {@link PageRenderer}),
- * optionally with the generated Java or C code in a block.
+ * A solve answer ({@link ReportPage}) or a response answer ({@link ResponsePage}) as one
+ * self-contained HTML report page ({@link PageRenderer}), optionally with the generated Java or C
+ * code in a block.
  *
  * @since 0.3
  */
@@ -23,11 +27,27 @@ public final class HtmlRenderer {
      *     {@link CodeRequests#refusal} refuses
      */
     public static String render(Report r, Optional<String> code, CodeNames names) {
-        Optional<Block.Code> block = code.map(language -> new Block.Code(language, switch (language) {
+        return PageRenderer.render(ReportPage.of(r, code.map(language -> new Block.Code(language, code(r, language, names)))));
+    }
+
+    /**
+     * The page of a response; its code is the evaluator of the solved problem, its opening comment
+     * naming the transfer function ({@link ResponseCode}).
+     *
+     * @param code {@code "java"}, {@code "c"} or empty for no code
+     * @throws IllegalArgumentException for another language, or code for a solved problem that
+     *     {@link CodeRequests#refusal} refuses
+     */
+    public static String render(ResponseReport r, Optional<String> code, CodeNames names) {
+        return PageRenderer.render(ResponsePage.of(r, code.map(language -> new Block.Code(language,
+                ResponseCode.decorate(r, Rendering.of(code(r.response(), language, names))).text()))));
+    }
+
+    private static String code(Report r, String language, CodeNames names) {
+        return switch (language) {
             case "java" -> JavaRenderer.render(r, names.packageName().orElse(null), names.className());
             case "c" -> CRenderer.render(r, names.function(), Optional.empty(), names.c()).source();
             default -> throw new IllegalArgumentException("no generated code in " + language);
-        }));
-        return PageRenderer.render(ReportPage.of(r, block));
+        };
     }
 }

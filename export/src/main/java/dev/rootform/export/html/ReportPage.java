@@ -44,8 +44,7 @@ public final class ReportPage {
         Solution s = r.solution();
         List<FormulaRows.Row> rows = MathMlRenderer.rows(r, WIDTH);
         List<Section> sections = new ArrayList<>();
-        sections.add(new Section("Problem", List.of(new Block.Formula(MathMlRenderer.math(
-                rows.stream().filter(x -> PROBLEM_ROWS.contains(x.label())).toList())))));
+        sections.add(new Section("Problem", List.of(new Block.Formula(MathMlRenderer.math(problemRows(rows))))));
         List<Block> solution = new ArrayList<>();
         solution.add(new Block.Formula(MathMlRenderer.math(rows.stream().filter(x -> !PROBLEM_ROWS.contains(x.label())).toList())));
         solution.add(roots(r));
@@ -56,12 +55,7 @@ public final class ReportPage {
         }
         sections.add(new Section("Verification", List.of(verification(r))));
         r.diagnostics().ifPresent(d -> sections.add(new Section("Diagnostics", List.of(pairs(DiagnosticsText.lines(d, r))))));
-        if (!r.values().isEmpty()) {
-            ClosedForm f = s.closedForm();
-            sections.add(new Section("Values", List.of(new Block.Table(List.of("point", "value"), r.values().stream()
-                    .map(v -> List.of(Html.text(EquationText.unknownAt(f, Numbers.point(v.at()))),
-                            Html.text(ValueText.of(v, r.digits()).strip()))).toList()))));
-        }
+        values(r).ifPresent(v -> sections.add(new Section("Values", List.of(v))));
         if (!r.steadyStates().isEmpty()) {
             sections.add(new Section("Steady state", List.of(steady(r))));
         }
@@ -74,12 +68,29 @@ public final class ReportPage {
                 sections, CommentText.FORMULA_CAUTION);
     }
 
+    /** The rows that state the problem: equation, conditions, characteristic polynomial and its factors. */
+    static List<FormulaRows.Row> problemRows(List<FormulaRows.Row> rows) {
+        return rows.stream().filter(x -> PROBLEM_ROWS.contains(x.label())).toList();
+    }
+
+    /** The values at the requested points as a table; empty when none were asked for. */
+    static Optional<Block> values(Report r) {
+        if (r.values().isEmpty()) {
+            return Optional.empty();
+        }
+        ClosedForm f = r.solution().closedForm();
+        return Optional.of(new Block.Table(List.of("point", "value"), r.values().stream()
+                .map(v -> List.of(Html.text(EquationText.unknownAt(f, Numbers.point(v.at()))),
+                        Html.text(ValueText.of(v, r.digits()).strip()))).toList()));
+    }
+
     private static List<Block> plots(Report r, Plots p) {
         Solution s = r.solution();
         ClosedForm f = s.closedForm();
         List<Block> blocks = new ArrayList<>();
-        p.time().ifPresent(t -> blocks.add(new Block.Figure(Charts.time(t, f.variable(),
-                EquationText.unknownAt(f, f.variable()), series(t, EquationText.unknownAt(f, f.variable()))), timeCaption(t, f))));
+        String unknown = EquationText.unknownAt(f, f.variable());
+        p.time().ifPresent(t -> blocks.add(new Block.Figure(Charts.time(t, f.variable(), unknown, series(t, unknown)),
+                timeCaption(t, unknown))));
         blocks.add(new Block.Figure(rootPlane(r), rootCaption(s)));
         p.frequency().ifPresent(fr -> blocks.add(new Block.Figure(Charts.frequency(fr),
                 "Frequency response H: magnitude in dB (top) and phase in degrees (bottom) against "
@@ -88,7 +99,8 @@ public final class ReportPage {
         return blocks;
     }
 
-    private static List<Charts.Series> series(TimePlot t, String unknown) {
+    /** The solution and, when split, its transient and steady parts, as plotted series. */
+    static List<Charts.Series> series(TimePlot t, String unknown) {
         List<Charts.Series> series = new ArrayList<>();
         series.add(new Charts.Series("solution " + unknown, t.solution()));
         if (t.split()) {
@@ -98,8 +110,8 @@ public final class ReportPage {
         return series;
     }
 
-    private static String timeCaption(TimePlot t, ClosedForm f) {
-        return "The solution " + EquationText.unknownAt(f, f.variable()) + (t.stems() ? " at each index" : "")
+    static String timeCaption(TimePlot t, String unknown) {
+        return "The solution " + unknown + (t.stems() ? " at each index" : "")
                 + (t.logScale() ? " in magnitude on a log axis (it grows)" : "") + " over " + t.range()
                 + (t.split() ? "; the transient and steady parts drawn separately" : "")
                 + (t.marks().isEmpty() ? "" : "; squares mark the --values-at points") + ".";
@@ -136,7 +148,8 @@ public final class ReportPage {
         return new Block.Table(List.of("root λ", "value", "multiplicity"), rows);
     }
 
-    private static Block verification(Report r) {
+    /** The exact and numeric checks of {@code r} as a table. */
+    static Block verification(Report r) {
         List<List<String>> rows = Stream.concat(r.solution().checks().stream(), r.numericChecks().stream())
                 .map(c -> List.of(Html.text(c.name()), result(c), Html.text(c.detail()))).toList();
         return new Block.Table(List.of("check", "result", "how"), rows);
@@ -147,11 +160,21 @@ public final class ReportPage {
     }
 
     /** Lines {@code "label: text"} as a two-column table. */
-    private static Block pairs(List<String> lines) {
-        return new Block.Table(List.of("fact", "value"), lines.stream().map(l -> {
+    static Block pairs(List<String> lines) {
+        return pairs(List.of("fact", "value"), lines);
+    }
+
+    /** Lines {@code "label: text"} as a two-column table with the given headings. */
+    static Block pairs(List<String> headings, List<String> lines) {
+        return new Block.Table(headings, lines.stream().map(l -> {
             int colon = l.indexOf(": ");
             return colon < 0 ? List.of("", Html.text(l)) : List.of(Html.text(l.substring(0, colon)), Html.text(l.substring(colon + 2)));
         }).toList());
+    }
+
+    /** Lines as a one-column table. */
+    static Block list(String heading, List<String> lines) {
+        return new Block.Table(List.of(heading), lines.stream().map(l -> List.of(Html.text(l))).toList());
     }
 
     private static Block steady(Report r) {

@@ -2,6 +2,7 @@ package dev.rootform.numeric.analysis;
 
 import dev.rootform.numeric.diagnostics.Diagnostics;
 import dev.rootform.numeric.plot.FrequencyPlot;
+import dev.rootform.numeric.plot.FrequencySampling;
 import dev.rootform.numeric.plot.Plots;
 import dev.rootform.numeric.plot.Sample;
 import dev.rootform.numeric.plot.TimePlot;
@@ -21,9 +22,7 @@ import java.util.Optional;
 import java.util.function.DoubleUnaryOperator;
 import java.util.function.LongFunction;
 import org.apfloat.Apcomplex;
-import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
-import org.apfloat.ApfloatMath;
 
 /**
  * Samples a solution for the report page's plots: over a {@link TimeRange}, the whole solution
@@ -37,9 +36,6 @@ final class PlotSampler {
     /** Working digits of the roots and weights behind the function samples. */
     static final long PRECISION = 30;
     static final int FUNCTION_SAMPLES = 500;
-    static final int FREQUENCY_SAMPLES = 300;
-    /** The frequency sweep of a differential equation spans this factor below and above its frequencies. */
-    private static final double DECADES = 20;
 
     private PlotSampler() {
     }
@@ -162,45 +158,16 @@ final class PlotSampler {
         return samples.stream().map(p -> new Sample(p.x(), Math.abs(p.y()))).filter(p -> p.y() > Double.MIN_NORMAL).toList();
     }
 
-    /**
-     * |H| in dB and arg H (unwrapped) against ω: logarithmically spaced over the natural and input
-     * frequencies times 1/{@value #DECADES} .. {@value #DECADES} (differential), or 0 &lt; θ &le; π
-     * (difference).
-     */
+    /** |H| in dB and arg H (unwrapped) against the frequency, around the natural and input frequencies. */
     private static FrequencyPlot frequency(LinearEquation eq, Diagnostics d) {
         boolean discrete = eq.domain() == Domain.DIFFERENCE;
         List<Double> inputs = FrequencyResponse.sinusoids(eq).stream()
                 .map(t -> FrequencyResponse.angularFrequency(t, PRECISION).doubleValue()).distinct().toList();
-        double low;
-        double high;
-        if (discrete) {
-            low = Math.PI / FREQUENCY_SAMPLES;
-            high = Math.PI;
-        } else {
-            List<Double> scales = new ArrayList<>(inputs);
-            d.modes().forEach(m -> scales.add(Math.hypot(m.root().re().doubleValue(), m.root().im().doubleValue())));
-            double smallest = scales.stream().filter(w -> w > 1e-12).mapToDouble(Double::doubleValue).min().orElse(1);
-            double largest = scales.stream().mapToDouble(Double::doubleValue).max().orElse(1);
-            low = smallest / DECADES;
-            high = Math.max(largest, smallest) * DECADES;
-        }
-        List<Sample> magnitude = new ArrayList<>();
-        List<Sample> phase = new ArrayList<>();
-        double previous = Double.NaN;
-        double turns = 0;
-        for (int i = 0; i < FREQUENCY_SAMPLES; i++) {
-            double f = i / (double) (FREQUENCY_SAMPLES - 1);
-            double w = discrete ? low + (high - low) * f : low * Math.pow(high / low, f);
+        List<Double> scales = new ArrayList<>(inputs);
+        d.modes().forEach(m -> scales.add(Math.hypot(m.root().re().doubleValue(), m.root().im().doubleValue())));
+        return FrequencySampling.sample(discrete, scales, inputs, (w, q) -> {
             Apcomplex h = FrequencyResponse.response(eq, new Apfloat(w, PRECISION), PRECISION);
-            magnitude.add(new Sample(w, 20 * Math.log10(ApcomplexMath.abs(h).doubleValue())));
-            double degrees = Math.toDegrees(ApfloatMath.atan2(h.imag(), h.real()).doubleValue());
-            if (!Double.isNaN(previous)) {
-                double jump = degrees + turns - previous;
-                turns -= 360 * Math.round(jump / 360);
-            }
-            previous = degrees + turns;
-            phase.add(new Sample(w, previous));
-        }
-        return new FrequencyPlot(discrete, magnitude, phase, inputs);
+            return new double[] {h.real().doubleValue(), h.imag().doubleValue()};
+        });
     }
 }

@@ -1,5 +1,7 @@
 package dev.rootform.numeric.response;
 
+import dev.rootform.numeric.plot.FrequencyPlot;
+import dev.rootform.numeric.plot.FrequencySampling;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.numeric.roots.RootFinder;
 import dev.rootform.symbolic.algebra.Cyclotomic;
@@ -14,8 +16,10 @@ import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.MathContext;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
@@ -64,6 +68,53 @@ public final class FrequencySweep {
     /** The response at each frequency, in the order given. */
     public List<FrequencyPoint> at(List<Frequency> frequencies) {
         return frequencies.stream().map(this::at).toList();
+    }
+
+    /**
+     * H sampled for the magnitude and phase plot ({@link FrequencySampling}): around the magnitudes
+     * of its poles and zeros (s), or over 0 &lt; θ &le; π (z); double precision, for drawing only.
+     * In z a sample exactly at a zero or pole on the unit circle (a root of a cyclotomic factor of
+     * the same order as e^{jθ}) is left out, decided exactly.
+     */
+    public FrequencyPlot plot() {
+        List<Double> scales = roots.stream().map(r -> ApcomplexMath.abs(r.value()).doubleValue()).toList();
+        double[] num = doubles(h.numerator());
+        double[] den = doubles(h.denominator());
+        Set<Integer> onCircle = new HashSet<>();
+        for (List<Factor> factors : List.of(RationalFunctions.zeros(h), RationalFunctions.poles(h))) {
+            factors.forEach(f -> Cyclotomic.order(f.polynomial()).ifPresent(onCircle::add));
+        }
+        return FrequencySampling.sample(!continuous, scales, List.of(), (w, q) -> {
+            Deadline.checkCurrent();
+            if (q.isPresent() && onCircle.contains(Cyclotomic.orderOfPiMultiple(q.get()))) {
+                return new double[] {Double.NaN, Double.NaN};
+            }
+            double[] x = continuous ? new double[] {0, w} : new double[] {Math.cos(w), Math.sin(w)};
+            double[] n = horner(num, x);
+            double[] d = horner(den, x);
+            double norm = d[0] * d[0] + d[1] * d[1];
+            return new double[] {(n[0] * d[0] + n[1] * d[1]) / norm, (n[1] * d[0] - n[0] * d[1]) / norm};
+        });
+    }
+
+    private static double[] doubles(RationalPolynomial p) {
+        double[] c = new double[p.degree() + 1];
+        for (int i = 0; i <= p.degree(); i++) {
+            c[i] = p.coefficient(i).doubleValue();
+        }
+        return c;
+    }
+
+    /** Σ c_i x^i for complex x = {re, im}. */
+    private static double[] horner(double[] c, double[] x) {
+        double re = 0;
+        double im = 0;
+        for (int i = c.length - 1; i >= 0; i--) {
+            double r = re * x[0] - im * x[1] + c[i];
+            im = re * x[1] + im * x[0];
+            re = r;
+        }
+        return new double[] {re, im};
     }
 
     private FrequencyPoint at(Frequency w) {
