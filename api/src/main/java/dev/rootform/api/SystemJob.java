@@ -5,6 +5,7 @@ import dev.rootform.export.document.SystemReport;
 import dev.rootform.export.document.SystemReport.Eigenvalue;
 import dev.rootform.export.document.SystemReport.SignalReport;
 import dev.rootform.export.document.SystemReport.ValueRow;
+import dev.rootform.numeric.analysis.Analyzer;
 import dev.rootform.numeric.analysis.PointValue;
 import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.symbolic.algebra.Factor;
@@ -38,7 +39,8 @@ import java.util.OptionalInt;
 
 /**
  * One state-space analysis: read the matrices, compute χ, μ and the adjugate exactly, solve the
- * fundamental solutions (φ_0 through {@link Rootform#solve}, the others through the exact {@link Solver})
+ * fundamental solutions through the exact {@link Solver} ({@link Solver#solveBasis}: substitution,
+ * the values being proven with the assembled matrix; φ_0 also analysed for its roots and stability)
  * and every state and output of the response through {@link Rootform#solve},
  * assemble e^(At) or A^n, the transfer matrix and the Kalman ranks, cross-check the response
  * against the matrices themselves ({@link ResponseCheck}), and classify the outcome.
@@ -94,12 +96,14 @@ final class SystemJob {
         RationalPolynomial minimal = resolvent.minimalPolynomial();
         List<Factor> factors = JasFactorizer.factor(resolvent.characteristic());
         StateEquations equations = new StateEquations(model, minimal);
-        // φ_0 goes through the whole API (roots, stability, integrator check); φ_1.. need only the
-        // exact solver and its exact checks, which is most of the time saved for a large A
+        // every φ_k needs only the exact solver's substitution check (it lies in the kernel of μ):
+        // the values are proven with the whole matrix by X(0) = I, X^(k+1)(0) = A·X^(k)(0)
+        // (TransitionMatrix); φ_0 is also analysed (roots, stability, integrator check)
         List<Problem> problems = equations.fundamentals();
-        Report first = solved(problems.get(0), scalar);
-        List<Solution> solutions = new ArrayList<>(List.of(first.solution()));
-        problems.subList(1, problems.size()).forEach(p -> solutions.add(Solver.solve(p)));
+        Solution phi0 = Solver.solveBasis(problems.get(0));
+        Report first = new Report(phi0, new Analyzer(scalar.digits()).analyze(phi0, List.of()), scalar.digits(), scalar.numeric());
+        List<Solution> solutions = new ArrayList<>(List.of(phi0));
+        problems.subList(1, problems.size()).forEach(p -> solutions.add(Solver.solveBasis(p)));
         TransitionMatrix transition = TransitionMatrix.of(a, minimal, solutions);
         List<Check> checks = new ArrayList<>();
         checks.add(fundamentalsVerified(first, solutions));
@@ -148,7 +152,10 @@ final class SystemJob {
         return r.answer().orElseThrow(() -> new Unsolved(r));
     }
 
-    /** The solver's checks of φ_0..φ_{d-1}: exact for all, numeric too for φ_0. */
+    /**
+     * The solver's checks of φ_0..φ_{d-1}: exact substitution, and for φ_0 the numeric checks of its
+     * analysis; their values are part of the transition matrix's exact check.
+     */
     private static Check fundamentalsVerified(Report first, List<Solution> solutions) {
         List<String> failed = new ArrayList<>();
         for (int k = 0; k < solutions.size(); k++) {
@@ -157,8 +164,9 @@ final class SystemJob {
             }
         }
         return new Check("fundamental solutions φ_0..φ_" + (solutions.size() - 1) + " verified by the solver",
-                failed.isEmpty(), failed.isEmpty() ? solutions.size() + " scalar problems, each by exact substitution, its"
-                        + " conditions and an independent exact reference; φ_0 also by numerical integration (continuous)"
+                failed.isEmpty(), failed.isEmpty() ? solutions.size() + " scalar problems, each by exact substitution (μ"
+                        + " annihilates every component), φ_0 also by numerical integration (continuous); their initial"
+                        + " values are proven with the whole matrix (X(0) = I and X' = AX, or X[n+1] = A·X[n], below)"
                         : "failed for " + String.join(", ", failed));
     }
 

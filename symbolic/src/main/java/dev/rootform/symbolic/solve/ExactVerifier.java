@@ -50,7 +50,8 @@ final class ExactVerifier {
         return checks;
     }
 
-    private static Check substitution(ExactSolution solution) {
+    /** Check 1 alone: the operator annihilates every component, and L y - g vanishes for a forced equation. */
+    static Check substitution(ExactSolution solution) {
         for (Component c : solution.components()) {
             if (!annihilates(solution.domain(), solution.operator().coefficients(), c)) {
                 return new Check("satisfies the equation", false,

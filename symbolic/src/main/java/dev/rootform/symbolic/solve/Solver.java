@@ -43,6 +43,30 @@ public final class Solver {
      *     the solution
      */
     public static Solution solve(Problem problem) {
+        return solve(problem, true);
+    }
+
+    /**
+     * Solves an initial-value problem of a homogeneous equation, one basis solution of a larger
+     * answer, with the one exact check that such an answer builds on: substitution (the operator
+     * annihilates every component in its number field, so the solution lies in the operator's kernel
+     * whatever its constants). The conditions and the independent reference (Taylor coefficients or
+     * exact iteration) are left out: the caller proves the values of the assembled answer itself, as
+     * e^(At) does by X(0) = I and X^(k+1)(0) = A·X^(k)(0) exactly, which fixes every solution in that
+     * kernel.
+     *
+     * @throws IllegalArgumentException for a forced equation or a problem without conditions
+     * @throws dev.rootform.symbolic.model.InputException as {@link #solve} does
+     */
+    public static Solution solveBasis(Problem problem) {
+        if (!problem.equation().isHomogeneous() || problem.conditions().isEmpty()) {
+            throw new IllegalArgumentException("a basis solution solves a homogeneous initial-value problem: " + problem);
+        }
+        return solve(problem, false);
+    }
+
+    /** @param reference also check the conditions and against the independent reference */
+    private static Solution solve(Problem problem, boolean reference) {
         LinearEquation eq = problem.equation();
         RationalPolynomial chi = eq.characteristicPolynomial();
         List<Factor> factors = JasFactorizer.factor(chi);
@@ -62,7 +86,8 @@ public final class Solver {
             return withFreeConstants(problem, chi, mu);
         }
         ExactSolution exact = fitted(eq, mu, problem.conditions(), ForcingPart.RATIONAL);
-        List<Check> checks = new ArrayList<>(ExactVerifier.verify(exact, problem.conditions()));
+        List<Check> checks = new ArrayList<>(reference ? ExactVerifier.verify(exact, problem.conditions())
+                : List.of(ExactVerifier.substitution(exact)));
         ClosedForm general = ClosedFormBuilder.general(eq, factors);
         if (radicand == 1) {
             return new Solution(problem, chi, factors, ClosedFormBuilder.roots(factors), ClosedFormBuilder.fitted(exact, factors),

@@ -48,6 +48,7 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
         List<ExactSolution> phi = fundamentals.stream().map(s -> s.exact().orElseThrow()).toList();
         List<ClosedForm> forms = fundamentals.stream().map(Solution::closedForm).toList();
         ClosedForm basis = fundamentals.get(0).general();
+        LinearCombination sums = LinearCombination.over(phi, basis, forms);
         List<List<ClosedForm>> entries = new ArrayList<>();
         List<List<ExactSolution>> exact = new ArrayList<>();
         for (int i = 0; i < n; i++) {
@@ -59,8 +60,8 @@ public record TransitionMatrix(List<List<ClosedForm>> entries, List<List<ExactSo
                 for (int k = 0; k < d; k++) {
                     w.add(powers.get(k).get(i, j));
                 }
-                row.add(LinearCombination.of(basis, forms, w));
-                exactRow.add(LinearCombination.of(phi, w));
+                row.add(sums.closedForm(w));
+                exactRow.add(sums.exact(w));
             }
             entries.add(row);
             exact.add(exactRow);

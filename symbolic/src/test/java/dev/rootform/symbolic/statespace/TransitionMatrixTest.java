@@ -61,6 +61,43 @@ class TransitionMatrixTest {
     }
 
     @Test
+    void basisSolutionsGiveTheSameMatrixWithOnlyTheSubstitutionCheck() {
+        for (Domain domain : Domain.values()) {
+            // a Jordan block beside a rotation: a defective A with complex eigenvalues
+            RationalMatrix a = MatrixText.matrix("A", "[[2,1,0,0],[0,2,0,0],[0,0,0,-3],[0,0,3,0]]");
+            RationalPolynomial mu = Resolvent.of(a).minimalPolynomial();
+            List<Problem> problems = new StateEquations(StateModel.of(domain, a, null, null, null), mu).fundamentals();
+            List<Solution> basis = problems.stream().map(Solver::solveBasis).toList();
+            for (Solution s : basis) {
+                assertEquals(List.of("satisfies the equation"), s.checks().stream().map(Check::name).toList(), domain.toString());
+                assertTrue(s.verified(), s.checks().toString());
+            }
+            TransitionMatrix fast = TransitionMatrix.of(a, mu, basis);
+            assertTrue(fast.checks().stream().allMatch(Check::passed), fast.checks().toString());
+            assertEquals(of(a, domain).entries(), fast.entries(), domain.toString());
+        }
+    }
+
+    @Test
+    void theMatrixCheckCatchesABasisSolutionWithWrongInitialValues() {
+        // the proof of e^(At) and A^n rests on X(0) = I and the step X -> AX, not on the basis' own
+        // conditions: a basis solution fitted to a wrong condition must make it fail
+        for (Domain domain : Domain.values()) {
+            RationalMatrix a = MatrixText.matrix("A", "[[0,1,0],[0,0,1],[-6,-11,-6]]");
+            RationalPolynomial mu = Resolvent.of(a).minimalPolynomial();
+            List<Problem> problems = new StateEquations(StateModel.of(domain, a, null, null, null), mu).fundamentals();
+            List<Solution> basis = new ArrayList<>(problems.stream().map(Solver::solveBasis).toList());
+            Problem p = problems.get(1);
+            List<Condition> wrong = new ArrayList<>(p.conditions());
+            Condition last = wrong.get(wrong.size() - 1);
+            wrong.set(wrong.size() - 1, new Condition(last.derivative(), last.at(), last.value().add(dev.rootform.symbolic.algebra.Rational.ONE)));
+            basis.set(1, Solver.solveBasis(new Problem(p.equation(), wrong)));
+            TransitionMatrix t = TransitionMatrix.of(a, mu, basis);
+            assertTrue(t.checks().stream().anyMatch(c -> !c.passed()), domain + ": " + t.checks());
+        }
+    }
+
+    @Test
     void fibonacciMatrixPowersAreFibonacciNumbers() {
         // [[1,1],[1,0]]^n = [[F(n+1), F(n)], [F(n), F(n−1)]] (OEIS A000045)
         TransitionMatrix t = of(MatrixText.matrix("A", "[[1,1],[1,0]]"), Domain.DIFFERENCE);

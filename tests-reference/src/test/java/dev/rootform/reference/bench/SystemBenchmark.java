@@ -9,13 +9,17 @@ import java.util.List;
 import java.util.Random;
 
 /**
- * Warm medians of e^(At) for 10×10 models through {@link Rootform#system}: a coupled chain of five
- * carriages (positions and velocities; an invented conveyor) and a dense random integer matrix.
+ * Warm medians of e^(At) for 10×10 models through {@link Rootform#system}, wall and process CPU
+ * time: a coupled chain of five carriages (positions and velocities; an invented conveyor) and a
+ * dense random integer matrix.
  * Run: {@code mvn -B -o -pl tests-reference -am -DskipTests -Pbench -Dbench.class=dev.rootform.reference.bench.SystemBenchmark verify}.
  */
 public final class SystemBenchmark {
     private static final int WARM_UP = 3;
     private static final int RUNS = 7;
+    /** Process CPU time (all threads, JIT and GC included): less sensitive than wall time to other jobs on the machine. */
+    private static final com.sun.management.OperatingSystemMXBean CPU =
+            (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
 
     private SystemBenchmark() {
     }
@@ -30,17 +34,21 @@ public final class SystemBenchmark {
             run(a);
         }
         List<Double> ms = new ArrayList<>();
+        List<Double> cpu = new ArrayList<>();
         for (int i = 0; i < RUNS; i++) {
             long t0 = System.nanoTime();
+            long c0 = CPU.getProcessCpuTime();
             SystemResult r = run(a);
             ms.add((System.nanoTime() - t0) / 1e6);
+            cpu.add((CPU.getProcessCpuTime() - c0) / 1e6);
             if (!(r instanceof SystemResult.Analysed)) {
                 throw new IllegalStateException("not verified: " + r);
             }
         }
         Collections.sort(ms);
-        System.out.printf("%s: median %.0f ms (min %.0f, max %.0f, %d warm runs)%n", name, ms.get(RUNS / 2), ms.get(0),
-                ms.get(RUNS - 1), RUNS);
+        Collections.sort(cpu);
+        System.out.printf("%s: median %.0f ms (min %.0f, max %.0f, %d warm runs); process CPU median %.0f ms%n", name,
+                ms.get(RUNS / 2), ms.get(0), ms.get(RUNS - 1), RUNS, cpu.get(RUNS / 2));
     }
 
     private static SystemResult run(String a) {
