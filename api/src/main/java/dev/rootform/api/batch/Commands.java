@@ -13,6 +13,7 @@ final class Commands {
     private static final Map<String, Command> TABLE = new TreeMap<>(Map.of(
             "check", CheckLine::prepare,
             "recover", RecoverLine::prepare,
+            "response", ResponseLine::prepare,
             "solve", SolveLine::prepare));
 
     private Commands() {

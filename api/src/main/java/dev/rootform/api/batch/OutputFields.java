@@ -110,7 +110,14 @@ final class OutputFields {
                 return new Reply.Failed(refusal.get(), 2);
             }
             int exit = result instanceof Result.CheckFailed ? 3 : 0;
-            Rendering rendering = decorate.apply(exporter.render(answer.get(), names));
+            return rendered(decorate.apply(exporter.render(answer.get(), names)), exit);
+        }
+
+        /**
+         * A rendered answer of this output's format: for {@code json} the document itself, else
+         * {@code {"format", "text"}} and {@code "header"} for C with a header file.
+         */
+        Reply rendered(Rendering rendering, int exit) {
             if (exporter.format().equals(JSON)) {
                 return new Reply.Answered(parse(rendering.text()), exit);
             }

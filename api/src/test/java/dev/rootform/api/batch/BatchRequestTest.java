@@ -55,7 +55,7 @@ class BatchRequestTest {
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digts": 3}    | unknown field "digts" for solve
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digits": "3"} | "digits" must be a whole number in 1..10000
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digits": 0}   | "digits" must be a whole number in 1..10000
-        {"id": "b", "command": "tally", "problem": "x[n+1] = x[n]"}      | unknown command "tally" (one of check, recover, solve)
+        {"id": "b", "command": "tally", "problem": "x[n+1] = x[n]"}      | unknown command "tally" (one of check, recover, response, solve)
         {"id": "b"}                                                       | the request has no "problem"
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "format": "pdf"} | "format" pdf is not one of
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "header": "a.h"}  | "header" is for format c
@@ -134,6 +134,27 @@ class BatchRequestTest {
         assertTrue(java.get("text").asText().contains("public final class Powers"), java.toString());
         JsonNode none = json(answer("{\"id\": \"n\", \"command\": \"recover\", \"terms\": \"1, 2, 4, 8, 16, 32\", \"problem\": \"x[n+1] = x[n]\"}"));
         assertTrue(none.get("error").asText().contains("unknown field \"problem\" for recover"), none.toString());
+    }
+
+    @Test
+    void responseGivesTheTransferFunctionsFactsAndResponse() throws Exception {
+        // H(s) = 4/(s^2 + 2s + 4): ω_n = 2, ζ = 1/2; final value H(0) = 1 (final-value theorem) and
+        // overshoot exp(−ζπ/√(1 − ζ²)) = exp(−π/√3) ≈ 16.30 % (common practice: the standard second-order formulas)
+        JsonNode j = json(answer("{\"id\": \"r\", \"command\": \"response\", \"transfer\": \"H(s) = 4/(s^2 + 2s + 4)\","
+                + " \"to\": \"step\", \"frequencies\": [\"0\", \"2\"], \"digits\": 12}"));
+        assertEquals(0, j.get("exit").asInt(), j.toString());
+        assertEquals("1", j.get("dcGain").get("exact").asText());
+        assertEquals("1", j.get("stepFigures").get("finalValue").asText());
+        assertEquals(100 * Math.exp(-Math.PI / Math.sqrt(3)), j.get("stepFigures").get("overshootPercent").asDouble(), 1e-9);
+        assertEquals(2, j.get("frequencyResponse").size(), j.toString());
+        JsonNode page = json(answer("{\"id\": \"p\", \"command\": \"response\", \"transfer\": \"H(z) = 1/(1 - 0.5z^-1)\","
+                + " \"format\": \"html\"}"));
+        assertTrue(page.get("text").asText().contains("poles-plot"), page.toString());
+        JsonNode missing = json(answer("{\"id\": \"m\", \"command\": \"response\", \"to\": \"step\"}"));
+        assertEquals(2, missing.get("exit").asInt());
+        assertTrue(missing.get("error").asText().contains("transfer"), missing.toString());
+        JsonNode delay = json(answer("{\"id\": \"d\", \"command\": \"response\", \"transfer\": \"H(s) = e^(-s)/(s + 1)\"}"));
+        assertEquals(2, delay.get("exit").asInt(), delay.toString());
     }
 
     @Test
