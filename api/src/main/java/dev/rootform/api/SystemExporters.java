@@ -1,5 +1,6 @@
 package dev.rootform.api;
 
+import dev.rootform.export.html.HtmlRenderer;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Exporter;
 import dev.rootform.export.Report;
@@ -15,7 +16,8 @@ import java.util.List;
 
 /**
  * The formats of a state-space answer: {@code text}, {@code json}, {@code latex}, {@code mathml},
- * and {@code java} / {@code c} for the evaluator of the single output's response (the solve
+ * {@code html} (the report page; the response's plots need {@link Options#plots()}), and
+ * {@code java} / {@code c} for the evaluator of the single output's response (the solve
  * exporters on that output's scalar report).
  *
  * @since 0.3
@@ -26,7 +28,7 @@ public final class SystemExporters {
 
     /** Every format name, in a fixed order. */
     public static List<String> names() {
-        return List.of("text", "json", "latex", "mathml", "java", "c");
+        return List.of("text", "json", "latex", "mathml", "html", "java", "c");
     }
 
     /**
@@ -41,6 +43,7 @@ public final class SystemExporters {
             case "json" -> Rendering.of(SystemJsonRenderer.render(report));
             case "latex" -> Rendering.of(SystemLatexRenderer.render(report));
             case "mathml" -> Rendering.of(SystemMathMlRenderer.render(report));
+            case "html" -> Rendering.of(HtmlRenderer.render(report));
             case "java", "c" -> code(report, format, names);
             default -> throw new InputException("--format " + format + " is not one of " + String.join(", ", names()), "", -1);
         };

@@ -69,6 +69,9 @@ final class SystemCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         try {
             out.check();
+            if (out.documentOptions().withCode().isPresent()) {
+                throw new InputException("--with-code is not available for a state-space page (use --format java or c)", "", -1);
+            }
             SystemRequest request = mode.continuous ? SystemRequest.continuous(a) : SystemRequest.discrete(a);
             request = with(with(with(with(with(request, b, SystemRequest::withB), c, SystemRequest::withC), d,
                     SystemRequest::withD), x0, SystemRequest::withX0), to, SystemRequest::withInput).with(out.options(null));

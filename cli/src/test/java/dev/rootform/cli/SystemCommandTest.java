@@ -35,6 +35,12 @@ class SystemCommandTest {
         MainTest.Run java = MainTest.run(concat(base, "--format", "java", "--class", "Plant"));
         assertEquals(0, java.code(), java.err());
         assertTrue(java.out().contains("public final class Plant"), java.out());
+        MainTest.Run html = MainTest.run(concat(base, "--format", "html"));
+        assertEquals(0, html.code(), html.err());
+        assertTrue(html.out().startsWith("<!DOCTYPE html>") && html.out().contains("y1-plot"), html.out());
+        MainTest.Run withCode = MainTest.run(concat(base, "--format", "html", "--with-code", "java"));
+        assertEquals(2, withCode.code(), withCode.out());
+        assertTrue(withCode.err().contains("--with-code is not available"), withCode.err());
     }
 
     @ParameterizedTest

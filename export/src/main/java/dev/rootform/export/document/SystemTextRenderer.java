@@ -24,9 +24,21 @@ public final class SystemTextRenderer {
     }
 
     public static String render(SystemReport r) {
+        Layout out = new Layout();
+        sections(r).forEach(row -> out.section(row.label(), row.lines()));
+        return out.toString();
+    }
+
+    /**
+     * The answer's labelled sections in plain text, in the order shown (a section without lines is
+     * left out by the layouts): system, A..D, x0, input, characteristic, factored, minimal,
+     * eigenvalues, stability, e^(At) or A^n, transfer, controllability, observability, state, output,
+     * values, verification, caution.
+     */
+    public static List<FormulaRows.Row> sections(SystemReport r) {
         StateModel m = r.model();
         String lambda = EquationText.LAMBDA;
-        Layout out = new Layout();
+        List<FormulaRows.Row> out = new ArrayList<>();
         section(out, "system", List.of((m.continuous() ? "continuous: x' = Ax + Bu, y = Cx + Du" : "discrete: x[n+1] = Ax[n] + Bu[n], y[n] = Cx[n] + Du[n]")
                 + "; " + count(m.states(), "state") + ", " + count(m.inputs(), "input") + ", " + count(m.outputs(), "output")));
         section(out, "A", List.of(SystemTexts.matrix(m.a())));
@@ -85,7 +97,7 @@ public final class SystemTextRenderer {
         checks.add(r.verified() ? "verified" : "NOT verified");
         section(out, "verification", checks);
         section(out, "caution", List.of(CommentText.CAUTION));
-        return out.toString();
+        return out;
     }
 
     private static String count(int n, String noun) {
@@ -96,7 +108,7 @@ public final class SystemTextRenderer {
         return values.stream().map(v -> SystemTexts.value(v, digits)).toList().toString();
     }
 
-    private static void section(Layout out, String label, List<String> lines) {
-        out.section(label, lines);
+    private static void section(List<FormulaRows.Row> out, String label, List<String> lines) {
+        out.add(new FormulaRows.Row(label, lines));
     }
 }

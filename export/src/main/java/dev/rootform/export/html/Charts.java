@@ -54,8 +54,13 @@ final class Charts {
     record Series(String name, List<Sample> samples) {
     }
 
-    /** The solution against t or n, with its parts and the marked points. */
+    /** The solution against t or n, with its parts and the marked points; the SVG is {@code time-plot}. */
     static String time(TimePlot p, String variable, String function, List<Series> parts) {
+        return time(p, variable, function, parts, "time");
+    }
+
+    /** The same with the SVG element {@code id-plot}, for a page with several such plots. */
+    static String time(TimePlot p, String variable, String function, List<Series> parts, String id) {
         XYPlot plot = new XYPlot();
         NumberAxis x = new NumberAxis(variable);
         x.setAutoRangeIncludesZero(false);
@@ -98,7 +103,7 @@ final class Charts {
         if (!p.logScale()) {
             plot.addRangeMarker(new ValueMarker(0, BOUNDARY, new BasicStroke(0.8f)));
         }
-        return svg(chart(plot, true), WIDTH, 330, "time");
+        return svg(chart(plot, true), WIDTH, 330, id);
     }
 
     /** How one kind of point in the complex plane is drawn. */

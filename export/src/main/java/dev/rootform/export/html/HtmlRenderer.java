@@ -8,6 +8,7 @@ import dev.rootform.export.code.CodeRequests;
 import dev.rootform.export.code.JavaRenderer;
 import dev.rootform.export.code.ResponseCode;
 import dev.rootform.export.document.ResponseReport;
+import dev.rootform.export.document.SystemReport;
 import java.util.Optional;
 
 /**
@@ -41,6 +42,11 @@ public final class HtmlRenderer {
     public static String render(ResponseReport r, Optional<String> code, CodeNames names) {
         return PageRenderer.render(ResponsePage.of(r, code.map(language -> new Block.Code(language,
                 ResponseCode.decorate(r, Rendering.of(code(r.response(), language, names))).text()))));
+    }
+
+    /** The page of a state-space answer (no code on it). */
+    public static String render(SystemReport r) {
+        return PageRenderer.render(SystemPage.of(r));
     }
 
     private static String code(Report r, String language, CodeNames names) {

@@ -150,9 +150,13 @@ public final class ReportPage {
 
     /** The exact and numeric checks of {@code r} as a table. */
     static Block verification(Report r) {
-        List<List<String>> rows = Stream.concat(r.solution().checks().stream(), r.numericChecks().stream())
-                .map(c -> List.of(Html.text(c.name()), result(c), Html.text(c.detail()))).toList();
-        return new Block.Table(List.of("check", "result", "how"), rows);
+        return checks(Stream.concat(r.solution().checks().stream(), r.numericChecks().stream()).toList());
+    }
+
+    /** Checks as a table: name, passed or FAILED, how. */
+    static Block checks(List<Check> checks) {
+        return new Block.Table(List.of("check", "result", "how"),
+                checks.stream().map(c -> List.of(Html.text(c.name()), result(c), Html.text(c.detail()))).toList());
     }
 
     private static String result(Check c) {
