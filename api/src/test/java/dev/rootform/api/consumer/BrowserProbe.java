@@ -67,6 +67,19 @@ final class BrowserProbe {
         return f;
     }
 
+    /**
+     * Asserts that the probe's finding {@code drawn} about an SVG shows every sample of {@code time}:
+     * a stem per sample, or a curve through all of them.
+     */
+    static void assertDrawn(dev.rootform.numeric.plot.TimePlot time, JsonNode drawn, String name) {
+        assertTrue(drawn != null && drawn.get("height").asDouble() > 0, name + ": the plot is missing");
+        if (time.stems() && !time.logScale()) {
+            assertTrue(drawn.get("shapes").asInt() >= time.solution().size(), name + ": fewer stems than samples: " + drawn);
+        } else {
+            assertTrue(drawn.get("segments").asInt() >= time.solution().size() - 1, name + ": the curve lacks samples: " + drawn);
+        }
+    }
+
     /** The page with the error catcher first in its head and the probe last in its body. */
     private static String withProbe(String html, String probe) {
         String head = html.contains("<head>") ? html.replaceFirst("<head>", "<head>" + Matcher.quoteReplacement(CATCHER))

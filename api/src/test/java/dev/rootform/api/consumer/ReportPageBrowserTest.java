@@ -39,13 +39,7 @@ class ReportPageBrowserTest {
         assertTrue(roots != null && roots.get("width").asDouble() > 0, c + ": no roots plot: " + svgs.keySet());
         assertTrue(roots.get("shapes").asInt() + roots.get("paths").asInt() >= report.roots().size(), c + ": a root is not drawn: " + roots);
         TimePlot time = report.plots().orElseThrow().time().orElseThrow();
-        JsonNode drawn = svgs.get("time-plot");
-        assertTrue(drawn != null && drawn.get("height").asDouble() > 0, c + ": no plot of the solution: " + svgs.keySet());
-        if (time.stems() && !time.logScale()) {
-            assertTrue(drawn.get("shapes").asInt() >= time.solution().size(), c + ": fewer stems than samples: " + drawn);
-        } else {
-            assertTrue(drawn.get("segments").asInt() >= time.solution().size() - 1, c + ": the curve lacks samples: " + drawn);
-        }
+        BrowserProbe.assertDrawn(time, svgs.get("time-plot"), c + " (the solution, among " + svgs.keySet() + ")");
         Optional<?> frequency = report.plots().orElseThrow().frequency();
         assertEquals(frequency.isPresent(), svgs.containsKey("frequency-plot"), c + ": frequency plot present only with a steady state");
         if (frequency.isPresent()) {

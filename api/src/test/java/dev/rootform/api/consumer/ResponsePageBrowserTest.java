@@ -63,13 +63,7 @@ class ResponsePageBrowserTest {
         int points = r.poleValues().size() + r.zeroValues().size();
         assertTrue(plane.get("shapes").asInt() + plane.get("paths").asInt() >= points, c + ": a pole or zero is not drawn: " + plane);
         TimePlot time = r.response().plots().orElseThrow().time().orElseThrow();
-        JsonNode drawn = svgs.get("time-plot");
-        assertTrue(drawn != null && drawn.get("height").asDouble() > 0, c + ": no plot of the response: " + svgs.keySet());
-        if (time.stems() && !time.logScale()) {
-            assertTrue(drawn.get("shapes").asInt() >= time.solution().size(), c + ": fewer stems than samples: " + drawn);
-        } else {
-            assertTrue(drawn.get("segments").asInt() >= time.solution().size() - 1, c + ": the curve lacks samples: " + drawn);
-        }
+        BrowserProbe.assertDrawn(time, svgs.get("time-plot"), c + " (the response, among " + svgs.keySet() + ")");
         FrequencyPlot frequency = r.frequencyPlot().orElseThrow();
         assertTrue(svgs.get("frequency-plot").get("segments").asInt() >= frequency.magnitudeDb().size() / 2,
                 c + ": frequency response without data: " + svgs.get("frequency-plot"));
