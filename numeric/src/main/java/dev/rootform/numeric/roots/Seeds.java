@@ -49,9 +49,9 @@ final class Seeds {
 
     /**
      * r at {@code precision} digits. Numerator and denominator go in through {@code BigDecimal}: apfloat
-     * 1.12's {@code BigInteger} constructor takes about 0.5 ms even for one-digit integers (it reads the
-     * digits through a stream into storage sized for the precision), the {@code BigDecimal} one about
-     * 0.2 µs, with the same value.
+     * 1.12's {@code BigInteger} constructor took about 0.5 ms even for one-digit integers (measured; its
+     * time goes to reading the digits through a stream and sizing a data storage), the
+     * {@code BigDecimal} one about 0.2 µs, for the same value.
      */
     static Apfloat toApfloat(Rational r, long precision) {
         return new Apfloat(new BigDecimal(r.numerator()), precision).divide(new Apfloat(new BigDecimal(r.denominator()), precision));
