@@ -47,6 +47,9 @@ final class ResponseCommand implements Callable<Integer> {
     public Integer call() {
         try {
             out.check();
+            if (out.documentOptions().standalone()) {
+                throw new InputException("--standalone is not available for a response: its LaTeX is a fragment", "", -1);
+            }
             ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format, out.documentOptions()).orElseThrow(() -> new InputException(
                     "--format " + out.format + " is not available for a response; use one of "
                             + String.join(", ", ResponseExporters.names()), "", -1));

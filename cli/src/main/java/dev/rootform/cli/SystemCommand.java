@@ -72,6 +72,9 @@ final class SystemCommand implements Callable<Integer> {
             if (out.documentOptions().withCode().isPresent()) {
                 throw new InputException("--with-code is not available for a state-space page (use --format java or c)", "", -1);
             }
+            if (out.documentOptions().standalone()) {
+                throw new InputException("--standalone is not available for a state-space answer: its LaTeX is a fragment", "", -1);
+            }
             SystemRequest request = mode.continuous ? SystemRequest.continuous(a) : SystemRequest.discrete(a);
             request = with(with(with(with(with(request, b, SystemRequest::withB), c, SystemRequest::withC), d,
                     SystemRequest::withD), x0, SystemRequest::withX0), to, SystemRequest::withInput).with(out.options(null));

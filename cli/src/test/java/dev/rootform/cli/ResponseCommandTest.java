@@ -88,6 +88,13 @@ class ResponseCommandTest {
     }
 
     @Test
+    void aStandaloneDocumentIsRefused() {
+        MainTest.Run r = MainTest.run("response", "H(s) = 1/(s + 1)", "--format", "latex", "--standalone");
+        assertEquals(2, r.code(), r.out());
+        assertTrue(r.err().contains("--standalone is not available for a response"), r.err());
+    }
+
+    @Test
     void writesJavaThatNamesTheTransferFunction(@TempDir Path dir) throws Exception {
         Path java = dir.resolve("Step.java");
         MainTest.Run r = MainTest.run("response", "H(s) = 4/(s^2 + 2s + 4)", "--to", "step", "--format", "java", "--class", "Step",

@@ -41,6 +41,9 @@ class SystemCommandTest {
         MainTest.Run withCode = MainTest.run(concat(base, "--format", "html", "--with-code", "java"));
         assertEquals(2, withCode.code(), withCode.out());
         assertTrue(withCode.err().contains("--with-code is not available"), withCode.err());
+        MainTest.Run standalone = MainTest.run(concat(base, "--format", "latex", "--standalone"));
+        assertEquals(2, standalone.code(), standalone.out());
+        assertTrue(standalone.err().contains("--standalone is not available"), standalone.err());
     }
 
     @ParameterizedTest
