@@ -1,6 +1,7 @@
 package dev.rootform.export.notation;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.closedform.ClosedForm;
@@ -179,8 +180,51 @@ public final class FormulaWriter {
                 String written = surd(m);
                 fs.add(0, fs.isEmpty() || m.isRational() ? written : twoParts(m) ? n.parens(written) : n.clarify(written));
             }
+        } else if (c instanceof Coefficient.Trig trig) {
+            Signed written = trig(trig);
+            negative = written.negative();
+            fs.add(0, fs.isEmpty() ? written.body() : n.parens(written.body()));
         }
         return Optional.of(new Signed(negative, fs.stream().reduce(n::times).orElseThrow()));
+    }
+
+    /**
+     * a + b·√r with a, b in Q(cos ω)[sin ω], over the common denominator D(cos ω):
+     * (N0 + N1·sin ω + (N2 + N3·sin ω)·√r)/D, every N_k a polynomial in cos ω written term by term;
+     * a sign in front of a lone numerator term is pulled out.
+     */
+    private Signed trig(Coefficient.Trig t) {
+        String omega = number(t.frequency());
+        String cos = n.function("cos", omega);
+        String sin = n.function("sin", omega);
+        String root = n.sqrt(n.number(t.radicand().toString()));
+        List<RationalFunction> parts = List.of(t.rational().rational(), t.rational().sine(), t.radical().rational(),
+                t.radical().sine());
+        List<List<String>> extra = List.of(List.of(), List.of(sin), List.of(root), List.of(sin, root));
+        RationalPolynomial d = RationalPolynomial.ONE;
+        for (RationalFunction f : parts) {
+            d = d.multiply(f.denominator()).divide(d.gcd(f.denominator()));
+        }
+        d = d.monic();
+        List<Signed> pieces = new ArrayList<>();
+        for (int k = 0; k < parts.size(); k++) {
+            RationalPolynomial top = parts.get(k).numerator().multiply(d.divide(parts.get(k).denominator()));
+            for (int i = top.degree(); i >= 0; i--) {
+                List<String> fs = new ArrayList<>();
+                fs.add(power(cos, i));
+                fs.addAll(extra.get(k));
+                product(new Coefficient.Exact(Surd.of(top.coefficient(i))), fs).ifPresent(pieces::add);
+            }
+        }
+        boolean negative = pieces.size() == 1 && pieces.get(0).negative();
+        if (negative) {
+            pieces.replaceAll(Signed::flipped);
+        }
+        String top = sum(pieces);
+        long terms = d.coefficients().stream().filter(q -> !q.isZero()).count();
+        String bottom = polynomial(d, cos);
+        return new Signed(negative, d.degree() == 0 ? top
+                : n.fraction(pieces.size() > 1 ? n.clarify(top) : top, terms > 1 ? n.clarify(bottom) : bottom));
     }
 
     /** e^(rate·v) for differential equations, rate^v for difference equations; empty when trivial. */

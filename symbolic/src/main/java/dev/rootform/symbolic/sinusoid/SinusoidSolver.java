@@ -1,12 +1,11 @@
 package dev.rootform.symbolic.sinusoid;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.algebra.RationalFunction;
-import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.work.Deadline;
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -18,6 +17,9 @@ import java.util.Map;
  * q·n^p·r^n·cos(ωn) and q·n^p·r^n·sin(ωn) with ω a nonzero rational (not a rational multiple of
  * π), by undetermined coefficients (common practice) in the basis n^j·r^n·cos(ωn),
  * n^j·r^n·sin(ωn), j ≤ m = the highest p, with constants in Q(c)[s] ({@link TrigNumber}).
+ *
+ * <p>Several frequencies share one field: each |ω| is a whole multiple k·ω0 of the
+ * {@link #baseFrequency}, and c = cos ω0, s = sin ω0.
  *
  * <p>Shifting uses cos(ω(n + d)) = cos(ωn)·cos(dω) − sin(ωn)·sin(dω) and
  * sin(ω(n + d)) = sin(ωn)·cos(dω) + cos(ωn)·sin(dω), with cos(dω) = T_d(c) and
@@ -39,9 +41,39 @@ public final class SinusoidSolver {
         return t.oscillation() != ForcingTerm.Oscillation.NONE && !t.frequencyTimesPi() && !t.frequency().isZero();
     }
 
+    /** True for a recurrence with at least one forcing term this class solves. */
+    public static boolean appliesTo(LinearEquation eq) {
+        return eq.domain() == Domain.DIFFERENCE && eq.forcing().stream().anyMatch(SinusoidSolver::handles);
+    }
+
     /**
-     * One particular solution per (base, frequency) among the forcing terms that {@link #handles};
-     * their sum solves the equation for those terms (other terms are left to the caller).
+     * ω0, the largest rational of which every frequency |ω| of the terms this class handles is a whole
+     * multiple (gcd of the numerators over lcm of the denominators): the constants of every frequency
+     * then lie in the one field Q(cos ω0)[sin ω0], since cos(kω0) and sin(kω0) are polynomials in
+     * cos ω0 and sin ω0.
+     *
+     * @throws IllegalArgumentException if no term is handled
+     */
+    public static Rational baseFrequency(LinearEquation eq) {
+        BigInteger top = BigInteger.ZERO;
+        BigInteger bottom = BigInteger.ONE;
+        for (ForcingTerm t : eq.forcing()) {
+            if (handles(t)) {
+                Rational w = t.frequency().abs();
+                top = top.gcd(w.numerator());
+                bottom = bottom.divide(bottom.gcd(w.denominator())).multiply(w.denominator());
+            }
+        }
+        if (top.signum() == 0) {
+            throw new IllegalArgumentException("no sampled sinusoid in " + eq.forcing());
+        }
+        return Rational.of(top, bottom);
+    }
+
+    /**
+     * One particular solution per (base, |frequency|) among the forcing terms that {@link #handles};
+     * their sum solves the equation for those terms (other terms are left to the caller). Constants
+     * lie in Q(cos ω0)[sin ω0] for ω0 = {@link #baseFrequency}.
      *
      * @throws IllegalArgumentException for a differential equation
      */
@@ -49,14 +81,15 @@ public final class SinusoidSolver {
         if (eq.domain() != Domain.DIFFERENCE) {
             throw new IllegalArgumentException("sampled sinusoids belong to recurrences");
         }
+        Rational base = baseFrequency(eq);
         Map<List<Rational>, List<ForcingTerm>> groups = new LinkedHashMap<>();
         for (ForcingTerm t : eq.forcing()) {
             if (handles(t)) {
-                groups.computeIfAbsent(List.of(t.exponential(), t.frequency()), k -> new ArrayList<>()).add(t);
+                groups.computeIfAbsent(List.of(t.exponential(), t.frequency().abs()), k -> new ArrayList<>()).add(t);
             }
         }
         List<SinusoidalParticular> result = new ArrayList<>();
-        groups.forEach((key, terms) -> result.add(solve(eq, key.get(0), key.get(1), terms)));
+        groups.forEach((key, terms) -> result.add(solve(eq, key.get(0), key.get(1), base, terms)));
         return result;
     }
 
@@ -66,11 +99,11 @@ public final class SinusoidSolver {
      */
     public static boolean verifies(LinearEquation eq, SinusoidalParticular p) {
         List<ForcingTerm> terms = eq.forcing().stream()
-                .filter(t -> handles(t) && t.exponential().equals(p.base()) && t.frequency().equals(p.frequency())).toList();
+                .filter(t -> handles(t) && t.exponential().equals(p.base()) && t.frequency().abs().equals(p.frequency())).toList();
         int size = 2 * (p.degree() + 1);
         List<TrigNumber> unknowns = new ArrayList<>(p.cosine());
         unknowns.addAll(p.sine());
-        TrigNumber[][] a = system(eq, p.base(), p.degree());
+        TrigNumber[][] a = system(eq, p.base(), p.degree(), p.multiple());
         TrigNumber[] f = forcing(terms, p.degree());
         for (int row = 0; row < size; row++) {
             TrigNumber sum = TrigNumber.ZERO;
@@ -84,28 +117,32 @@ public final class SinusoidSolver {
         return true;
     }
 
-    private static SinusoidalParticular solve(LinearEquation eq, Rational base, Rational frequency, List<ForcingTerm> terms) {
+    private static SinusoidalParticular solve(LinearEquation eq, Rational base, Rational frequency, Rational baseFrequency,
+            List<ForcingTerm> terms) {
         int m = terms.stream().mapToInt(ForcingTerm::power).max().orElseThrow();
-        TrigNumber[] x = eliminate(system(eq, base, m), forcing(terms, m));
-        return new SinusoidalParticular(frequency, base, List.of(x).subList(0, m + 1), List.of(x).subList(m + 1, 2 * m + 2));
+        int multiple = frequency.divide(baseFrequency).toBigInteger().intValueExact();
+        TrigNumber[] x = eliminate(system(eq, base, m, multiple), forcing(terms, m));
+        return new SinusoidalParticular(frequency, multiple, base, List.of(x).subList(0, m + 1), List.of(x).subList(m + 1, 2 * m + 2));
     }
 
-    /** The right-hand side: rows cos_0..cos_m, then sin_0..sin_m. */
+    /** The right-hand side: rows cos_0..cos_m, then sin_0..sin_m (sin(−ωn) = −sin(ωn)). */
     private static TrigNumber[] forcing(List<ForcingTerm> terms, int m) {
         TrigNumber[] f = new TrigNumber[2 * (m + 1)];
         Arrays.fill(f, TrigNumber.ZERO);
         for (ForcingTerm t : terms) {
-            int row = (t.oscillation() == ForcingTerm.Oscillation.COS ? 0 : m + 1) + t.power();
-            f[row] = f[row].add(TrigNumber.of(t.coefficient()));
+            boolean cosine = t.oscillation() == ForcingTerm.Oscillation.COS;
+            int row = (cosine ? 0 : m + 1) + t.power();
+            Rational q = cosine ? t.coefficient() : t.coefficient().multiply(Rational.of(t.frequency().signum()));
+            f[row] = f[row].add(TrigNumber.of(q));
         }
         return f;
     }
 
     /**
-     * The matrix of L on the basis: column j (or m + 1 + j) holds L applied to n^j·r^n·cos(ωn) (or
-     * sin), as coefficients of n^i·r^n·cos(ωn) in rows i and of n^i·r^n·sin(ωn) in rows m + 1 + i.
+     * The matrix of L on the basis: column j (or m + 1 + j) holds L applied to n^j·r^n·cos(kω0·n) (or
+     * sin), as coefficients of n^i·r^n·cos(kω0·n) in rows i and of n^i·r^n·sin(kω0·n) in rows m + 1 + i.
      */
-    private static TrigNumber[][] system(LinearEquation eq, Rational base, int m) {
+    private static TrigNumber[][] system(LinearEquation eq, Rational base, int m, int multiple) {
         int size = 2 * (m + 1);
         TrigNumber[][] a = new TrigNumber[size][size];
         for (TrigNumber[] row : a) {
@@ -113,8 +150,8 @@ public final class SinusoidSolver {
         }
         for (int k = 0; k < eq.coefficients().size(); k++) {
             int d = eq.shift() + k;
-            TrigNumber cosD = cosineOfMultiple(d);
-            TrigNumber sinD = sineOfMultiple(d);
+            TrigNumber cosD = TrigNumber.cosineOfMultiple((long) d * multiple);
+            TrigNumber sinD = TrigNumber.sineOfMultiple((long) d * multiple);
             Rational scale = eq.coefficients().get(k).multiply(base.pow(d));
             for (int j = 0; j <= m; j++) {
                 for (int i = 0; i <= j; i++) {
@@ -164,36 +201,6 @@ public final class SinusoidSolver {
         Object held = array[i];
         array[i] = array[j];
         array[j] = held;
-    }
-
-    /** cos(dω) = T_|d|(c). */
-    static TrigNumber cosineOfMultiple(int d) {
-        return TrigNumber.of(RationalFunction.of(chebyshev(Math.abs(d), RationalPolynomial.X)));
-    }
-
-    /** sin(dω) = sign(d)·s·U_{|d|−1}(c). */
-    static TrigNumber sineOfMultiple(int d) {
-        if (d == 0) {
-            return TrigNumber.ZERO;
-        }
-        RationalPolynomial u = chebyshev(Math.abs(d) - 1, RationalPolynomial.ofIntegers(0, 2));
-        return TrigNumber.SINE.multiply(TrigNumber.of(RationalFunction.of(u.multiply(Rational.of(Integer.signum(d))))));
-    }
-
-    /** P_k with P_0 = 1, P_1 = {@code first}, P_{k+1} = 2c·P_k − P_{k−1} (T for first = c, U for 2c). */
-    private static RationalPolynomial chebyshev(int k, RationalPolynomial first) {
-        RationalPolynomial previous = RationalPolynomial.ONE;
-        RationalPolynomial current = first;
-        if (k == 0) {
-            return previous;
-        }
-        RationalPolynomial twoC = RationalPolynomial.ofIntegers(0, 2);
-        for (int i = 1; i < k; i++) {
-            RationalPolynomial next = twoC.multiply(current).subtract(previous);
-            previous = current;
-            current = next;
-        }
-        return current;
     }
 
     private static Rational binomial(int n, int k) {

@@ -6,15 +6,17 @@ import java.util.Objects;
 
 /**
  * A particular solution Σ_j n^j·r^n·(A_j·cos(ωn) + B_j·sin(ωn)) of a recurrence, with exact
- * constants A_j, B_j in Q(c)[s] (c = cos ω, s = sin ω).
+ * constants A_j, B_j in Q(c)[s] (c = cos ω0, s = sin ω0 for the base frequency ω0 = ω/k).
  *
- * @param frequency ω, a nonzero rational
+ * @param frequency ω &gt; 0, a rational
+ * @param multiple k &ge; 1 with ω = k·ω0
  * @param base r, the nonzero base of the exponential factor (1 when there is none)
  * @param cosine A_0..A_m
  * @param sine B_0..B_m
  * @since 0.1
  */
-public record SinusoidalParticular(Rational frequency, Rational base, List<TrigNumber> cosine, List<TrigNumber> sine) {
+public record SinusoidalParticular(Rational frequency, int multiple, Rational base, List<TrigNumber> cosine,
+        List<TrigNumber> sine) {
     public SinusoidalParticular {
         Objects.requireNonNull(frequency, "frequency");
         Objects.requireNonNull(base, "base");
@@ -23,6 +25,9 @@ public record SinusoidalParticular(Rational frequency, Rational base, List<TrigN
         if (cosine.size() != sine.size()) {
             throw new IllegalArgumentException("as many cosine as sine constants are needed");
         }
+        if (multiple < 1 || frequency.signum() <= 0) {
+            throw new IllegalArgumentException("frequency and multiple must be positive");
+        }
     }
 
     /** m, the highest power of n. */
@@ -30,8 +35,21 @@ public record SinusoidalParticular(Rational frequency, Rational base, List<TrigN
         return cosine.size() - 1;
     }
 
+    /** The exact value at n in Q(c)[s], with cos(kω0·n) = T_{kn}(c) and sin(kω0·n) = s·U_{kn−1}(c). */
+    public TrigNumber valueAt(long n) {
+        TrigNumber cosAtN = TrigNumber.cosineOfMultiple(n * multiple);
+        TrigNumber sinAtN = TrigNumber.sineOfMultiple(n * multiple);
+        TrigNumber sum = TrigNumber.ZERO;
+        Rational power = Rational.ONE;
+        for (int j = 0; j <= degree(); j++) {
+            sum = sum.add(cosine.get(j).multiply(cosAtN).add(sine.get(j).multiply(sinAtN)).multiply(power));
+            power = power.multiply(Rational.of(n));
+        }
+        return sum.multiply(base.pow(Math.toIntExact(n)));
+    }
+
     /**
-     * The value at n, exact at a point (c, s) = (cos ω, sin ω) given with cos(ωn), sin(ωn).
+     * The value at n, exact at a point (c, s) = (cos ω0, sin ω0) given with cos(ωn), sin(ωn).
      *
      * @param cosOmega c at the point
      * @param sinOmega s at the point
