@@ -17,8 +17,8 @@ import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 
 /**
- * Values of a recurrence's solution exact over Q(cos ω0)[sin ω0] ({@link SinusoidSolution}): the
- * exact parts (rational-valued solutions) exactly or from their modes, cos ω0, sin ω0 and cos(ωn),
+ * Values of a recurrence's solution exact over Q(cos ω)[sin ω] ({@link SinusoidSolution}): the
+ * exact parts (rational-valued solutions) exactly or from their modes, cos ω, sin ω and cos(ωn),
  * sin(ωn) in apfloat at a working precision, the elements of Q(c)[s] evaluated exactly at those
  * decimals; a value is given when two working precisions agree to the digits asked. Also the
  * independent check of the closed form against the recurrence iterated in apfloat.
@@ -106,16 +106,22 @@ final class SinusoidValues {
 
     /** {x[n], the largest part in size} at a working precision. */
     private static Apfloat[] evaluate(SinusoidSolution s, long n, int working, RootCache cache) {
-        Apcomplex unit = ComplexExp.exp(new Apcomplex(Apfloat.ZERO, Decimals.toApfloat(s.frequency(), working)), working);
-        Rational c = Rational.of(Decimals.toBigDecimal(unit.real(), working));
-        Rational sine = Rational.of(Decimals.toBigDecimal(unit.imag(), working));
+        List<Apfloat> units = new ArrayList<>();
+        for (ExactSolution u : s.units()) {
+            units.add(exactPart(u, n, working, cache));
+        }
         List<Apfloat> parts = new ArrayList<>();
         parts.add(exactPart(s.rest(), n, working, cache));
-        for (int j = 0; j < s.units().size(); j++) {
-            parts.add(exactPart(s.units().get(j), n, working, cache).multiply(at(s.weights().get(j), c, sine, working)));
-        }
-        for (SinusoidalParticular p : s.particular()) {
-            parts.add(particular(p, n, c, sine, working));
+        for (SinusoidSolution.Wave w : s.waves()) {
+            Apcomplex unit = ComplexExp.exp(new Apcomplex(Apfloat.ZERO, Decimals.toApfloat(w.frequency(), working)), working);
+            Rational c = Rational.of(Decimals.toBigDecimal(unit.real(), working));
+            Rational sine = Rational.of(Decimals.toBigDecimal(unit.imag(), working));
+            for (int j = 0; j < units.size(); j++) {
+                parts.add(units.get(j).multiply(at(w.weights().get(j), c, sine, working)));
+            }
+            for (SinusoidalParticular p : w.particular()) {
+                parts.add(particular(p, n, c, sine, working));
+            }
         }
         Apfloat sum = Apfloat.ZERO;
         Apfloat largest = Apfloat.ZERO;

@@ -3,6 +3,8 @@ package dev.rootform.symbolic.closedform;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.sinusoid.TrigNumber;
 import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 
 /**
@@ -20,28 +22,61 @@ public sealed interface Coefficient permits Coefficient.Exact, Coefficient.Trig,
     }
 
     /**
-     * The exact real number a + b·√r with a, b in Q(cos ω)[sin ω] (cos ω and sin ω kept as named
-     * exact quantities; see {@link TrigNumber}), for a recurrence forced at the frequency ω.
+     * The exact real number Σ_ω (a_ω + b_ω·√r) with a_ω, b_ω in Q(cos ω)[sin ω] (cos ω and sin ω kept
+     * as named exact quantities; see {@link TrigNumber}), for a recurrence forced at the frequencies ω:
+     * one part per frequency, each exact in its own field.
      *
-     * @param frequency ω, a positive rational
-     * @param rational a
-     * @param radical b (zero when r = 1)
+     * @param parts the parts, at distinct frequencies, none zero
      * @param radicand r, squarefree, 1 when there is no square root
      */
-    record Trig(Rational frequency, TrigNumber rational, TrigNumber radical, BigInteger radicand) implements Coefficient {
+    record Trig(List<Part> parts, BigInteger radicand) implements Coefficient {
+        /**
+         * a + b·√r in Q(cos ω)[sin ω](√r).
+         *
+         * @param frequency ω, a positive rational
+         * @param rational a
+         * @param radical b (zero when r = 1)
+         */
+        public record Part(Rational frequency, TrigNumber rational, TrigNumber radical) {
+            public Part {
+                Objects.requireNonNull(frequency, "frequency");
+                Objects.requireNonNull(rational, "rational");
+                Objects.requireNonNull(radical, "radical");
+            }
+
+            boolean isRational() {
+                return rational.isRational() && radical.isRational();
+            }
+        }
+
         public Trig {
-            Objects.requireNonNull(frequency, "frequency");
-            Objects.requireNonNull(rational, "rational");
-            Objects.requireNonNull(radical, "radical");
+            parts = List.copyOf(parts);
             Objects.requireNonNull(radicand, "radicand");
         }
 
-        /** a + b·√r, as an {@link Exact} surd when a and b are rational (no cos ω, no sin ω). */
-        public static Coefficient of(Rational frequency, TrigNumber a, TrigNumber b, BigInteger radicand) {
-            if (a.isRational() && b.isRational()) {
-                return new Exact(b.isZero() ? Surd.of(a.toRational()) : Surd.of(a.toRational(), b.toRational(), Rational.of(radicand)));
+        /**
+         * Σ parts, as an {@link Exact} surd when every part is rational (no cos ω, no sin ω); the
+         * rational parts are gathered into the first other part, zero parts left out.
+         */
+        public static Coefficient of(List<Part> parts, BigInteger radicand) {
+            Rational a = Rational.ZERO;
+            Rational b = Rational.ZERO;
+            List<Part> kept = new ArrayList<>();
+            for (Part p : parts) {
+                if (p.isRational()) {
+                    a = a.add(p.rational().toRational());
+                    b = b.add(p.radical().toRational());
+                } else {
+                    kept.add(p);
+                }
             }
-            return new Trig(frequency, a, b.isZero() ? TrigNumber.ZERO : b, b.isZero() ? BigInteger.ONE : radicand);
+            if (kept.isEmpty()) {
+                return new Exact(b.isZero() ? Surd.of(a) : Surd.of(a, b, Rational.of(radicand)));
+            }
+            Part first = kept.get(0);
+            kept.set(0, new Part(first.frequency(), first.rational().add(TrigNumber.of(a)), first.radical().add(TrigNumber.of(b))));
+            boolean root = kept.stream().anyMatch(p -> !p.radical().isZero());
+            return new Trig(kept, root ? radicand : BigInteger.ONE);
         }
     }
 

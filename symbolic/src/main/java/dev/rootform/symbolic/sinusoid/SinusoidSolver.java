@@ -5,7 +5,6 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.work.Deadline;
-import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -18,8 +17,7 @@ import java.util.Map;
  * π), by undetermined coefficients (common practice) in the basis n^j·r^n·cos(ωn),
  * n^j·r^n·sin(ωn), j ≤ m = the highest p, with constants in Q(c)[s] ({@link TrigNumber}).
  *
- * <p>Several frequencies share one field: each |ω| is a whole multiple k·ω0 of the
- * {@link #baseFrequency}, and c = cos ω0, s = sin ω0.
+ * <p>Each frequency has its own field Q(cos ω)[sin ω]; the sum over frequencies is a formal sum.
  *
  * <p>Shifting uses cos(ω(n + d)) = cos(ωn)·cos(dω) − sin(ωn)·sin(dω) and
  * sin(ω(n + d)) = sin(ωn)·cos(dω) + cos(ωn)·sin(dω), with cos(dω) = T_d(c) and
@@ -47,33 +45,9 @@ public final class SinusoidSolver {
     }
 
     /**
-     * ω0, the largest rational of which every frequency |ω| of the terms this class handles is a whole
-     * multiple (gcd of the numerators over lcm of the denominators): the constants of every frequency
-     * then lie in the one field Q(cos ω0)[sin ω0], since cos(kω0) and sin(kω0) are polynomials in
-     * cos ω0 and sin ω0.
-     *
-     * @throws IllegalArgumentException if no term is handled
-     */
-    public static Rational baseFrequency(LinearEquation eq) {
-        BigInteger top = BigInteger.ZERO;
-        BigInteger bottom = BigInteger.ONE;
-        for (ForcingTerm t : eq.forcing()) {
-            if (handles(t)) {
-                Rational w = t.frequency().abs();
-                top = top.gcd(w.numerator());
-                bottom = bottom.divide(bottom.gcd(w.denominator())).multiply(w.denominator());
-            }
-        }
-        if (top.signum() == 0) {
-            throw new IllegalArgumentException("no sampled sinusoid in " + eq.forcing());
-        }
-        return Rational.of(top, bottom);
-    }
-
-    /**
      * One particular solution per (base, |frequency|) among the forcing terms that {@link #handles};
-     * their sum solves the equation for those terms (other terms are left to the caller). Constants
-     * lie in Q(cos ω0)[sin ω0] for ω0 = {@link #baseFrequency}.
+     * their sum solves the equation for those terms (other terms are left to the caller). The constants
+     * of frequency ω lie in Q(cos ω)[sin ω].
      *
      * @throws IllegalArgumentException for a differential equation
      */
@@ -81,7 +55,6 @@ public final class SinusoidSolver {
         if (eq.domain() != Domain.DIFFERENCE) {
             throw new IllegalArgumentException("sampled sinusoids belong to recurrences");
         }
-        Rational base = baseFrequency(eq);
         Map<List<Rational>, List<ForcingTerm>> groups = new LinkedHashMap<>();
         for (ForcingTerm t : eq.forcing()) {
             if (handles(t)) {
@@ -89,7 +62,7 @@ public final class SinusoidSolver {
             }
         }
         List<SinusoidalParticular> result = new ArrayList<>();
-        groups.forEach((key, terms) -> result.add(solve(eq, key.get(0), key.get(1), base, terms)));
+        groups.forEach((key, terms) -> result.add(solve(eq, key.get(0), key.get(1), terms)));
         return result;
     }
 
@@ -103,7 +76,7 @@ public final class SinusoidSolver {
         int size = 2 * (p.degree() + 1);
         List<TrigNumber> unknowns = new ArrayList<>(p.cosine());
         unknowns.addAll(p.sine());
-        TrigNumber[][] a = system(eq, p.base(), p.degree(), p.multiple());
+        TrigNumber[][] a = system(eq, p.base(), p.degree());
         TrigNumber[] f = forcing(terms, p.degree());
         for (int row = 0; row < size; row++) {
             TrigNumber sum = TrigNumber.ZERO;
@@ -117,12 +90,10 @@ public final class SinusoidSolver {
         return true;
     }
 
-    private static SinusoidalParticular solve(LinearEquation eq, Rational base, Rational frequency, Rational baseFrequency,
-            List<ForcingTerm> terms) {
+    private static SinusoidalParticular solve(LinearEquation eq, Rational base, Rational frequency, List<ForcingTerm> terms) {
         int m = terms.stream().mapToInt(ForcingTerm::power).max().orElseThrow();
-        int multiple = frequency.divide(baseFrequency).toBigInteger().intValueExact();
-        TrigNumber[] x = eliminate(system(eq, base, m, multiple), forcing(terms, m));
-        return new SinusoidalParticular(frequency, multiple, base, List.of(x).subList(0, m + 1), List.of(x).subList(m + 1, 2 * m + 2));
+        TrigNumber[] x = eliminate(system(eq, base, m), forcing(terms, m));
+        return new SinusoidalParticular(frequency, base, List.of(x).subList(0, m + 1), List.of(x).subList(m + 1, 2 * m + 2));
     }
 
     /** The right-hand side: rows cos_0..cos_m, then sin_0..sin_m (sin(−ωn) = −sin(ωn)). */
@@ -139,10 +110,10 @@ public final class SinusoidSolver {
     }
 
     /**
-     * The matrix of L on the basis: column j (or m + 1 + j) holds L applied to n^j·r^n·cos(kω0·n) (or
-     * sin), as coefficients of n^i·r^n·cos(kω0·n) in rows i and of n^i·r^n·sin(kω0·n) in rows m + 1 + i.
+     * The matrix of L on the basis: column j (or m + 1 + j) holds L applied to n^j·r^n·cos(ωn) (or
+     * sin), as coefficients of n^i·r^n·cos(ωn) in rows i and of n^i·r^n·sin(ωn) in rows m + 1 + i.
      */
-    private static TrigNumber[][] system(LinearEquation eq, Rational base, int m, int multiple) {
+    private static TrigNumber[][] system(LinearEquation eq, Rational base, int m) {
         int size = 2 * (m + 1);
         TrigNumber[][] a = new TrigNumber[size][size];
         for (TrigNumber[] row : a) {
@@ -150,8 +121,8 @@ public final class SinusoidSolver {
         }
         for (int k = 0; k < eq.coefficients().size(); k++) {
             int d = eq.shift() + k;
-            TrigNumber cosD = TrigNumber.cosineOfMultiple((long) d * multiple);
-            TrigNumber sinD = TrigNumber.sineOfMultiple((long) d * multiple);
+            TrigNumber cosD = TrigNumber.cosineOfMultiple(d);
+            TrigNumber sinD = TrigNumber.sineOfMultiple(d);
             Rational scale = eq.coefficients().get(k).multiply(base.pow(d));
             for (int j = 0; j <= m; j++) {
                 for (int i = 0; i <= j; i++) {

@@ -6,17 +6,15 @@ import java.util.Objects;
 
 /**
  * A particular solution Σ_j n^j·r^n·(A_j·cos(ωn) + B_j·sin(ωn)) of a recurrence, with exact
- * constants A_j, B_j in Q(c)[s] (c = cos ω0, s = sin ω0 for the base frequency ω0 = ω/k).
+ * constants A_j, B_j in Q(c)[s] (c = cos ω, s = sin ω).
  *
  * @param frequency ω &gt; 0, a rational
- * @param multiple k &ge; 1 with ω = k·ω0
  * @param base r, the nonzero base of the exponential factor (1 when there is none)
  * @param cosine A_0..A_m
  * @param sine B_0..B_m
  * @since 0.1
  */
-public record SinusoidalParticular(Rational frequency, int multiple, Rational base, List<TrigNumber> cosine,
-        List<TrigNumber> sine) {
+public record SinusoidalParticular(Rational frequency, Rational base, List<TrigNumber> cosine, List<TrigNumber> sine) {
     public SinusoidalParticular {
         Objects.requireNonNull(frequency, "frequency");
         Objects.requireNonNull(base, "base");
@@ -25,8 +23,8 @@ public record SinusoidalParticular(Rational frequency, int multiple, Rational ba
         if (cosine.size() != sine.size()) {
             throw new IllegalArgumentException("as many cosine as sine constants are needed");
         }
-        if (multiple < 1 || frequency.signum() <= 0) {
-            throw new IllegalArgumentException("frequency and multiple must be positive");
+        if (frequency.signum() <= 0) {
+            throw new IllegalArgumentException("the frequency must be positive");
         }
     }
 
@@ -35,10 +33,10 @@ public record SinusoidalParticular(Rational frequency, int multiple, Rational ba
         return cosine.size() - 1;
     }
 
-    /** The exact value at n in Q(c)[s], with cos(kω0·n) = T_{kn}(c) and sin(kω0·n) = s·U_{kn−1}(c). */
+    /** The exact value at n in Q(c)[s], with cos(ωn) = T_n(c) and sin(ωn) = s·U_{n−1}(c). */
     public TrigNumber valueAt(long n) {
-        TrigNumber cosAtN = TrigNumber.cosineOfMultiple(n * multiple);
-        TrigNumber sinAtN = TrigNumber.sineOfMultiple(n * multiple);
+        TrigNumber cosAtN = TrigNumber.cosineOfMultiple(n);
+        TrigNumber sinAtN = TrigNumber.sineOfMultiple(n);
         TrigNumber sum = TrigNumber.ZERO;
         Rational power = Rational.ONE;
         for (int j = 0; j <= degree(); j++) {
@@ -49,7 +47,7 @@ public record SinusoidalParticular(Rational frequency, int multiple, Rational ba
     }
 
     /**
-     * The value at n, exact at a point (c, s) = (cos ω0, sin ω0) given with cos(ωn), sin(ωn).
+     * The value at n, exact at a point (c, s) = (cos ω, sin ω) given with cos(ωn), sin(ωn).
      *
      * @param cosOmega c at the point
      * @param sinOmega s at the point

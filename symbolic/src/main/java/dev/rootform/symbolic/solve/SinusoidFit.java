@@ -19,7 +19,9 @@ import dev.rootform.symbolic.sinusoid.TrigNumber;
 import dev.rootform.symbolic.work.Deadline;
 import java.math.BigInteger;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.function.Function;
 
@@ -43,7 +45,6 @@ final class SinusoidFit {
      */
     static Solution solve(Problem problem, Function<Problem, Solution> solver) {
         LinearEquation eq = problem.equation();
-        Rational base = SinusoidSolver.baseFrequency(eq);
         List<SinusoidalParticular> particular = SinusoidSolver.particular(eq);
         List<Check> checks = new ArrayList<>();
         boolean exact = particular.stream().allMatch(p -> SinusoidSolver.verifies(eq, p));
@@ -54,9 +55,9 @@ final class SinusoidFit {
                 eq.shift(), others);
         Solution rest = solver.apply(new Problem(restEquation, problem.conditions()));
         rest.checks().forEach(c -> checks.add(new Check(c.name() + " (part without the sinusoid)", c.passed(), c.detail(), c.ran())));
-        List<Term> trigTerms = particularTerms(base, particular);
+        List<Term> waveTerms = particularTerms(particular);
         if (problem.conditions().isEmpty()) {
-            ClosedForm form = withParticular(rest.closedForm(), rest.closedForm().terms(), rest.closedForm().particularFrom(), trigTerms);
+            ClosedForm form = withParticular(rest.closedForm(), rest.closedForm().terms(), rest.closedForm().particularFrom(), waveTerms);
             return new Solution(problem, rest.characteristic(), rest.factors(), rest.roots(), form, rest.general(),
                     Optional.empty(), rest.particular(), Optional.empty(), false, checks, Optional.empty());
         }
@@ -67,7 +68,6 @@ final class SinusoidFit {
         }
         List<ExactSolution> units = new ArrayList<>();
         List<Long> indices = new ArrayList<>();
-        List<TrigNumber> weights = new ArrayList<>();
         boolean unitsHold = true;
         for (int j = 0; j < problem.conditions().size(); j++) {
             Deadline.checkCurrent();
@@ -79,24 +79,36 @@ final class SinusoidFit {
             Solution h = solver.apply(new Problem(eq.homogeneous(), unit));
             unitsHold &= h.verified();
             units.add(h.exact().orElseThrow(() -> new IllegalStateException("no exact fit for unit condition " + unit)));
-            long at = problem.conditions().get(j).at().toBigInteger().longValueExact();
-            indices.add(at);
-            TrigNumber value = TrigNumber.ZERO;
-            for (SinusoidalParticular p : particular) {
-                value = value.add(p.valueAt(at));
-            }
-            weights.add(value.negate());
+            indices.add(problem.conditions().get(j).at().toBigInteger().longValueExact());
         }
         checks.add(new Check("homogeneous corrections solve the homogeneous equation", unitsHold,
                 "one exact solution per unit condition, each verified in Q(α)"));
-        SinusoidSolution solution = new SinusoidSolution(base, fitted, units, indices, weights, particular);
-        checks.add(conditionsCheck(problem.conditions(), solution));
-        List<Term> transients = transientTerms(base, solution, rest.factors());
+        SinusoidSolution solution = new SinusoidSolution(fitted, units, indices, waves(particular, indices));
+        checks.add(conditionsCheck(solution));
+        List<Term> transients = transientTerms(solution, rest.factors());
         ClosedForm restForm = rest.closedForm();
-        ClosedForm form = withParticular(restForm, transients, transients.size(),
-                concat(restForm.particularTerms(), trigTerms));
+        ClosedForm form = withParticular(restForm, transients, transients.size(), concat(restForm.particularTerms(), waveTerms));
         return new Solution(problem, rest.characteristic(), rest.factors(), rest.roots(), form, rest.general(),
                 Optional.empty(), Optional.empty(), Optional.empty(), false, checks, Optional.of(solution));
+    }
+
+    /** One wave per frequency, with the weights −(Σ particular)(at_j) that bring it to 0 at the conditions. */
+    private static List<SinusoidSolution.Wave> waves(List<SinusoidalParticular> particular, List<Long> indices) {
+        Map<Rational, List<SinusoidalParticular>> byFrequency = new LinkedHashMap<>();
+        particular.forEach(p -> byFrequency.computeIfAbsent(p.frequency(), k -> new ArrayList<>()).add(p));
+        List<SinusoidSolution.Wave> waves = new ArrayList<>();
+        byFrequency.forEach((w, ps) -> {
+            List<TrigNumber> weights = new ArrayList<>();
+            for (long at : indices) {
+                TrigNumber value = TrigNumber.ZERO;
+                for (SinusoidalParticular p : ps) {
+                    value = value.add(p.valueAt(at));
+                }
+                weights.add(value.negate());
+            }
+            waves.add(new SinusoidSolution.Wave(w, weights, ps));
+        });
+        return waves;
     }
 
     private static List<Term> concat(List<Term> a, List<Term> b) {
@@ -111,23 +123,29 @@ final class SinusoidFit {
                 concat(leading, more), f.freeConstants(), transients);
     }
 
-    /** Every condition, recomputed from the fitted solution exactly in Q(c)[s]. */
-    private static Check conditionsCheck(List<Condition> conditions, SinusoidSolution s) {
-        for (int j = 0; j < conditions.size(); j++) {
-            if (!s.valueAt(s.indices().get(j)).equals(TrigNumber.of(conditions.get(j).value()))) {
-                return new Check("satisfies the conditions", false, "x at " + conditions.get(j).point() + " differs");
+    /**
+     * The conditions hold: the rest meets them (its own checks), and every wave is exactly 0 at each
+     * condition's index in its field, recomputed from the fitted weights.
+     */
+    private static Check conditionsCheck(SinusoidSolution s) {
+        for (SinusoidSolution.Wave w : s.waves()) {
+            for (long at : s.indices()) {
+                if (!s.waveAt(w, at).isZero()) {
+                    return new Check("satisfies the conditions", false, "the part at frequency " + w.frequency() + " is not 0 at " + at);
+                }
             }
         }
-        return new Check("satisfies the conditions", true, "every given value, exactly in " + FIELD);
+        return new Check("satisfies the conditions", true,
+                "the part of each frequency ω is 0 at every condition, exactly in " + FIELD);
     }
 
     /** n^j·r^n·(A_j·cos(ωn) + B_j·sin(ωn)) for every particular solution and power. */
-    private static List<Term> particularTerms(Rational base, List<SinusoidalParticular> particular) {
+    private static List<Term> particularTerms(List<SinusoidalParticular> particular) {
         List<Term> terms = new ArrayList<>();
         for (SinusoidalParticular p : particular) {
             for (int j = 0; j <= p.degree(); j++) {
-                Term t = new Term.Oscillating(trig(base, p.cosine().get(j)), trig(base, p.sine().get(j)), j, Surd.of(p.base()),
-                        new Angle.Value(Surd.of(p.frequency())));
+                Term t = new Term.Oscillating(trig(p.frequency(), p.cosine().get(j)), trig(p.frequency(), p.sine().get(j)), j,
+                        Surd.of(p.base()), new Angle.Value(Surd.of(p.frequency())));
                 if (!t.vanishes()) {
                     terms.add(t);
                 }
@@ -136,30 +154,41 @@ final class SinusoidFit {
         return terms;
     }
 
-    private static Coefficient trig(Rational base, TrigNumber value) {
-        return Coefficient.Trig.of(base, value, TrigNumber.ZERO, BigInteger.ONE);
+    private static Coefficient trig(Rational frequency, TrigNumber value) {
+        return Coefficient.Trig.of(List.of(new Coefficient.Trig.Part(frequency, value, TrigNumber.ZERO)), BigInteger.ONE);
     }
 
     /**
-     * The homogeneous terms of x per factor f of χ and power i: c(α) = c_rest(α) + Σ_j w_j·c_j(α), whose
-     * real terms are linear in the coefficients of c, so each is Σ_l γ_l·(the real term of α^l).
+     * The homogeneous terms of x per factor f of χ and power i: c(α) = c_rest(α) + Σ_ω Σ_j w_{ω,j}·c_j(α),
+     * whose real terms are linear in the coefficients of c, so each is Σ_l γ_l·(the real term of α^l),
+     * with one γ per frequency (and the rational one of the rest).
      */
-    private static List<Term> transientTerms(Rational base, SinusoidSolution s, List<Factor> characteristic) {
+    private static List<Term> transientTerms(SinusoidSolution s, List<Factor> characteristic) {
         List<Term> terms = new ArrayList<>();
+        Rational first = s.waves().get(0).frequency();
         for (Factor f : characteristic) {
             if (f.polynomial().equals(RationalPolynomial.X)) {
                 continue;
             }
             for (int i = 0; i < f.multiplicity(); i++) {
-                List<TrigNumber> gamma = new ArrayList<>();
+                Map<Rational, List<TrigNumber>> gammas = new LinkedHashMap<>();
+                List<TrigNumber> own = new ArrayList<>();
                 for (int l = 0; l < f.degree(); l++) {
-                    TrigNumber g = TrigNumber.of(coefficient(s.rest(), f, i, l));
-                    for (int j = 0; j < s.units().size(); j++) {
-                        g = g.add(s.weights().get(j).multiply(coefficient(s.units().get(j), f, i, l)));
-                    }
-                    gamma.add(g);
+                    own.add(TrigNumber.of(coefficient(s.rest(), f, i, l)));
                 }
-                terms.addAll(realTerms(base, s.rest().equation(), f.polynomial(), i, gamma));
+                gammas.put(Rational.ZERO, own);
+                for (SinusoidSolution.Wave w : s.waves()) {
+                    List<TrigNumber> gamma = new ArrayList<>();
+                    for (int l = 0; l < f.degree(); l++) {
+                        TrigNumber g = TrigNumber.ZERO;
+                        for (int j = 0; j < s.units().size(); j++) {
+                            g = g.add(w.weights().get(j).multiply(coefficient(s.units().get(j), f, i, l)));
+                        }
+                        gamma.add(g);
+                    }
+                    gammas.put(w.frequency(), gamma);
+                }
+                terms.addAll(realTerms(first, s.rest().equation(), f.polynomial(), i, gammas));
             }
         }
         terms.removeIf(Term::vanishes);
@@ -172,30 +201,47 @@ final class SinusoidFit {
                 .map(c -> c.coefficients().get(i).coefficient(l)).findFirst().orElse(Rational.ZERO);
     }
 
-    private static List<Term> realTerms(Rational base, LinearEquation eq, RationalPolynomial f, int i, List<TrigNumber> gamma) {
+    /**
+     * The real terms of Σ_l γ_l·α^l·v^i over the roots of f, γ_l = Σ over the keys ω of gammas[ω][l]
+     * (key 0: rational values, written into the part of {@code first}).
+     */
+    private static List<Term> realTerms(Rational first, LinearEquation eq, RationalPolynomial f, int i,
+            Map<Rational, List<TrigNumber>> gammas) {
         List<List<Term>> unit = new ArrayList<>();
         for (int l = 0; l < f.degree(); l++) {
             unit.add(RealTerms.of(eq.domain(), f, i, RationalPolynomial.monomial(Rational.ONE, l)));
         }
         if (unit.get(0).get(0) instanceof Term.ConjugateSum) {
-            return List.of(new Term.ConjugateSum(f, gamma.stream().map(g -> trig(base, g)).toList(), i));
+            List<Coefficient> cs = new ArrayList<>();
+            for (int l = 0; l < f.degree(); l++) {
+                List<Coefficient.Trig.Part> parts = new ArrayList<>();
+                for (Map.Entry<Rational, List<TrigNumber>> e : gammas.entrySet()) {
+                    parts.add(new Coefficient.Trig.Part(e.getKey().isZero() ? first : e.getKey(), e.getValue().get(l), TrigNumber.ZERO));
+                }
+                cs.add(Coefficient.Trig.of(parts, BigInteger.ONE));
+            }
+            return List.of(new Term.ConjugateSum(f, cs, i));
         }
         List<Term> result = new ArrayList<>();
         for (int p = 0; p < unit.get(0).size(); p++) {
             List<Coefficient> cs = new ArrayList<>();
             for (int q = 0; q < unit.get(0).get(p).coefficients().size(); q++) {
-                TrigNumber a = TrigNumber.ZERO;
-                TrigNumber b = TrigNumber.ZERO;
+                List<Coefficient.Trig.Part> parts = new ArrayList<>();
                 BigInteger radicand = BigInteger.ONE;
-                for (int l = 0; l < f.degree(); l++) {
-                    Surd u = ((Coefficient.Exact) unit.get(l).get(p).coefficients().get(q)).value();
-                    a = a.add(gamma.get(l).multiply(u.rational()));
-                    if (!u.isRational()) {
-                        b = b.add(gamma.get(l).multiply(u.coefficient()));
-                        radicand = u.radicand();
+                for (Map.Entry<Rational, List<TrigNumber>> e : gammas.entrySet()) {
+                    TrigNumber a = TrigNumber.ZERO;
+                    TrigNumber b = TrigNumber.ZERO;
+                    for (int l = 0; l < f.degree(); l++) {
+                        Surd u = ((Coefficient.Exact) unit.get(l).get(p).coefficients().get(q)).value();
+                        a = a.add(e.getValue().get(l).multiply(u.rational()));
+                        if (!u.isRational()) {
+                            b = b.add(e.getValue().get(l).multiply(u.coefficient()));
+                            radicand = u.radicand();
+                        }
                     }
+                    parts.add(new Coefficient.Trig.Part(e.getKey().isZero() ? first : e.getKey(), a, b));
                 }
-                cs.add(Coefficient.Trig.of(base, a, b, radicand));
+                cs.add(Coefficient.Trig.of(parts, radicand));
             }
             result.add(unit.get(0).get(p).withCoefficients(cs));
         }

@@ -8,44 +8,59 @@ import java.util.Objects;
 
 /**
  * The fitted solution of a recurrence forced by sampled sinusoids n^p·r^n·cos(ωn), sin(ωn) with ω a
- * rational (not a multiple of π), exact over Q(c)[s]/(s² + c² − 1), c = cos ω0, s = sin ω0 for the
- * base frequency ω0:
- * x[n] = rest[n] + Σ_j weights_j·units_j[n] + Σ particular[n]. {@code rest} solves the equation with
- * the other forcing terms and the given conditions; {@code units_j} solves the homogeneous equation
- * with value 1 at condition j and 0 at the others; the weights −x_p(at_j) make the sinusoidal
- * particular solutions meet the conditions. Every part is an exact solution, so x is one.
+ * rational (not a multiple of π), by superposition: x[n] = rest[n] + Σ_ω x_ω[n]. {@code rest}
+ * solves the equation with the other forcing terms and the given conditions; each x_ω solves it with
+ * the terms at frequency ω and zero at the conditions, exactly over Q(cos ω)[sin ω]/(sin²ω + cos²ω − 1):
+ * x_ω = Σ_j w_{ω,j}·units_j + the particular solutions at ω, where {@code units_j} solves the
+ * homogeneous equation with value 1 at condition j and 0 at the others.
  *
- * @param frequency ω0
  * @param rest the solution for the rational forcing and the given conditions (rational values)
  * @param units the homogeneous solutions of the unit conditions, in the order of the conditions
  * @param indices the indices of the conditions, in the same order
- * @param weights their weights, in Q(c)[s]
- * @param particular the sinusoidal particular solutions
+ * @param waves one part per frequency
  * @since 0.1
  */
-public record SinusoidSolution(Rational frequency, ExactSolution rest, List<ExactSolution> units, List<Long> indices,
-        List<TrigNumber> weights, List<SinusoidalParticular> particular) {
-    public SinusoidSolution {
-        Objects.requireNonNull(frequency, "frequency");
-        Objects.requireNonNull(rest, "rest");
-        units = List.copyOf(units);
-        indices = List.copyOf(indices);
-        weights = List.copyOf(weights);
-        particular = List.copyOf(particular);
-        if (units.size() != weights.size() || units.size() != indices.size()) {
-            throw new IllegalArgumentException("one weight and one index per unit solution");
+public record SinusoidSolution(ExactSolution rest, List<ExactSolution> units, List<Long> indices, List<Wave> waves) {
+    /**
+     * The part x_ω at one frequency.
+     *
+     * @param frequency ω
+     * @param weights w_{ω,j} = −(Σ particular)(at_j), in Q(cos ω)[sin ω], one per unit solution
+     * @param particular the particular solutions at ω (one per base r)
+     */
+    public record Wave(Rational frequency, List<TrigNumber> weights, List<SinusoidalParticular> particular) {
+        public Wave {
+            Objects.requireNonNull(frequency, "frequency");
+            weights = List.copyOf(weights);
+            particular = List.copyOf(particular);
+        }
+
+        /** The exact value x_ω[n] in Q(cos ω)[sin ω], given the unit solutions. */
+        TrigNumber valueAt(long n, List<ExactSolution> units) {
+            TrigNumber sum = TrigNumber.ZERO;
+            for (int j = 0; j < units.size(); j++) {
+                sum = sum.add(weights.get(j).multiply(units.get(j).valueAt(n)));
+            }
+            for (SinusoidalParticular p : particular) {
+                sum = sum.add(p.valueAt(n));
+            }
+            return sum;
         }
     }
 
-    /** The exact value x[n] in Q(c)[s], for n at or above the first index. */
-    public TrigNumber valueAt(long n) {
-        TrigNumber sum = TrigNumber.of(rest.valueAt(n));
-        for (int j = 0; j < units.size(); j++) {
-            sum = sum.add(weights.get(j).multiply(units.get(j).valueAt(n)));
+    public SinusoidSolution {
+        Objects.requireNonNull(rest, "rest");
+        units = List.copyOf(units);
+        indices = List.copyOf(indices);
+        waves = List.copyOf(waves);
+        int count = units.size();
+        if (count != indices.size() || waves.stream().anyMatch(w -> w.weights().size() != count)) {
+            throw new IllegalArgumentException("one index and one weight per unit solution");
         }
-        for (SinusoidalParticular p : particular) {
-            sum = sum.add(p.valueAt(n));
-        }
-        return sum;
+    }
+
+    /** The exact value x_ω[n] of the wave at ω, in Q(cos ω)[sin ω]. */
+    public TrigNumber waveAt(Wave wave, long n) {
+        return wave.valueAt(n, units);
     }
 }
