@@ -95,7 +95,7 @@ class MainTest {
         "''|empty",
         "y'' + y = 0; y(0) = 1|needs exactly 2",
         "y'' + y = tan(t); y(0) = 1; y'(0) = 0|out of scope",
-        "x[n+1] = x[n] + cos(2n); x[0] = 1|not a rational multiple of π",
+        "x[n+2] = x[n+1] + cos(2n); x[0] = 1; x[1] = 2|characteristic root 0 forced by a sampled sinusoid",
         "x[n+1] = x[n] + 1/n; x[0] = 1|",
         "x[n+1] = x[n] + cos(2 pi n/7); x[0] = 1|lies in no quadratic field",
         "x[n+1] = x[n] + cos(pi n/4) + sin(pi n/6); x[0] = 1|mixes values",
