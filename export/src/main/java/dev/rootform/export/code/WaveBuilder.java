@@ -4,15 +4,12 @@ import dev.rootform.export.Wave;
 import dev.rootform.numeric.roots.Enclosure;
 import dev.rootform.numeric.roots.RootFinder;
 import dev.rootform.symbolic.algebra.Cyclotomic;
-import dev.rootform.symbolic.algebra.RationalFunction;
-import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.Coefficient;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Domain;
-import dev.rootform.symbolic.sinusoid.TrigNumber;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -25,8 +22,8 @@ import org.apfloat.ApfloatMath;
 
 /**
  * Turns the terms of a fitted {@link ClosedForm} into {@link Wave}s. Every constant is computed
- * from its exact form at {@link #DIGITS} significant digits (cos ω and sin ω of a sampled sinusoid's
- * coefficients by apfloat) and rounded once to the nearest double:
+ * from its exact form at {@link #DIGITS} significant digits (a sampled sinusoid's coefficients from cos ω
+ * and sin ω at two working precisions) and rounded once to the nearest double:
  * a·cos x + b·sin x becomes √(a²+b²)·cos(x − atan2(b, a)); a conjugate sum over an irreducible factor
  * uses certified roots ({@link RootFinder}): a real root ρ gives c(ρ)·v^i·ρ^v (or e^{ρv}), a
  * conjugate pair α, ᾱ gives 2|c(α)|·v^i·|α|^v·cos(v·arg α + arg c(α)) (differential:
@@ -136,35 +133,9 @@ final class WaveBuilder {
             return surd(e.value());
         }
         if (c instanceof Coefficient.Trig t) {
-            long precision = CONTEXT.getPrecision();
-            Apfloat root = ApfloatMath.sqrt(new Apfloat(t.radicand(), precision));
-            Apfloat sum = new Apfloat(0, precision);
-            for (Coefficient.Trig.Part p : t.parts()) {
-                Apfloat omega = apfloat(p.frequency().toBigDecimal(CONTEXT));
-                Apfloat cos = ApfloatMath.cos(omega);
-                Apfloat sin = ApfloatMath.sin(omega);
-                sum = sum.add(trig(p.rational(), cos, sin)).add(trig(p.radical(), cos, sin).multiply(root));
-            }
-            return sum;
+            return apfloat(t.toBigDecimal(CONTEXT));
         }
         throw new AssertionError("free constant " + c);
-    }
-
-    /** a(c) + b(c)·s at c = cos ω, s = sin ω given at the working precision. */
-    private static Apfloat trig(TrigNumber x, Apfloat cos, Apfloat sin) {
-        return quotient(x.rational(), cos).add(quotient(x.sine(), cos).multiply(sin));
-    }
-
-    private static Apfloat quotient(RationalFunction f, Apfloat x) {
-        return polynomial(f.numerator(), x).divide(polynomial(f.denominator(), x));
-    }
-
-    private static Apfloat polynomial(RationalPolynomial p, Apfloat x) {
-        Apfloat sum = new Apfloat(0, CONTEXT.getPrecision());
-        for (int i = p.degree(); i >= 0; i--) {
-            sum = sum.multiply(x).add(apfloat(p.coefficient(i).toBigDecimal(CONTEXT)));
-        }
-        return sum;
     }
 
     /** A surd at the working precision. */

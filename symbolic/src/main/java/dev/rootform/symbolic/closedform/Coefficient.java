@@ -1,8 +1,11 @@
 package dev.rootform.symbolic.closedform;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.sinusoid.CosineSine;
 import dev.rootform.symbolic.sinusoid.TrigNumber;
+import java.math.BigDecimal;
 import java.math.BigInteger;
+import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -52,6 +55,40 @@ public sealed interface Coefficient permits Coefficient.Exact, Coefficient.Trig,
         public Trig {
             parts = List.copyOf(parts);
             Objects.requireNonNull(radicand, "radicand");
+        }
+
+        /**
+         * The value rounded to {@code context}, from cos ω and sin ω ({@link CosineSine}) at two working
+         * precisions 20 digits apart that agree to the digits asked (raised up to 10 times, then the
+         * more precise one is returned).
+         */
+        public BigDecimal toBigDecimal(MathContext context) {
+            int digits = context.getPrecision();
+            int working = digits + 20;
+            BigDecimal high = at(working + 20);
+            for (int round = 0; round < 10; round++) {
+                BigDecimal low = at(working);
+                BigDecimal difference = low.subtract(high).abs();
+                if (difference.compareTo(high.abs().movePointLeft(digits + 1)) <= 0 || difference.signum() == 0) {
+                    break;
+                }
+                working += 40;
+                high = at(working + 20);
+            }
+            return high.round(context);
+        }
+
+        private BigDecimal at(int working) {
+            MathContext mc = new MathContext(working);
+            Rational root = Rational.of(Surd.sqrt(Rational.of(radicand)).toBigDecimal(mc));
+            Rational sum = Rational.ZERO;
+            for (Part p : parts) {
+                BigDecimal[] cs = CosineSine.of(p.frequency(), working);
+                Rational c = Rational.of(cs[0]);
+                Rational s = Rational.of(cs[1]);
+                sum = sum.add(p.rational().evaluate(c, s)).add(p.radical().evaluate(c, s).multiply(root));
+            }
+            return sum.toBigDecimal(mc);
         }
 
         /**
