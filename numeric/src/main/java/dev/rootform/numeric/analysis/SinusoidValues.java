@@ -1,6 +1,8 @@
 package dev.rootform.numeric.analysis;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.sinusoid.SinusoidalParticular;
@@ -19,8 +21,8 @@ import org.apfloat.ApfloatMath;
 /**
  * Values of a recurrence's solution exact over Q(cos ω)[sin ω] ({@link SinusoidSolution}): the
  * exact parts (rational-valued solutions) exactly or from their modes, cos ω, sin ω and cos(ωn),
- * sin(ωn) in apfloat at a working precision, the elements of Q(c)[s] evaluated exactly at those
- * decimals; a value is given when two working precisions agree to the digits asked. Also the
+ * sin(ωn) in apfloat at a working precision, the elements of Q(c)[s] evaluated there in apfloat; a
+ * value is given when two working precisions agree to the digits asked. Also the
  * independent check of the closed form against the recurrence iterated in apfloat.
  */
 final class SinusoidValues {
@@ -114,8 +116,8 @@ final class SinusoidValues {
         parts.add(exactPart(s.rest(), n, working, cache));
         for (SinusoidSolution.Wave w : s.waves()) {
             Apcomplex unit = ComplexExp.exp(new Apcomplex(Apfloat.ZERO, Decimals.toApfloat(w.frequency(), working)), working);
-            Rational c = Rational.of(Decimals.toBigDecimal(unit.real(), working));
-            Rational sine = Rational.of(Decimals.toBigDecimal(unit.imag(), working));
+            Apfloat c = unit.real();
+            Apfloat sine = unit.imag();
             for (int j = 0; j < units.size(); j++) {
                 parts.add(units.get(j).multiply(at(w.weights().get(j), c, sine, working)));
             }
@@ -132,12 +134,25 @@ final class SinusoidValues {
         return new Apfloat[] {sum, largest};
     }
 
-    private static Apfloat at(TrigNumber t, Rational c, Rational s, int working) {
-        return Decimals.toApfloat(t.evaluate(c, s), working);
+    /** a(c) + b(c)·s in apfloat (Horner); cancellation shows as disagreement of two working precisions. */
+    private static Apfloat at(TrigNumber t, Apfloat c, Apfloat s, int working) {
+        return quotient(t.rational(), c, working).add(quotient(t.sine(), c, working).multiply(s));
+    }
+
+    private static Apfloat quotient(RationalFunction f, Apfloat x, int working) {
+        return polynomial(f.numerator(), x, working).divide(polynomial(f.denominator(), x, working));
+    }
+
+    private static Apfloat polynomial(RationalPolynomial p, Apfloat x, int working) {
+        Apfloat sum = new Apfloat(0, working);
+        for (int i = p.degree(); i >= 0; i--) {
+            sum = sum.multiply(x).add(Decimals.toApfloat(p.coefficient(i), working));
+        }
+        return sum;
     }
 
     /** Σ_j n^j·r^n·(A_j·cos(ωn) + B_j·sin(ωn)), with e^{iωn} at the working precision plus the digits of ωn. */
-    private static Apfloat particular(SinusoidalParticular p, long n, Rational c, Rational s, int working) {
+    private static Apfloat particular(SinusoidalParticular p, long n, Apfloat c, Apfloat s, int working) {
         int extra = (int) Math.ceil(Math.log10(Math.abs((double) n) * p.frequency().doubleValue() + 1));
         Apcomplex wave = ComplexExp.exp(new Apcomplex(Apfloat.ZERO,
                 Decimals.toApfloat(p.frequency().multiply(Rational.of(n)), working + extra)), working);
