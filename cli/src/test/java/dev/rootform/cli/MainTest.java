@@ -96,6 +96,7 @@ class MainTest {
         "y'' + y = 0; y(0) = 1|needs exactly 2",
         "y'' + y = tan(t); y(0) = 1; y'(0) = 0|out of scope",
         "x[n+2] = x[n+1] + cos(2n); x[0] = 1; x[1] = 2|characteristic root 0 forced by a sampled sinusoid",
+        "x[n+1] = 0.9x[n] + sin(0.3n); x[300] = 1|indices up to 100",
         "x[n+1] = x[n] + 1/n; x[0] = 1|",
         "x[n+1] = x[n] + cos(2 pi n/7); x[0] = 1|lies in no quadratic field",
         "x[n+1] = x[n] + cos(pi n/4) + sin(pi n/6); x[0] = 1|mixes values",

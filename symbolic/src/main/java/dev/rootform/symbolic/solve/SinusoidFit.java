@@ -11,6 +11,7 @@ import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Condition;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
 import dev.rootform.symbolic.sinusoid.SinusoidSolver;
@@ -65,6 +66,13 @@ final class SinusoidFit {
         if (!fitted.leadingValues().isEmpty()) {
             throw new InputException("a recurrence with the characteristic root 0 forced by a sampled sinusoid is not "
                     + "supported (write it without the lag that gives the root 0)", "", -1);
+        }
+        for (Condition c : problem.conditions()) {
+            if (c.at().abs().compareTo(Rational.of(Limits.MAX_SINUSOID_INDEX)) > 0) {
+                throw new InputException("the condition at index " + c.point() + ": with a sampled sinusoid at a frequency that is not a "
+                        + "rational multiple of π, conditions at indices up to " + Limits.MAX_SINUSOID_INDEX
+                        + " in size are accepted (cos(kω) is a polynomial of degree k in cos ω)", "", -1);
+            }
         }
         List<ExactSolution> units = new ArrayList<>();
         List<Long> indices = new ArrayList<>();
