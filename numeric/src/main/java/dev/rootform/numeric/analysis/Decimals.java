@@ -1,5 +1,6 @@
 package dev.rootform.numeric.analysis;
 
+import dev.rootform.numeric.roots.ApfloatConversion;
 import dev.rootform.symbolic.algebra.Rational;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -11,7 +12,7 @@ final class Decimals {
     }
 
     static Apfloat toApfloat(Rational r, long precision) {
-        return new Apfloat(r.toBigDecimal(new MathContext((int) precision)), precision);
+        return ApfloatConversion.of(r, precision);
     }
 
     /** {@code a} rounded to {@code digits}; read from apfloat's scientific form, so a huge exponent costs nothing. */

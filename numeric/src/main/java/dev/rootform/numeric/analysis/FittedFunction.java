@@ -63,7 +63,12 @@ final class FittedFunction {
         return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
     }
 
-    /** The integrator cross-check from the exact derivatives at the origin, on the problem's time scales. */
+    /**
+     * The integrator cross-check from the exact derivatives at the origin, on the problem's time
+     * scales. The closed form is evaluated in double precision where its estimated rounding error is
+     * below {@link IntegratorCheck#CLOSED_FORM_ERROR} relative ({@link DoubleModes}), else to 17
+     * digits in apfloat, confirmed by two working precisions.
+     */
     Check integratorCheck(List<RootApproximation> roots) {
         int k = equation.order();
         List<Rational> initial = new ArrayList<>(k);
@@ -71,10 +76,12 @@ final class FittedFunction {
             Surd v = atOrigin.apply(d);
             initial.add(v.isRational() ? v.rational() : Rational.of(v.toBigDecimal(new MathContext(Analyzer.STATE_DIGITS))));
         }
+        DoubleModes doubles = sums.apply(Analyzer.SAMPLE_DIGITS + WorkingPrecision.GUARD_DIGITS).doubles();
         IntegratorCheck.Solved closed = new IntegratorCheck.Solved() {
             @Override
             public double value(double t) {
-                return FittedFunction.this.value(Rational.of(new BigDecimal(t)), Analyzer.SAMPLE_DIGITS).value().doubleValue();
+                return doubles.accurate(t, IntegratorCheck.CLOSED_FORM_ERROR).orElseGet(() ->
+                        FittedFunction.this.value(Rational.of(new BigDecimal(t)), Analyzer.SAMPLE_DIGITS).value().doubleValue());
             }
 
             @Override

@@ -34,7 +34,7 @@ final class AberthRefiner {
         this.coefficients = new Apfloat[p.degree() + 1];
         for (int i = 0; i < coefficients.length; i++) {
             Rational c = p.coefficient(i);
-            coefficients[i] = new Apfloat(c.numerator(), precision).divide(new Apfloat(c.denominator(), precision));
+            coefficients[i] = ApfloatConversion.of(c, precision);
         }
         this.tolerance = ApfloatMath.pow(new Apfloat(10, precision), SETTLED_DIGITS - precision);
     }

@@ -34,19 +34,15 @@ final class Seeds {
         Rational c = p.coefficient(0);
         Rational discriminant = b.multiply(b).subtract(a.multiply(c).multiply(4));
         Apfloat two = new Apfloat(2, precision);
-        Apfloat root = ApfloatMath.sqrt(toApfloat(discriminant.abs(), precision));
-        Apfloat ap = toApfloat(a, precision);
-        Apfloat bp = toApfloat(b, precision);
+        Apfloat root = ApfloatMath.sqrt(ApfloatConversion.of(discriminant.abs(), precision));
+        Apfloat ap = ApfloatConversion.of(a, precision);
+        Apfloat bp = ApfloatConversion.of(b, precision);
         if (discriminant.signum() < 0) {
             Apfloat re = bp.negate().divide(two.multiply(ap));
             Apfloat im = root.divide(two.multiply(ap));
             return new Apcomplex[] {new Apcomplex(re, im), new Apcomplex(re, im.negate())};
         }
         Apfloat q = (b.signum() < 0 ? bp.subtract(root) : bp.add(root)).negate().divide(two);
-        return new Apcomplex[] {new Apcomplex(q.divide(ap)), new Apcomplex(toApfloat(c, precision).divide(q))};
-    }
-
-    private static Apfloat toApfloat(Rational r, long precision) {
-        return new Apfloat(r.numerator(), precision).divide(new Apfloat(r.denominator(), precision));
+        return new Apcomplex[] {new Apcomplex(q.divide(ap)), new Apcomplex(ApfloatConversion.of(c, precision).divide(q))};
     }
 }

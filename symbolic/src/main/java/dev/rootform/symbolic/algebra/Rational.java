@@ -49,11 +49,11 @@ public final class Rational implements Comparable<Rational> {
     }
 
     public static Rational of(BigInteger integer) {
-        return of(integer, BigInteger.ONE);
+        return integer.signum() == 0 ? ZERO : new Rational(integer, BigInteger.ONE);
     }
 
     public static Rational of(long integer) {
-        return of(BigInteger.valueOf(integer), BigInteger.ONE);
+        return of(BigInteger.valueOf(integer));
     }
 
     public static Rational of(long numerator, long denominator) {
@@ -114,8 +114,23 @@ public final class Rational implements Comparable<Rational> {
         if (other.isZero()) {
             return this;
         }
-        return of(numerator.multiply(other.denominator).add(other.numerator.multiply(denominator)),
-                denominator.multiply(other.denominator));
+        if (isInteger() && other.isInteger()) {
+            return of(numerator.add(other.numerator));
+        }
+        // Henrici's addition (D. E. Knuth, The Art of Computer Programming, vol. 2, 3rd ed., 4.5.1):
+        // with d = gcd(q, q'), p/q + p'/q' = t/(q/d·q') where t = p·(q'/d) + p'·(q/d), reduced by
+        // gcd(t, d) alone; smaller gcds than reducing the full cross product
+        BigInteger d = denominator.gcd(other.denominator);
+        if (d.equals(BigInteger.ONE)) {
+            return new Rational(numerator.multiply(other.denominator).add(other.numerator.multiply(denominator)),
+                    denominator.multiply(other.denominator));
+        }
+        BigInteger t = numerator.multiply(other.denominator.divide(d)).add(other.numerator.multiply(denominator.divide(d)));
+        if (t.signum() == 0) {
+            return ZERO;
+        }
+        BigInteger e = t.gcd(d);
+        return new Rational(t.divide(e), denominator.divide(d).multiply(other.denominator.divide(e)));
     }
 
     public Rational subtract(Rational other) {
@@ -126,7 +141,15 @@ public final class Rational implements Comparable<Rational> {
         if (isZero() || other.isZero()) {
             return ZERO;
         }
-        return of(numerator.multiply(other.numerator), denominator.multiply(other.denominator));
+        if (isInteger() && other.isInteger()) {
+            return new Rational(numerator.multiply(other.numerator), BigInteger.ONE);
+        }
+        // cross-cancelled (Knuth, ibid.): both factors are in lowest terms, so gcd(p, q') and gcd(p', q)
+        // leave the product in lowest terms
+        BigInteger g1 = numerator.gcd(other.denominator);
+        BigInteger g2 = other.numerator.gcd(denominator);
+        return new Rational(numerator.divide(g1).multiply(other.numerator.divide(g2)),
+                denominator.divide(g2).multiply(other.denominator.divide(g1)));
     }
 
     public Rational multiply(long factor) {

@@ -9,7 +9,9 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.function.LongFunction;
 
 /**
@@ -41,16 +43,38 @@ final class ExactVerifier {
     }
 
     static List<Check> verify(ExactSolution solution, List<Condition> conditions) {
+        Exact exact = new Exact(solution, remembered(value(solution)), remembered(forcing(solution)));
         List<Check> checks = new ArrayList<>();
-        checks.add(substitution(solution));
+        checks.add(substitution(exact));
         if (!conditions.isEmpty()) {
-            checks.add(conditions(solution, conditions));
+            checks.add(conditions(exact, conditions));
         }
-        checks.add(solution.domain() == Domain.DIFFERENCE ? iteration(solution) : taylor(solution));
+        checks.add(solution.domain() == Domain.DIFFERENCE ? iteration(exact) : taylor(exact));
         return checks;
     }
 
-    private static Check substitution(ExactSolution solution) {
+    /**
+     * The solution with its exact values y (x[n] or y^(n)(t0)) and forcing values g, each computed
+     * once per verification: the residuals, the conditions and the reference share them (the same
+     * exact numbers, not a weaker check).
+     */
+    private record Exact(ExactSolution solution, LongFunction<Rational> y, LongFunction<Rational> g) {
+    }
+
+    private static LongFunction<Rational> remembered(LongFunction<Rational> f) {
+        Map<Long, Rational> known = new HashMap<>();
+        return n -> {
+            Rational v = known.get(n);
+            if (v == null) {
+                v = f.apply(n);
+                known.put(n, v);
+            }
+            return v;
+        };
+    }
+
+    private static Check substitution(Exact exact) {
+        ExactSolution solution = exact.solution();
         for (Component c : solution.components()) {
             if (!annihilates(solution.domain(), solution.operator().coefficients(), c)) {
                 return new Check("satisfies the equation", false,
@@ -63,7 +87,7 @@ final class ExactVerifier {
         long last = solution.domain() == Domain.DIFFERENCE ? Math.max(solution.validFrom(), first + points) : points;
         for (long n = first; n < last; n++) {
             Deadline.checkCurrent();
-            if (!residual(solution, n).isZero()) {
+            if (!residual(exact, n).isZero()) {
                 return new Check("satisfies the equation", false, (solution.domain() == Domain.DIFFERENCE
                         ? "residual at n = " : "derivative of the residual at t0, order ") + n + " is not zero");
             }
@@ -73,12 +97,11 @@ final class ExactVerifier {
     }
 
     /** (L y - g)[n] for a difference equation; the n-th derivative of L y - g at t0 for a differential one. */
-    private static Rational residual(ExactSolution solution, long n) {
-        List<Rational> a = solution.equation().coefficients();
-        LongFunction<Rational> y = value(solution);
-        Rational r = forcing(solution).apply(n).negate();
+    private static Rational residual(Exact exact, long n) {
+        List<Rational> a = exact.solution().equation().coefficients();
+        Rational r = exact.g().apply(n).negate();
         for (int j = 0; j < a.size(); j++) {
-            r = r.add(a.get(j).multiply(y.apply(n + j)));
+            r = r.add(a.get(j).multiply(exact.y().apply(n + j)));
         }
         return r;
     }
@@ -153,12 +176,11 @@ final class ExactVerifier {
         return r;
     }
 
-    private static Check conditions(ExactSolution solution, List<Condition> conditions) {
+    private static Check conditions(Exact exact, List<Condition> conditions) {
         for (Condition c : conditions) {
             Deadline.checkCurrent();
-            Rational actual = solution.domain() == Domain.DIFFERENCE
-                    ? solution.valueAt(c.at().toBigInteger().longValueExact())
-                    : solution.derivativeAtOrigin(c.derivative());
+            Rational actual = exact.y().apply(exact.solution().domain() == Domain.DIFFERENCE
+                    ? c.at().toBigInteger().longValueExact() : c.derivative());
             if (!actual.equals(c.value())) {
                 return new Check(CONDITIONS, false,
                         "condition at " + c.at() + " gives " + actual + ", expected " + c.value());
@@ -173,18 +195,19 @@ final class ExactVerifier {
      * ({@link #longestScale}, at most {@link #MAX_ITERATION} terms), compared there at about 12
      * indices per decade and the last.
      */
-    private static Check iteration(ExactSolution solution) {
+    private static Check iteration(Exact exact) {
+        ExactSolution solution = exact.solution();
         long first = first(solution);
         int k = solution.equation().order();
         int terms = (int) Math.min(MAX_ITERATION, Math.max(k + REFERENCE_TERMS, Math.ceil(4 * longestScale(solution))));
-        List<Rational> x = extend(solution, terms);
+        List<Rational> x = extend(exact, terms);
         int compared = 0;
         for (int i = 0; i < x.size(); i++) {
             if (i >= k + REFERENCE_TERMS && i != x.size() - 1 && Math.floor(12 * Math.log10(i)) == Math.floor(12 * Math.log10(i - 1))) {
                 continue;
             }
             Deadline.checkCurrent();
-            Rational closed = solution.valueAt(first + i);
+            Rational closed = exact.y().apply(first + i);
             compared++;
             if (!x.get(i).equals(closed)) {
                 return new Check("agrees with exact iteration", false, "differs at n = " + (first + i)
@@ -230,11 +253,11 @@ final class ExactVerifier {
         return longest;
     }
 
-    private static Check taylor(ExactSolution solution) {
-        List<Rational> d = extend(solution, solution.equation().order() + REFERENCE_TERMS);
+    private static Check taylor(Exact exact) {
+        List<Rational> d = extend(exact, exact.solution().equation().order() + REFERENCE_TERMS);
         for (int i = 0; i < d.size(); i++) {
             Deadline.checkCurrent();
-            if (!d.get(i).equals(solution.derivativeAtOrigin(i))) {
+            if (!d.get(i).equals(exact.y().apply(i))) {
                 return new Check("agrees with the Taylor series", false, "derivative " + i + " at t0 differs");
             }
         }
@@ -247,12 +270,12 @@ final class ExactVerifier {
      * each from s_{i+k} = (g_i - Σ_{j<k} a_j s_{i+j})/a_k: the recurrence itself, or the derivatives
      * that the differential equation forces.
      */
-    private static List<Rational> extend(ExactSolution solution, int count) {
-        List<Rational> a = solution.equation().coefficients();
+    private static List<Rational> extend(Exact exact, int count) {
+        List<Rational> a = exact.solution().equation().coefficients();
         int k = a.size() - 1;
-        long first = first(solution);
-        LongFunction<Rational> y = value(solution);
-        LongFunction<Rational> g = forcing(solution);
+        long first = first(exact.solution());
+        LongFunction<Rational> y = exact.y();
+        LongFunction<Rational> g = exact.g();
         List<Rational> s = new ArrayList<>();
         for (int i = 0; i < k; i++) {
             Deadline.checkCurrent();
