@@ -12,6 +12,7 @@ import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.function.IntFunction;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -64,6 +65,20 @@ final class FittedFunction {
     }
 
     /**
+     * y(t) for the cancellation estimate: in double precision where the estimated rounding error is
+     * below {@code relative}·max(1, |y|) ({@link DoubleModes}), else to {@link Analyzer#SAMPLE_DIGITS}
+     * digits in apfloat, confirmed by two working precisions.
+     */
+    BigDecimal sample(Rational t, double relative) {
+        OptionalDouble quick = doubles().accurate(t.doubleValue(), relative);
+        return quick.isPresent() ? new BigDecimal(quick.getAsDouble()) : value(t, Analyzer.SAMPLE_DIGITS).value();
+    }
+
+    private DoubleModes doubles() {
+        return sums.apply(Analyzer.SAMPLE_DIGITS + WorkingPrecision.GUARD_DIGITS).doubles();
+    }
+
+    /**
      * The integrator cross-check from the exact derivatives at the origin, on the problem's time
      * scales. The closed form is evaluated in double precision where its estimated rounding error is
      * below {@link IntegratorCheck#CLOSED_FORM_ERROR} relative ({@link DoubleModes}), else to 17
@@ -76,7 +91,7 @@ final class FittedFunction {
             Surd v = atOrigin.apply(d);
             initial.add(v.isRational() ? v.rational() : Rational.of(v.toBigDecimal(new MathContext(Analyzer.STATE_DIGITS))));
         }
-        DoubleModes doubles = sums.apply(Analyzer.SAMPLE_DIGITS + WorkingPrecision.GUARD_DIGITS).doubles();
+        DoubleModes doubles = doubles();
         IntegratorCheck.Solved closed = new IntegratorCheck.Solved() {
             @Override
             public double value(double t) {
