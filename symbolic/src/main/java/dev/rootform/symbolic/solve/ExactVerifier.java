@@ -12,6 +12,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.LongFunction;
 
 /**
@@ -108,7 +109,22 @@ final class ExactVerifier {
 
     /** x[n] (difference) or y^(n)(t0) (differential), exactly. */
     private static LongFunction<Rational> value(ExactSolution s) {
-        return s.domain() == Domain.DIFFERENCE ? s::valueAt : d -> s.derivativeAtOrigin(Math.toIntExact(d));
+        return s.domain() == Domain.DIFFERENCE ? s::valueAt : derivatives(s);
+    }
+
+    /**
+     * y^(n)(t0) from {@link ExactSolution#derivativesAtOrigin}: first the k + {@link #REFERENCE_TERMS}
+     * that the Taylor check compares, then runs twice as long as the last when more are asked for.
+     */
+    private static LongFunction<Rational> derivatives(ExactSolution s) {
+        AtomicReference<List<Rational>> known = new AtomicReference<>(List.of());
+        long first = s.equation().order() + REFERENCE_TERMS;
+        return n -> {
+            if (n >= known.get().size()) {
+                known.set(s.derivativesAtOrigin(Math.toIntExact(Math.max(n + 1, Math.max(first, 2L * known.get().size())))));
+            }
+            return known.get().get(Math.toIntExact(n));
+        };
     }
 
     /** g(n) (difference) or g^(n)(t0) (differential), exactly; zero for a homogeneous equation. */
