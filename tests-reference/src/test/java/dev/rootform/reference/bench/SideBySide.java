@@ -23,7 +23,8 @@ import java.util.Random;
  *
  * <p>Usage: {@code SideBySide <previous rootform.jar> <current rootform.jar>} (each
  * {@code cli/target/rootform.jar} of a packaged checkout, {@code lib/} beside it; the launcher
- * {@code rootform} of the checkout, when present, serves the cold figure). System properties:
+ * {@code rootform} of the checkout, when present, serves the cold figure), or through the
+ * {@code bench} profile (README "Performance"). System properties:
  * {@code bench.problems} (default 1000), {@code bench.figures} (default {@code warm,order64,roots,cold}).
  */
 public final class SideBySide {
@@ -47,11 +48,18 @@ public final class SideBySide {
         boolean run(Release release, int index) throws Exception;
     }
 
+    /**
+     * @param args the previous and the current {@code rootform.jar}; or, as the {@code bench} profile
+     *     passes it, the current checkout's launcher alone, with the previous jar in the system
+     *     property {@code bench.previous}
+     */
     public static void main(String[] args) throws Exception {
-        Release previous = new Release("previous", Path.of(args[0]));
-        Release current = new Release("current", Path.of(args[1]));
+        Path before = Path.of(args.length > 1 ? args[0] : System.getProperty("bench.previous", ""));
+        Path now = args.length > 1 ? Path.of(args[1]) : Path.of(args[0]).toAbsolutePath().resolveSibling("cli/target/rootform.jar");
+        Release previous = new Release("previous", before);
+        Release current = new Release("current", now);
         System.out.printf("rootform side by side — Java %s, %d CPUs; previous %s, current %s%n",
-                System.getProperty("java.version"), Runtime.getRuntime().availableProcessors(), args[0], args[1]);
+                System.getProperty("java.version"), Runtime.getRuntime().availableProcessors(), before, now);
         System.out.println("| figure | previous | current | previous / current |");
         System.out.println("|---|---|---|---|");
         if (FIGURES.contains("warm")) {
