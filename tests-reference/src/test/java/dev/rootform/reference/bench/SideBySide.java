@@ -5,12 +5,12 @@ import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.testing.Forcing;
 import dev.rootform.symbolic.testing.GeneratedProblem;
+import dev.rootform.symbolic.testing.RandomPolynomials;
 import dev.rootform.symbolic.testing.RandomProblems;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.Random;
 
 /**
  * The previous release and the current build side by side in one JVM on the same inputs, for the
@@ -193,15 +193,8 @@ public final class SideBySide {
         return j == 0 ? "y" : "y^(" + j + ")";
     }
 
-    /** The seeded random polynomial of the numeric module's RootBenchmark: coefficients in [−1000, 1000], leading one positive. */
+    /** The seeded random polynomial of the numeric module's RootBenchmark. */
     private static long[] randomPolynomial() {
-        Random random = new Random(ROOT_SEED);
-        long[] c = new long[ROOT_DEGREE + 1];
-        for (int i = 0; i <= ROOT_DEGREE; i++) {
-            c[i] = random.nextInt(2001) - 1000;
-        }
-        c[ROOT_DEGREE] = 1 + random.nextInt(1000);
-        c[0] = c[0] == 0 ? 1 : c[0];
-        return c;
+        return RandomPolynomials.integerCoefficients(ROOT_DEGREE, ROOT_SEED);
     }
 }
