@@ -1,6 +1,5 @@
 package dev.rootform.numeric.analysis;
 
-import dev.rootform.numeric.roots.ApfloatConversion;
 import dev.rootform.symbolic.algebra.Rational;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -12,7 +11,7 @@ final class Decimals {
     }
 
     static Apfloat toApfloat(Rational r, long precision) {
-        return ApfloatConversion.of(r, precision);
+        return new Apfloat(r.toBigDecimal(new MathContext((int) precision)), precision);
     }
 
     /** {@code a} rounded to {@code digits}; read from apfloat's scientific form, so a huge exponent costs nothing. */

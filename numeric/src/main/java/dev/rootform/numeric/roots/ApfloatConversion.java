@@ -8,16 +8,16 @@ import org.apfloat.Apfloat;
 /**
  * Exact rationals as apfloat numbers at a stated precision (approximate: the quotient is rounded
  * to that many significant digits). Numerators and denominators that fit a {@code long} take
- * apfloat's integer constructor; apfloat reads a {@link BigInteger} or {@link java.math.BigDecimal}
- * from its decimal text, which dominated the cost of small exact numbers (measured, README
- * "Performance").
+ * apfloat's integer constructor (apfloat 1.12's {@link BigInteger} constructor reads the digits
+ * through a stream and dominated the cost of small exact numbers; measured, README "Performance"),
+ * others go through {@link java.math.BigDecimal}.
  */
-public final class ApfloatConversion {
+final class ApfloatConversion {
     private ApfloatConversion() {
     }
 
     /** r to {@code precision} significant digits. */
-    public static Apfloat of(Rational r, long precision) {
+    static Apfloat of(Rational r, long precision) {
         BigInteger numerator = r.numerator();
         BigInteger denominator = r.denominator();
         if (numerator.bitLength() < Long.SIZE && denominator.bitLength() < Long.SIZE) {
