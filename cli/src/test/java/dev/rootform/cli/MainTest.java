@@ -98,6 +98,8 @@ class MainTest {
         "x[n+1] = x[n] + cos(2n); x[0] = 1|not a rational multiple of π",
         "x[n+1] = x[n] + 1/n; x[0] = 1|",
         "x[n+1] = x[n] + cos(2 pi n/7); x[0] = 1|lies in no quadratic field",
+        // sin(π/5) = √(10 - 2√5)/4 has degree 4 (common practice), while cos(π/5) = (1 + √5)/4 is in Q(√5)
+        "x[n+1] = x[n] + sin(pi n/5); x[0] = 1|cos of multiples of π/5",
         "x[n+1] = x[n] + cos(pi n/4) + sin(pi n/6); x[0] = 1|mixes values",
         "x[n+2] = 2x[n]; x[0] = 1; x[0] = 2|given twice",
         "x[n+2] = -x[n]; x[0] = 0; x[2] = 1|every solution has x[0] + x[2] = 0, but the given values make it 1",
