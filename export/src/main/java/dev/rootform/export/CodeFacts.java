@@ -67,14 +67,15 @@ public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit
      * @param points how many sample points were measured
      * @param maxRelativeError max |value − exact|/|exact| over the points where |exact| is at least
      *     1/{@link #CANCELLATION} of the largest term
-     * @param worstRelativeAt where that maximum occurs
+     * @param worstRelativeAt where that maximum occurs; empty when no point has such a value (the
+     *     terms cancel at every point, as in 10^9·(1 - 0.999999999^n) over its valid range)
      * @param maxAbsoluteError max |value − exact|
      * @param worstAbsoluteAt where that maximum occurs
      * @param maxTermError max |value − exact|/L, L the largest term the code adds up there
      *     ({@link NumericForm#largestTerm})
      * @param worstTermAt where that maximum occurs
      */
-    public record Accuracy(int points, double maxRelativeError, Rational worstRelativeAt, double maxAbsoluteError,
+    public record Accuracy(int points, double maxRelativeError, Optional<Rational> worstRelativeAt, double maxAbsoluteError,
             Rational worstAbsoluteAt, double maxTermError, Rational worstTermAt) {
         public Accuracy {
             Objects.requireNonNull(worstRelativeAt, "worstRelativeAt");

@@ -110,6 +110,29 @@ class GeneratedCodeAccuracyTest {
         assertTrue(java.contains("MODULUS"), java);
     }
 
+    /**
+     * A slow leak, x[n+1] = 0.999999999·x[n] + 1, x[0] = 0, is 10^9·(1 − 0.999999999^n): its two terms
+     * cancel at every index of the code's range, so the header states no relative error there (it
+     * named n = 0, where the value is 0, before) and its bound in units of L holds against exact
+     * rational iteration of the recurrence (reference: the recurrence itself, in exact fractions).
+     */
+    @Test
+    void cancellingTermsOfASequenceAreBoundedInUnitsOfTheirSize() {
+        Report r = Answers.codeReport("x[n+1] = 0.999999999 x[n] + 1; x[0] = 0", 30);
+        CodeFacts facts = r.code().orElseThrow().facts();
+        assertTrue(facts.forward().worstRelativeAt().isEmpty(), facts.forward().toString());
+        String java = JavaRenderer.render(r, "", "Leak");
+        assertTrue(java.contains("relative error not stated (no sampled value reaches 1/16 of L"), java);
+        NumericForm form = r.code().orElseThrow().form();
+        Rational rate = Rational.parse("0.999999999");
+        Rational x = Rational.ZERO;
+        for (long n = 0; n <= 500; n++) {
+            double error = new BigDecimal(form.valueAt(n)).subtract(x.toBigDecimal(MathContext.DECIMAL128)).abs().doubleValue();
+            assertTrue(error <= facts.forward().termBound() * form.largestTerm(n), "x[" + n + "]: error " + error);
+            x = x.multiply(rate).add(Rational.ONE);
+        }
+    }
+
     private static void assertRelative(Report r, String at, Function<Apfloat, Apfloat> known, double tolerance) {
         double t = Double.parseDouble(at);
         Apfloat exact = known.apply(new Apfloat(new BigDecimal(t), PRECISION));

@@ -105,8 +105,11 @@ final class CodeHeader {
                 ? "exact at every sampled point to the resolution of a " + type.keyword() + " (relative error at most 2^-"
                         + (type == CType.FLOAT ? 24 : 53) + "; worst absolute error " + shortNumber(a.maxAbsoluteError()) + " at "
                         + v + " = " + at(a.worstAbsoluteAt()) + ")"
-                : "worst relative error " + shortNumber(a.maxRelativeError()) + " (at " + v + " = " + at(a.worstRelativeAt())
-                        + "; where the value is at least 1/" + (int) CodeFacts.CANCELLATION + " of L), worst absolute error "
+                : a.worstRelativeAt().map(w -> "worst relative error " + shortNumber(a.maxRelativeError()) + " (at " + v + " = "
+                        + at(w) + "; where the value is at least 1/" + (int) CodeFacts.CANCELLATION + " of L)")
+                        .orElse("relative error not stated (no sampled value reaches 1/" + (int) CodeFacts.CANCELLATION
+                                + " of L: the terms cancel, so the error is stated in units of L)")
+                        + ", worst absolute error "
                         + shortNumber(a.maxAbsoluteError()) + " (at " + v + " = " + at(a.worstAbsoluteAt()) + "), worst error in "
                         + "units of L " + shortNumber(a.maxTermError()) + " (at " + v + " = " + at(a.worstTermAt()) + ")";
         return side + " (" + a.points() + " points): " + errors + ". Stated bound: |value - exact| <= max("

@@ -123,6 +123,7 @@ final class CodeMeasurement {
         double[] worst = new double[3];
         Rational first = points.get(which.get(0));
         Rational[] where = {first, first, first};
+        boolean relative = false;
         for (int i : which) {
             Deadline.checkCurrent();
             Rational p = points.get(i);
@@ -131,9 +132,10 @@ final class CodeMeasurement {
                     : BigDecimal.valueOf(Double.MAX_VALUE);
             double term = largestTerm(form, p);
             double size = exact.get(i).abs().doubleValue();
+            boolean measured = size != 0 && size * CodeFacts.CANCELLATION >= term;
+            relative |= measured;
             double[] errors = {
-                size == 0 || size * CodeFacts.CANCELLATION < term ? 0
-                        : difference.divide(exact.get(i).abs(), MathContext.DECIMAL64).doubleValue(),
+                measured ? difference.divide(exact.get(i).abs(), MathContext.DECIMAL64).doubleValue() : 0,
                 difference.doubleValue(),
                 term == 0 ? 0 : difference.doubleValue() / term,
             };
@@ -144,7 +146,8 @@ final class CodeMeasurement {
                 }
             }
         }
-        return new CodeFacts.Accuracy(which.size(), worst[0], where[0], worst[1], where[1], worst[2], where[2]);
+        return new CodeFacts.Accuracy(which.size(), worst[0], relative ? Optional.of(where[0]) : Optional.empty(), worst[1],
+                where[1], worst[2], where[2]);
     }
 
     /**
