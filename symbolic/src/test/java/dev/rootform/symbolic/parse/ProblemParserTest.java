@@ -133,6 +133,18 @@ class ProblemParserTest {
         assertEquals(List.of(polynomial("1", 1, Domain.DIFFERENTIAL)), e.forcing());
     }
 
+    @ParameterizedTest
+    @ValueSource(strings = {"e", "pi", "D", "E", "sin", "exp", "log"})
+    void fixedNameCannotBeTheVariable(String name) {
+        // u(e) = e^(-e) + e·e^(-e) or y(pi) = cos(pi) would read as values of the constants
+        InputException x = assertThrows(InputException.class,
+                () -> ProblemParser.parse("u'' + 2u' + u = 0", List.of(), name));
+        assertTrue(x.getMessage().contains("cannot name the variable"), x.getMessage());
+        InputException leibniz = assertThrows(InputException.class,
+                () -> ProblemParser.parse("du/d" + name + " + u = 0", List.of(), null));
+        assertTrue(leibniz.getMessage().contains("cannot name the variable"), leibniz.getMessage());
+    }
+
     @Test
     void variableParameterAndOtherFunctionName() {
         LinearEquation e = ProblemParser.parse("u'' + u = s", List.of(), "s").equation();
