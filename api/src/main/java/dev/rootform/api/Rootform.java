@@ -79,4 +79,13 @@ public final class Rootform {
     public static CheckResult check(CheckRequest request) {
         return CheckJob.run(request);
     }
+
+    /**
+     * Analyses a transfer function exactly (lowest terms, poles and zeros, DC gain, properness,
+     * stability) and computes its response to the request's input in closed form, verified, with
+     * the frequency response and, for a step into a stable system, the step figures.
+     */
+    public static ResponseResult response(ResponseRequest request) {
+        return ResponseJob.run(request);
+    }
 }
