@@ -118,6 +118,16 @@ class MainTest {
     }
 
     @Test
+    void aRateBeyondTheNumberRangeIsSolvedWithoutItsFarSamples() {
+        // y' = 10^20·y, y(0) = 1 is e^(10^20·t) (common practice); at t = 1 it is e^(10^20), beyond the
+        // exponent range of arbitrary-precision numbers: the answer leaves out such samples, and a value
+        // asked there is refused (bad-inputs.csv)
+        Run r = run("solve", "y' = 10^20 y; y(0) = 1");
+        assertEquals(0, r.code(), r.out() + r.err());
+        assertTrue(r.out().contains("e^(100000000000000000000t)"), r.out());
+    }
+
+    @Test
     void caretPointsAtTheProblem() {
         Run r = run("solve", "y'' + (2y' = 0");
         String[] lines = r.err().split("\\R");

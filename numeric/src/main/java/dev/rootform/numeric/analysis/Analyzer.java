@@ -11,6 +11,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.RadicalSolution;
@@ -177,12 +178,22 @@ public final class Analyzer {
         return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p, digits, cache) : FittedFunction.of(s, cache).value(p, digits);
     }
 
-    /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
+    /**
+     * Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation; a
+     * function's sample beyond the range of numbers (y' = 10^20·y at t0 + 1) is left out.
+     */
     private List<PointValue> samples(ExactSolution s, RootCache cache) {
         List<PointValue> samples = new ArrayList<>();
         for (long offset : SAMPLE_OFFSETS) {
-            samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset), SAMPLE_DIGITS, cache)
-                    : FittedFunction.of(s, cache).value(s.origin().add(Rational.of(offset)), SAMPLE_DIGITS));
+            if (s.domain() == Domain.DIFFERENCE) {
+                samples.add(sequenceValue(s, Rational.of(s.validFrom() + offset), SAMPLE_DIGITS, cache));
+                continue;
+            }
+            try {
+                samples.add(FittedFunction.of(s, cache).value(s.origin().add(Rational.of(offset)), SAMPLE_DIGITS));
+            } catch (InputException beyondRange) {
+                // no sample there: its size is beyond any representable number
+            }
         }
         return samples;
     }
