@@ -133,6 +133,26 @@ class GeneratedCodeAccuracyTest {
         }
     }
 
+    /**
+     * y' = 10^20·y, y(0) = 1 is e^(10^20·t) (common practice): in double it overflows above
+     * t = ln(DBL_MAX)/10^20 ≈ 7.098·10^-18 (DBL_MAX = 1.7976931348623157·10^308, IEEE 754, from
+     * memory) and falls below the smallest normal number under -ln(DBL_MIN)/10^20 ≈ -7.08·10^-18; the
+     * range is found at that scale (it read 0 <= t <= 0 before), and the code is accurate inside it
+     * (reference: apfloat's exp at 60 digits).
+     */
+    @Test
+    void theRangeOfAnExtremeRateIsFoundAtItsOwnScale() {
+        Report r = Answers.codeReport("y' = 10^20 y; y(0) = 1", 30);
+        CodeFacts facts = r.code().orElseThrow().facts();
+        double top = Math.log(Double.MAX_VALUE) / 1e20;
+        double bottom = Math.log(Double.MIN_NORMAL) / 1e20;
+        assertTrue(facts.high() > 0.99 * top && facts.high() <= top, facts.high() + " vs " + top);
+        assertTrue(facts.low() < 0.99 * bottom && facts.low() >= bottom, facts.low() + " vs " + bottom);
+        for (double t : new double[] {facts.high() / 2, facts.low() / 2, 1e-21, -3e-19}) {
+            assertRelative(r, Double.toString(t), x -> ApfloatMath.exp(x.multiply(new Apfloat("1e20", PRECISION))), 2e-13);
+        }
+    }
+
     private static void assertRelative(Report r, String at, Function<Apfloat, Apfloat> known, double tolerance) {
         double t = Double.parseDouble(at);
         Apfloat exact = known.apply(new Apfloat(new BigDecimal(t), PRECISION));

@@ -80,9 +80,11 @@ final class CodeMeasurement {
         Map<CType, Edge[]> ranges = new EnumMap<>(CType.class);
         Map<CType, List<Rational>> samples = new EnumMap<>(CType.class);
         TreeSet<Rational> all = new TreeSet<>();
+        // the ends are found to a width far below the shortest scale (y' = 10^20·y ends at |t| ≈ 7·10^-18)
+        double width = 1e-12 * Math.min(1, scales.stream().mapToDouble(Double::doubleValue).min().orElse(1));
         for (CType type : CType.values()) {
-            Edge high = edge(form, start, 1, type);
-            Edge low = form.differential() ? edge(form, start, -1, type) : new Edge(form.first(), Limit.FIRST_INDEX);
+            Edge high = edge(form, start, 1, type, width);
+            Edge low = form.differential() ? edge(form, start, -1, type, width) : new Edge(form.first(), Limit.FIRST_INDEX);
             ranges.put(type, new Edge[] {low, high});
             samples.put(type, form.differential() ? functionPoints(origin, low.at(), high.at(), scales)
                     : sequencePoints(form, high.at(), scales));
@@ -267,21 +269,22 @@ final class CodeMeasurement {
     }
 
     /** The farthest v from start in {@code direction} (up to the type's cap) at which the form fits, and what ends it there. */
-    private static Edge edge(NumericForm form, double start, int direction, CType type) {
+    /** The end of the range from {@code start} in {@code direction}, to within {@code width} for functions. */
+    private static Edge edge(NumericForm form, double start, int direction, CType type, double width) {
         double good = start;
         for (double step = 1; step <= type.cap(); step *= 2) {
             double v = start + direction * step;
             if (misfit(form, v, type) != null) {
-                return bisect(form, good, v, type);
+                return bisect(form, good, v, type, width);
             }
             good = v;
         }
         double last = start + direction * type.cap();
-        return misfit(form, last, type) == null ? new Edge(last, Limit.CAP) : bisect(form, good, last, type);
+        return misfit(form, last, type) == null ? new Edge(last, Limit.CAP) : bisect(form, good, last, type, width);
     }
 
-    private static Edge bisect(NumericForm form, double good, double bad, CType type) {
-        while (Math.abs(bad - good) > (form.differential() ? Math.ulp(Math.abs(good)) * 4 + 1e-12 : 1)) {
+    private static Edge bisect(NumericForm form, double good, double bad, CType type, double width) {
+        while (Math.abs(bad - good) > (form.differential() ? Math.ulp(Math.abs(good)) * 4 + width : 1)) {
             double mid = form.differential() ? (good + bad) / 2 : Math.floor((good + bad) / 2);
             if (mid == good || mid == bad) {
                 break;
