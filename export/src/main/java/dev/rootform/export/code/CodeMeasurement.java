@@ -80,8 +80,9 @@ final class CodeMeasurement {
         Map<CType, Edge[]> ranges = new EnumMap<>(CType.class);
         Map<CType, List<Rational>> samples = new EnumMap<>(CType.class);
         TreeSet<Rational> all = new TreeSet<>();
-        // the ends are found to a width far below the shortest scale (y' = 10^20·y ends at |t| ≈ 7·10^-18)
-        double width = 1e-12 * Math.min(1, scales.stream().mapToDouble(Double::doubleValue).min().orElse(1));
+        // the ends are found to 10^-12, or to 10^-6 of the shortest scale below that (y' = 10^20·y ends
+        // at |t| ≈ 7·10^-18)
+        double width = Math.min(1e-12, 1e-6 * scales.stream().mapToDouble(Double::doubleValue).min().orElse(1));
         for (CType type : CType.values()) {
             Edge high = edge(form, start, 1, type, width);
             Edge low = form.differential() ? edge(form, start, -1, type, width) : new Edge(form.first(), Limit.FIRST_INDEX);
