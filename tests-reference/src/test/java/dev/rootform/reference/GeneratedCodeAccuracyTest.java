@@ -153,6 +153,22 @@ class GeneratedCodeAccuracyTest {
         }
     }
 
+    /**
+     * y''' - y' - y = 0 grows backward as e^(0.662·|t|) with a frequency 0.562 (roots of λ^3 - λ - 1,
+     * the plastic number's polynomial; its real root 1.3247… is OEIS A060006, from memory): at t ≈ -1070 the
+     * arguments 0.662·t and 0.562·t are rounded to a relative 2^-53, so by first-order error
+     * propagation (common practice) the error reaches about (709 + 601)·2^-53 ≈ 1.5·10^-13 of the
+     * largest term, which the sampled worst (5·10^-14) underestimates; the stated bound covers it.
+     */
+    @Test
+    void theStatedBoundCoversTheRoundingOfRatesAndAnglesBetweenSamples() {
+        Report r = Answers.codeReport("y''' - y' - y = 0; y(0) = 1; y'(0) = 0; y''(0) = 0", 30);
+        CodeFacts.Accuracy back = r.code().orElseThrow().facts().backward().orElseThrow();
+        double firstOrder = (0.662 + 0.562) * 1070 * 0x1p-53;
+        assertTrue(back.maxDrift() > 0.5 * firstOrder, back.toString());
+        assertTrue(back.termBound() >= 2 * back.maxDrift() && back.termBound() >= firstOrder, back.toString());
+    }
+
     private static void assertRelative(Report r, String at, Function<Apfloat, Apfloat> known, double tolerance) {
         double t = Double.parseDouble(at);
         Apfloat exact = known.apply(new Apfloat(new BigDecimal(t), PRECISION));

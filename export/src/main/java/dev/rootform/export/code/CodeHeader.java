@@ -88,7 +88,8 @@ final class CodeHeader {
                 + "valid range; " + arithmetic + ". L below is the largest term the code adds up at an input ("
                 + (form.series().isEmpty() ? "" : "|SERIES[d]*s^d| near t0, else ") + "|AMPLITUDE[i]*v^POWER[i]*"
                 + (form.differential() ? "exp(GROWTH[i]*v)" : "GROWTH[i]^v") + "|); the stated bound is "
-                + (int) CodeFacts.MARGIN + " x the worst measured, for inputs between the sample points.");
+                + (int) CodeFacts.MARGIN + " x the worst measured, for inputs between the sample points, and in units of L at least "
+                + (int) CodeFacts.MARGIN + " x the drift that rounded rates and angles can cause there.");
         out.add(accuracy(form.differential() ? "For " + v + " >= t0" : "For every n", v, facts.forward(), type));
         facts.backward().ifPresent(a -> out.add(accuracy("For " + v + " < t0", v, a, type)));
         return out;

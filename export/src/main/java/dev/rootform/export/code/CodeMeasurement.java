@@ -124,6 +124,7 @@ final class CodeMeasurement {
     private static CodeFacts.Accuracy accuracy(NumericForm form, CVariant variant, List<Rational> points, List<BigDecimal> exact,
             List<Integer> which) {
         double[] worst = new double[3];
+        double maxDrift = 0;
         Rational first = points.get(which.get(0));
         Rational[] where = {first, first, first};
         boolean relative = false;
@@ -134,6 +135,11 @@ final class CodeMeasurement {
             BigDecimal difference = Double.isFinite(value) ? measurable(new BigDecimal(value).subtract(exact.get(i)).abs(), exact.get(i))
                     : BigDecimal.valueOf(Double.MAX_VALUE);
             double term = largestTerm(form, p);
+            double v = form.differential() ? p.doubleValue() - form.origin() : p.doubleValue();
+            double logLargest = form.logMagnitude(v);
+            if (Double.isFinite(logLargest)) {
+                maxDrift = Math.max(maxDrift, drift(form, v, logLargest, variant.type()));
+            }
             double size = exact.get(i).abs().doubleValue();
             boolean measured = size != 0 && size * CodeFacts.CANCELLATION >= term;
             relative |= measured;
@@ -150,7 +156,7 @@ final class CodeMeasurement {
             }
         }
         return new CodeFacts.Accuracy(which.size(), worst[0], relative ? Optional.of(where[0]) : Optional.empty(), worst[1],
-                where[1], worst[2], where[2]);
+                where[1], worst[2], where[2], maxDrift);
     }
 
     /**
