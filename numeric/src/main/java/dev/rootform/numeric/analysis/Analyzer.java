@@ -11,6 +11,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
@@ -187,16 +188,23 @@ public final class Analyzer {
         return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p, digits, cache) : FittedFunction.of(s, cache).value(p, digits);
     }
 
-    /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
+    /**
+     * Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation; a
+     * function's sample beyond the range of numbers (y' = 10^20·y at t0 + 1) is left out.
+     */
     private List<SampleValue> samples(ExactSolution s, RootCache cache) {
         List<SampleValue> samples = new ArrayList<>();
         for (long offset : SAMPLE_OFFSETS) {
             if (s.domain() == Domain.DIFFERENCE) {
                 Rational n = Rational.of(s.validFrom() + offset);
                 samples.add(new SampleValue(n, sequenceValue(s, n, SAMPLE_DIGITS, cache).value()));
-            } else {
-                Rational t = s.origin().add(Rational.of(offset));
+                continue;
+            }
+            Rational t = s.origin().add(Rational.of(offset));
+            try {
                 samples.add(new SampleValue(t, FittedFunction.of(s, cache).sample(t, SAMPLE_ERROR)));
+            } catch (InputException beyondRange) {
+                // no sample there: its size is beyond any representable number
             }
         }
         return samples;

@@ -3,6 +3,7 @@ package dev.rootform.numeric.analysis;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.Surd;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
@@ -16,6 +17,7 @@ import java.util.OptionalDouble;
 import java.util.function.IntFunction;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.apfloat.OverflowException;
 
 /**
  * A fitted differential-equation solution with exact constants, evaluated numerically: an
@@ -49,19 +51,29 @@ final class FittedFunction {
                 working -> ModeSum.of(r, cache, working));
     }
 
-    /** y(t) to {@code wanted} significant digits; exact at the origin. */
+    /**
+     * y(t) to {@code wanted} significant digits; exact at the origin.
+     *
+     * @throws InputException when a term e^(λ·(t - t0)) lies beyond the exponent range of
+     *     arbitrary-precision numbers (|λ·(t - t0)| of about 10^18 and more: y' = 10^20·y at t = 1)
+     */
     PointValue value(Rational t, int wanted) {
         if (t.equals(origin)) {
             Surd v = atOrigin.apply(0);
             return new PointValue(t, v.toBigDecimal(new MathContext(wanted)), v.isRational() ? Optional.of(v.rational()) : Optional.empty(),
                     v.isRational() ? Optional.empty() : Optional.of(v));
         }
-        Apfloat[] settled = WorkingPrecision.settle(wanted, working -> sums.apply(working).valueAndLargest(t),
-                (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
-                (working, high) -> working + WorkingPrecision.GUARD_DIGITS
-                        + (int) Math.ceil(ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10)),
-                "value at t = " + t);
-        return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
+        try {
+            Apfloat[] settled = WorkingPrecision.settle(wanted, working -> sums.apply(working).valueAndLargest(t),
+                    (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
+                    (working, high) -> working + WorkingPrecision.GUARD_DIGITS
+                            + (int) Math.ceil(ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10)),
+                    "value at t = " + t);
+            return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
+        } catch (OverflowException e) {
+            throw new InputException("value at t = " + t + ": a term of the solution there exceeds the exponent range of "
+                    + "arbitrary-precision numbers (e^(λ·t) with |λ·t| beyond about 10^18)", "", -1);
+        }
     }
 
     /**
