@@ -62,20 +62,25 @@ public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit
      * terms the code adds up do not cancel (|exact| at least 1/{@link #CANCELLATION} of the largest
      * term), absolute error, and absolute error in units of the largest term (which bounds the error
      * where they cancel). The stated bounds ({@link #relativeBound}, {@link #termBound}) are the
-     * worst measured times {@link #MARGIN}, for inputs between the samples.
+     * worst measured times {@link #MARGIN}, for inputs between the samples; the one in units of L is
+     * at least {@link #MARGIN} times the drift that the rounding of rates and angles can cause at the
+     * samples (errors between samples vary with that rounding, not smoothly).
      *
      * @param points how many sample points were measured
      * @param maxRelativeError max |value − exact|/|exact| over the points where |exact| is at least
      *     1/{@link #CANCELLATION} of the largest term
-     * @param worstRelativeAt where that maximum occurs
+     * @param worstRelativeAt where that maximum occurs; empty when no point has such a value (the
+     *     terms cancel at every point, as in 10^9·(1 - 0.999999999^n) over its valid range)
      * @param maxAbsoluteError max |value − exact|
      * @param worstAbsoluteAt where that maximum occurs
      * @param maxTermError max |value − exact|/L, L the largest term the code adds up there
      *     ({@link NumericForm#largestTerm})
      * @param worstTermAt where that maximum occurs
+     * @param maxDrift the largest drift, in units of L, that the rounding of rates and angles can cause
+     *     at the points (|v|·Σ size·(rate and angle rounding) by first-order error propagation)
      */
-    public record Accuracy(int points, double maxRelativeError, Rational worstRelativeAt, double maxAbsoluteError,
-            Rational worstAbsoluteAt, double maxTermError, Rational worstTermAt) {
+    public record Accuracy(int points, double maxRelativeError, Optional<Rational> worstRelativeAt, double maxAbsoluteError,
+            Rational worstAbsoluteAt, double maxTermError, Rational worstTermAt, double maxDrift) {
         public Accuracy {
             Objects.requireNonNull(worstRelativeAt, "worstRelativeAt");
             Objects.requireNonNull(worstAbsoluteAt, "worstAbsoluteAt");
@@ -87,9 +92,9 @@ public record CodeFacts(double low, double high, Limit lowLimit, Limit highLimit
             return MARGIN * maxRelativeError;
         }
 
-        /** The stated error bound in units of the largest term: {@link #MARGIN} times the worst measured. */
+        /** The stated error bound in units of the largest term: {@link #MARGIN} times the worst measured or the drift. */
         public double termBound() {
-            return MARGIN * maxTermError;
+            return MARGIN * Math.max(maxTermError, maxDrift);
         }
     }
 

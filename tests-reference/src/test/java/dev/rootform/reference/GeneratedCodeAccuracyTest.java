@@ -110,6 +110,65 @@ class GeneratedCodeAccuracyTest {
         assertTrue(java.contains("MODULUS"), java);
     }
 
+    /**
+     * A slow leak, x[n+1] = 0.999999999·x[n] + 1, x[0] = 0, is 10^9·(1 − 0.999999999^n): its two terms
+     * cancel at every index of the code's range, so the header states no relative error there (it
+     * named n = 0, where the value is 0, before) and its bound in units of L holds against exact
+     * rational iteration of the recurrence (reference: the recurrence itself, in exact fractions).
+     */
+    @Test
+    void cancellingTermsOfASequenceAreBoundedInUnitsOfTheirSize() {
+        Report r = Answers.codeReport("x[n+1] = 0.999999999 x[n] + 1; x[0] = 0", 30);
+        CodeFacts facts = r.code().orElseThrow().facts();
+        assertTrue(facts.forward().worstRelativeAt().isEmpty(), facts.forward().toString());
+        String java = JavaRenderer.render(r, "", "Leak");
+        assertTrue(java.contains("relative error not stated (no sampled value reaches 1/16 of L"), java);
+        NumericForm form = r.code().orElseThrow().form();
+        Rational rate = Rational.parse("0.999999999");
+        Rational x = Rational.ZERO;
+        for (long n = 0; n <= 500; n++) {
+            double error = new BigDecimal(form.valueAt(n)).subtract(x.toBigDecimal(MathContext.DECIMAL128)).abs().doubleValue();
+            assertTrue(error <= facts.forward().termBound() * form.largestTerm(n), "x[" + n + "]: error " + error);
+            x = x.multiply(rate).add(Rational.ONE);
+        }
+    }
+
+    /**
+     * y' = 10^20·y, y(0) = 1 is e^(10^20·t) (common practice): in double it overflows above
+     * t = ln(DBL_MAX)/10^20 ≈ 7.098·10^-18 (DBL_MAX = 1.7976931348623157·10^308, IEEE 754, from
+     * memory) and falls below the smallest normal number under -ln(DBL_MIN)/10^20 ≈ -7.08·10^-18; the
+     * range is found at that scale (it read 0 <= t <= 0 before), and the code is accurate inside it
+     * (reference: apfloat's exp at 60 digits).
+     */
+    @Test
+    void theRangeOfAnExtremeRateIsFoundAtItsOwnScale() {
+        Report r = Answers.codeReport("y' = 10^20 y; y(0) = 1", 30);
+        CodeFacts facts = r.code().orElseThrow().facts();
+        double top = Math.log(Double.MAX_VALUE) / 1e20;
+        double bottom = Math.log(Double.MIN_NORMAL) / 1e20;
+        assertTrue(facts.high() > 0.99 * top && facts.high() <= top, facts.high() + " vs " + top);
+        assertTrue(facts.low() < 0.99 * bottom && facts.low() >= bottom, facts.low() + " vs " + bottom);
+        for (double t : new double[] {facts.high() / 2, facts.low() / 2, 1e-21, -3e-19}) {
+            assertRelative(r, Double.toString(t), x -> ApfloatMath.exp(x.multiply(new Apfloat("1e20", PRECISION))), 2e-13);
+        }
+    }
+
+    /**
+     * y''' - y' - y = 0 grows backward as e^(0.662·|t|) with a frequency 0.562 (roots of λ^3 - λ - 1,
+     * the plastic number's polynomial; its real root 1.3247… is OEIS A060006, from memory): at t ≈ -1070 the
+     * arguments 0.662·t and 0.562·t are rounded to a relative 2^-53, so by first-order error
+     * propagation (common practice) the error reaches about (709 + 601)·2^-53 ≈ 1.5·10^-13 of the
+     * largest term, which the sampled worst (5·10^-14) underestimates; the stated bound covers it.
+     */
+    @Test
+    void theStatedBoundCoversTheRoundingOfRatesAndAnglesBetweenSamples() {
+        Report r = Answers.codeReport("y''' - y' - y = 0; y(0) = 1; y'(0) = 0; y''(0) = 0", 30);
+        CodeFacts.Accuracy back = r.code().orElseThrow().facts().backward().orElseThrow();
+        double firstOrder = (0.662 + 0.562) * 1070 * 0x1p-53;
+        assertTrue(back.maxDrift() > 0.5 * firstOrder, back.toString());
+        assertTrue(back.termBound() >= 2 * back.maxDrift() && back.termBound() >= firstOrder, back.toString());
+    }
+
     private static void assertRelative(Report r, String at, Function<Apfloat, Apfloat> known, double tolerance) {
         double t = Double.parseDouble(at);
         Apfloat exact = known.apply(new Apfloat(new BigDecimal(t), PRECISION));

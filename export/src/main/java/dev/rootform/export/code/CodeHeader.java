@@ -88,7 +88,8 @@ final class CodeHeader {
                 + "valid range; " + arithmetic + ". L below is the largest term the code adds up at an input ("
                 + (form.series().isEmpty() ? "" : "|SERIES[d]*s^d| near t0, else ") + "|AMPLITUDE[i]*v^POWER[i]*"
                 + (form.differential() ? "exp(GROWTH[i]*v)" : "GROWTH[i]^v") + "|); the stated bound is "
-                + (int) CodeFacts.MARGIN + " x the worst measured, for inputs between the sample points.");
+                + (int) CodeFacts.MARGIN + " x the worst measured, for inputs between the sample points, and in units of L at least "
+                + (int) CodeFacts.MARGIN + " x the drift that rounded rates and angles can cause there.");
         out.add(accuracy(form.differential() ? "For " + v + " >= t0" : "For every n", v, facts.forward(), type));
         facts.backward().ifPresent(a -> out.add(accuracy("For " + v + " < t0", v, a, type)));
         return out;
@@ -105,8 +106,11 @@ final class CodeHeader {
                 ? "exact at every sampled point to the resolution of a " + type.keyword() + " (relative error at most 2^-"
                         + (type == CType.FLOAT ? 24 : 53) + "; worst absolute error " + shortNumber(a.maxAbsoluteError()) + " at "
                         + v + " = " + at(a.worstAbsoluteAt()) + ")"
-                : "worst relative error " + shortNumber(a.maxRelativeError()) + " (at " + v + " = " + at(a.worstRelativeAt())
-                        + "; where the value is at least 1/" + (int) CodeFacts.CANCELLATION + " of L), worst absolute error "
+                : a.worstRelativeAt().map(w -> "worst relative error " + shortNumber(a.maxRelativeError()) + " (at " + v + " = "
+                        + at(w) + "; where the value is at least 1/" + (int) CodeFacts.CANCELLATION + " of L)")
+                        .orElse("relative error not stated (no sampled value reaches 1/" + (int) CodeFacts.CANCELLATION
+                                + " of L: the terms cancel, so the error is stated in units of L)")
+                        + ", worst absolute error "
                         + shortNumber(a.maxAbsoluteError()) + " (at " + v + " = " + at(a.worstAbsoluteAt()) + "), worst error in "
                         + "units of L " + shortNumber(a.maxTermError()) + " (at " + v + " = " + at(a.worstTermAt()) + ")";
         return side + " (" + a.points() + " points): " + errors + ". Stated bound: |value - exact| <= max("

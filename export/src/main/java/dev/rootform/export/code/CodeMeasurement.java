@@ -80,9 +80,12 @@ final class CodeMeasurement {
         Map<CType, Edge[]> ranges = new EnumMap<>(CType.class);
         Map<CType, List<Rational>> samples = new EnumMap<>(CType.class);
         TreeSet<Rational> all = new TreeSet<>();
+        // the ends are found to 10^-12, or to 10^-6 of the shortest scale below that (y' = 10^20·y ends
+        // at |t| ≈ 7·10^-18)
+        double width = Math.min(1e-12, 1e-6 * scales.stream().mapToDouble(Double::doubleValue).min().orElse(1));
         for (CType type : CType.values()) {
-            Edge high = edge(form, start, 1, type);
-            Edge low = form.differential() ? edge(form, start, -1, type) : new Edge(form.first(), Limit.FIRST_INDEX);
+            Edge high = edge(form, start, 1, type, width);
+            Edge low = form.differential() ? edge(form, start, -1, type, width) : new Edge(form.first(), Limit.FIRST_INDEX);
             ranges.put(type, new Edge[] {low, high});
             samples.put(type, form.differential() ? functionPoints(origin, low.at(), high.at(), scales)
                     : sequencePoints(form, high.at(), scales));
@@ -121,8 +124,10 @@ final class CodeMeasurement {
     private static CodeFacts.Accuracy accuracy(NumericForm form, CVariant variant, List<Rational> points, List<BigDecimal> exact,
             List<Integer> which) {
         double[] worst = new double[3];
+        double maxDrift = 0;
         Rational first = points.get(which.get(0));
         Rational[] where = {first, first, first};
+        boolean relative = false;
         for (int i : which) {
             Deadline.checkCurrent();
             Rational p = points.get(i);
@@ -130,10 +135,16 @@ final class CodeMeasurement {
             BigDecimal difference = Double.isFinite(value) ? measurable(new BigDecimal(value).subtract(exact.get(i)).abs(), exact.get(i))
                     : BigDecimal.valueOf(Double.MAX_VALUE);
             double term = largestTerm(form, p);
+            double v = form.differential() ? p.doubleValue() - form.origin() : p.doubleValue();
+            double logLargest = form.logMagnitude(v);
+            if (Double.isFinite(logLargest)) {
+                maxDrift = Math.max(maxDrift, drift(form, v, logLargest, variant.type()));
+            }
             double size = exact.get(i).abs().doubleValue();
+            boolean measured = size != 0 && size * CodeFacts.CANCELLATION >= term;
+            relative |= measured;
             double[] errors = {
-                size == 0 || size * CodeFacts.CANCELLATION < term ? 0
-                        : difference.divide(exact.get(i).abs(), MathContext.DECIMAL64).doubleValue(),
+                measured ? difference.divide(exact.get(i).abs(), MathContext.DECIMAL64).doubleValue() : 0,
                 difference.doubleValue(),
                 term == 0 ? 0 : difference.doubleValue() / term,
             };
@@ -144,7 +155,8 @@ final class CodeMeasurement {
                 }
             }
         }
-        return new CodeFacts.Accuracy(which.size(), worst[0], where[0], worst[1], where[1], worst[2], where[2]);
+        return new CodeFacts.Accuracy(which.size(), worst[0], relative ? Optional.of(where[0]) : Optional.empty(), worst[1],
+                where[1], worst[2], where[2], maxDrift);
     }
 
     /**
@@ -264,21 +276,22 @@ final class CodeMeasurement {
     }
 
     /** The farthest v from start in {@code direction} (up to the type's cap) at which the form fits, and what ends it there. */
-    private static Edge edge(NumericForm form, double start, int direction, CType type) {
+    /** The end of the range from {@code start} in {@code direction}, to within {@code width} for functions. */
+    private static Edge edge(NumericForm form, double start, int direction, CType type, double width) {
         double good = start;
         for (double step = 1; step <= type.cap(); step *= 2) {
             double v = start + direction * step;
             if (misfit(form, v, type) != null) {
-                return bisect(form, good, v, type);
+                return bisect(form, good, v, type, width);
             }
             good = v;
         }
         double last = start + direction * type.cap();
-        return misfit(form, last, type) == null ? new Edge(last, Limit.CAP) : bisect(form, good, last, type);
+        return misfit(form, last, type) == null ? new Edge(last, Limit.CAP) : bisect(form, good, last, type, width);
     }
 
-    private static Edge bisect(NumericForm form, double good, double bad, CType type) {
-        while (Math.abs(bad - good) > (form.differential() ? Math.ulp(Math.abs(good)) * 4 + 1e-12 : 1)) {
+    private static Edge bisect(NumericForm form, double good, double bad, CType type, double width) {
+        while (Math.abs(bad - good) > (form.differential() ? Math.ulp(Math.abs(good)) * 4 + width : 1)) {
             double mid = form.differential() ? (good + bad) / 2 : Math.floor((good + bad) / 2);
             if (mid == good || mid == bad) {
                 break;

@@ -3,6 +3,7 @@ package dev.rootform.export.notation;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.closedform.Surd;
+import java.math.BigInteger;
 
 /**
  * Text for a root of the characteristic polynomial: exact ({@code 1/2 + 1/2·√5}, {@code -1 - 2i},
@@ -20,13 +21,21 @@ public final class RootText {
             return complex(e.re(), e.im());
         }
         if (root instanceof ExactRoot.OfUnity u) {
-            String angle = "2" + (u.k() == 1 ? "" : "·" + u.k()) + "π/" + u.order();
+            String angle = angle(u);
             return "cos(" + angle + ") + i·sin(" + angle + ")";
         }
         if (root instanceof ExactRoot.Implicit i) {
             return "root " + i.index() + " of " + i.factor().toString(EquationText.LAMBDA);
         }
         throw new AssertionError(root);
+    }
+
+    /** The angle 2πk/order in lowest terms: {@code π/4}, {@code 3π/4}, {@code 2π/5}, {@code π}. */
+    private static String angle(ExactRoot.OfUnity u) {
+        int g = BigInteger.valueOf(2L * u.k()).gcd(BigInteger.valueOf(u.order())).intValueExact();
+        int numerator = 2 * u.k() / g;
+        int denominator = u.order() / g;
+        return (numerator == 1 ? "" : Integer.toString(numerator)) + "π" + (denominator == 1 ? "" : "/" + denominator);
     }
 
     /** re + im·i rounded to {@code digits} significant digits; just re when im is 0. */

@@ -11,6 +11,7 @@ import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
@@ -41,8 +42,13 @@ public final class Analyzer {
     public static final int DEFAULT_DIGITS = 30;
     /** Offsets from the first index (sequences) or from t0 (functions) of the cancellation samples. */
     static final long[] SAMPLE_OFFSETS = {1, 10, 100};
-    /** Digits of the sample values: enough to size a double-precision evaluation's error. */
+    /** Digits of the sample values when they are evaluated in apfloat. */
     static final int SAMPLE_DIGITS = 17;
+    /**
+     * Largest estimated error, relative, of a function's sample value taken in double precision:
+     * the cancellation estimate needs the order of magnitude of the value, not its digits.
+     */
+    static final double SAMPLE_ERROR = 1e-6;
     /** Largest estimated size, in digits, of an exact sequence value that is computed exactly. */
     static final int EXACT_SIZE_LIMIT = 20_000;
     /** Digits of a state (y, y', …) that starts an integrator window away from t0. */
@@ -112,10 +118,9 @@ public final class Analyzer {
             exact.map(s -> FittedFunction.of(s, cache)).or(() -> solution.radical().map(r -> FittedFunction.of(r, cache)))
                     .ifPresent(f -> checks.add(f.integratorCheck(roots)));
         }
-        List<PointValue> samples = new ArrayList<>(values);
+        List<SampleValue> samples = new ArrayList<>(values.stream().map(v -> new SampleValue(v.at(), v.value())).toList());
         exact.ifPresent(s -> samples.addAll(samples(s, cache)));
-        Diagnostics diagnostics = new Diagnoser(digits).diagnose(solution, roots,
-                samples.stream().map(v -> new SampleValue(v.at(), v.value())).toList());
+        Diagnostics diagnostics = new Diagnoser(digits).diagnose(solution, roots, samples);
         List<SteadyState> steady = diagnostics.stability().verdict() == Stability.Verdict.ASYMPTOTICALLY_STABLE
                 ? FrequencyResponse.of(solution.problem().equation(), digits) : List.of();
         Optional<Plots> sampled = plots
@@ -183,12 +188,24 @@ public final class Analyzer {
         return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p, digits, cache) : FittedFunction.of(s, cache).value(p, digits);
     }
 
-    /** Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation. */
-    private List<PointValue> samples(ExactSolution s, RootCache cache) {
-        List<PointValue> samples = new ArrayList<>();
+    /**
+     * Values at the first valid index or t0 plus {@link #SAMPLE_OFFSETS}, to size cancellation; a
+     * function's sample beyond the range of numbers (y' = 10^20·y at t0 + 1) is left out.
+     */
+    private List<SampleValue> samples(ExactSolution s, RootCache cache) {
+        List<SampleValue> samples = new ArrayList<>();
         for (long offset : SAMPLE_OFFSETS) {
-            samples.add(s.domain() == Domain.DIFFERENCE ? sequenceValue(s, Rational.of(s.validFrom() + offset), SAMPLE_DIGITS, cache)
-                    : FittedFunction.of(s, cache).value(s.origin().add(Rational.of(offset)), SAMPLE_DIGITS));
+            if (s.domain() == Domain.DIFFERENCE) {
+                Rational n = Rational.of(s.validFrom() + offset);
+                samples.add(new SampleValue(n, sequenceValue(s, n, SAMPLE_DIGITS, cache).value()));
+                continue;
+            }
+            Rational t = s.origin().add(Rational.of(offset));
+            try {
+                samples.add(new SampleValue(t, FittedFunction.of(s, cache).sample(t, SAMPLE_ERROR)));
+            } catch (InputException beyondRange) {
+                // no sample there: its size is beyond any representable number
+            }
         }
         return samples;
     }

@@ -19,6 +19,9 @@ import org.apfloat.Apfloat;
  * ({@link Term.ConjugateSum#vanishesAtSomeRoots}) give none.
  */
 final class ConjugateSumModes {
+    /** Most correction steps of {@link #argument} before apfloat's arg takes over. */
+    private static final int ARGUMENT_STEPS = 8;
+
     private ConjugateSumModes() {
     }
 
@@ -49,12 +52,30 @@ final class ConjugateSumModes {
             } else if (alpha.imag().signum() > 0) {
                 Apfloat two = new Apfloat(2, precision);
                 Apfloat growth = differential ? alpha.real() : ApcomplexMath.abs(alpha);
-                Apfloat frequency = differential ? alpha.imag() : ApcomplexMath.arg(alpha);
+                Apfloat frequency = differential ? alpha.imag() : argument(alpha, precision);
                 modes.add(new DecimalMode(decimal(c.real().multiply(two), digits), decimal(c.imag().multiply(two).negate(), digits),
                         r.power(), decimal(growth, digits), decimal(frequency, digits)));
             }
         }
         return modes;
+    }
+
+    /**
+     * arg α (α ≠ 0) at the working precision: from the double-precision angle θ, the step
+     * θ ← θ + Im(e^{−iθ}·α/|α|) = θ + sin(arg α − θ) leaves an error of about (arg α − θ)^3/6, so each
+     * step triples the digits (common practice); apfloat's own arg when that does not settle.
+     */
+    private static Apfloat argument(Apcomplex alpha, long precision) {
+        Apfloat theta = new Apfloat(Math.atan2(alpha.imag().doubleValue(), alpha.real().doubleValue()), precision);
+        Apcomplex unit = alpha.divide(ApcomplexMath.abs(alpha));
+        for (int step = 0; step < ARGUMENT_STEPS; step++) {
+            Apfloat s = unit.multiply(ComplexExp.exp(new Apcomplex(Apfloat.ZERO, theta.negate()), precision)).imag();
+            theta = theta.add(s);
+            if (s.signum() == 0 || 3 * s.scale() < -precision - 3) {
+                return theta;
+            }
+        }
+        return ApcomplexMath.arg(alpha);
     }
 
     /** c(α) = Σ_j c_j α^j with exact (surd) c_j. */

@@ -3,6 +3,7 @@ package dev.rootform.numeric.analysis;
 import dev.rootform.numeric.roots.RootApproximation;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.closedform.Surd;
+import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.Check;
 import dev.rootform.symbolic.solve.ExactSolution;
@@ -12,9 +13,11 @@ import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.function.IntFunction;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.apfloat.OverflowException;
 
 /**
  * A fitted differential-equation solution with exact constants, evaluated numerically: an
@@ -48,22 +51,51 @@ final class FittedFunction {
                 working -> ModeSum.of(r, cache, working));
     }
 
-    /** y(t) to {@code wanted} significant digits; exact at the origin. */
+    /**
+     * y(t) to {@code wanted} significant digits; exact at the origin.
+     *
+     * @throws InputException when a term e^(λ·(t - t0)) lies beyond the exponent range of
+     *     arbitrary-precision numbers (|λ·(t - t0)| of about 10^18 and more: y' = 10^20·y at t = 1)
+     */
     PointValue value(Rational t, int wanted) {
         if (t.equals(origin)) {
             Surd v = atOrigin.apply(0);
             return new PointValue(t, v.toBigDecimal(new MathContext(wanted)), v.isRational() ? Optional.of(v.rational()) : Optional.empty(),
                     v.isRational() ? Optional.empty() : Optional.of(v));
         }
-        Apfloat[] settled = WorkingPrecision.settle(wanted, working -> sums.apply(working).valueAndLargest(t),
-                (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
-                (working, high) -> working + WorkingPrecision.GUARD_DIGITS
-                        + (int) Math.ceil(ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10)),
-                "value at t = " + t);
-        return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
+        try {
+            Apfloat[] settled = WorkingPrecision.settle(wanted, working -> sums.apply(working).valueAndLargest(t),
+                    (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
+                    (working, high) -> working + WorkingPrecision.GUARD_DIGITS
+                            + (int) Math.ceil(ApfloatMath.log(high[1].add(Apfloat.ONE)).doubleValue() / Math.log(10)),
+                    "value at t = " + t);
+            return new PointValue(t, Decimals.toBigDecimal(settled[0], wanted), Optional.empty());
+        } catch (OverflowException e) {
+            throw new InputException("value at t = " + t + ": a term of the solution there exceeds the exponent range of "
+                    + "arbitrary-precision numbers (e^(λ·t) with |λ·t| beyond about 10^18)", "", -1);
+        }
     }
 
-    /** The integrator cross-check from the exact derivatives at the origin, on the problem's time scales. */
+    /**
+     * y(t) for the cancellation estimate: in double precision where the estimated rounding error is
+     * below {@code relative}·max(1, |y|) ({@link DoubleModes}), else to {@link Analyzer#SAMPLE_DIGITS}
+     * digits in apfloat, confirmed by two working precisions.
+     */
+    BigDecimal sample(Rational t, double relative) {
+        OptionalDouble quick = doubles().accurate(t.doubleValue(), relative);
+        return quick.isPresent() ? new BigDecimal(quick.getAsDouble()) : value(t, Analyzer.SAMPLE_DIGITS).value();
+    }
+
+    private DoubleModes doubles() {
+        return sums.apply(Analyzer.SAMPLE_DIGITS + WorkingPrecision.GUARD_DIGITS).doubles();
+    }
+
+    /**
+     * The integrator cross-check from the exact derivatives at the origin, on the problem's time
+     * scales. The closed form is evaluated in double precision where its estimated rounding error is
+     * below {@link IntegratorCheck#CLOSED_FORM_ERROR} relative ({@link DoubleModes}), else to 17
+     * digits in apfloat, confirmed by two working precisions.
+     */
     Check integratorCheck(List<RootApproximation> roots) {
         int k = equation.order();
         List<Rational> initial = new ArrayList<>(k);
@@ -71,10 +103,12 @@ final class FittedFunction {
             Surd v = atOrigin.apply(d);
             initial.add(v.isRational() ? v.rational() : Rational.of(v.toBigDecimal(new MathContext(Analyzer.STATE_DIGITS))));
         }
+        DoubleModes doubles = doubles();
         IntegratorCheck.Solved closed = new IntegratorCheck.Solved() {
             @Override
             public double value(double t) {
-                return FittedFunction.this.value(Rational.of(new BigDecimal(t)), Analyzer.SAMPLE_DIGITS).value().doubleValue();
+                return doubles.accurate(t, IntegratorCheck.CLOSED_FORM_ERROR).orElseGet(() ->
+                        FittedFunction.this.value(Rational.of(new BigDecimal(t)), Analyzer.SAMPLE_DIGITS).value().doubleValue());
             }
 
             @Override

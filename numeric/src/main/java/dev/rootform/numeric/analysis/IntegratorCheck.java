@@ -38,6 +38,11 @@ final class IntegratorCheck {
     static final double HORIZON = 2000;
     /** Relative agreement required of the double-precision integrator. */
     static final double TOLERANCE = 1e-7;
+    /**
+     * Largest error, relative to max(1, |y|), allowed of the closed form's value at a comparison
+     * point: a thousandth of {@link #TOLERANCE}, so that the comparison measures the integrator.
+     */
+    static final double CLOSED_FORM_ERROR = TOLERANCE * 1e-3;
 
     /** The closed form being checked: its value, and its derivatives to start a window from. */
     interface Solved {

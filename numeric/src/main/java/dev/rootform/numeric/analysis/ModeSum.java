@@ -56,6 +56,10 @@ public final class ModeSum {
 
     /** The exact solution's components Σ_α Σ_i c_i(α) u^i e^{αu}. */
     static ModeSum of(ExactSolution s, RootCache cache, long precision) {
+        return cache.modeSum(s, precision, working -> build(s, cache, working));
+    }
+
+    private static ModeSum build(ExactSolution s, RootCache cache, long precision) {
         List<Mode> modes = new ArrayList<>();
         for (Component c : s.components()) {
             Deadline.checkCurrent();
@@ -70,6 +74,10 @@ public final class ModeSum {
 
     /** y = a + √r·b of a radical solution: the modes of a, and those of b with weights times √r. */
     static ModeSum of(RadicalSolution r, RootCache cache, long precision) {
+        return cache.modeSum(r, precision, working -> build(r, cache, working));
+    }
+
+    private static ModeSum build(RadicalSolution r, RootCache cache, long precision) {
         List<Mode> modes = new ArrayList<>(of(r.rational(), cache, precision).modes);
         Apfloat root = org.apfloat.ApfloatMath.sqrt(new Apfloat(r.radicand(), precision));
         for (Mode m : of(r.radical(), cache, precision).modes) {
@@ -149,31 +157,12 @@ public final class ModeSum {
      * mode at t, far below what a picture resolves.
      */
     DoubleUnaryOperator inDoubles() {
-        int size = modes.size();
-        double[] wr = new double[size];
-        double[] wi = new double[size];
-        double[] zr = new double[size];
-        double[] zi = new double[size];
-        int[] p = new int[size];
-        for (int k = 0; k < size; k++) {
-            Mode m = modes.get(k);
-            wr[k] = m.weight().real().doubleValue();
-            wi[k] = m.weight().imag().doubleValue();
-            zr[k] = m.rate().real().doubleValue();
-            zi[k] = m.rate().imag().doubleValue();
-            p[k] = m.power();
-        }
-        double start = origin.doubleValue();
-        return t -> {
-            double u = t - start;
-            double sum = 0;
-            for (int k = 0; k < size; k++) {
-                double scale = Math.exp(zr[k] * u) * Math.pow(u, p[k]);
-                double angle = zi[k] * u;
-                sum += scale * (wr[k] * Math.cos(angle) - wi[k] * Math.sin(angle));
-            }
-            return sum;
-        };
+        return doubles()::value;
+    }
+
+    /** The sum rounded to double, with an estimate of its rounding error per point. */
+    DoubleModes doubles() {
+        return new DoubleModes(origin, modes);
     }
 
     /** The value at t and the largest magnitude of one mode there (to size cancellation). */
@@ -192,9 +181,14 @@ public final class ModeSum {
     private List<Apcomplex> terms(int d, Apfloat t) {
         Apcomplex u = t.subtract(Decimals.toApfloat(origin, precision));
         List<Apcomplex> terms = new ArrayList<>(modes.size());
+        Apcomplex rate = null;
+        Apcomplex e = null;
         for (Mode m : modes) {
             Deadline.checkCurrent();
-            Apcomplex e = ComplexExp.exp(m.rate().multiply(u), precision);
+            if (m.rate() != rate) { // the modes u^i e^{αu} of one root share its rate object: one exponential
+                rate = m.rate();
+                e = ComplexExp.exp(rate.multiply(u), precision);
+            }
             Apcomplex inner = Apcomplex.ZERO;
             Apfloat binomial = new Apfloat(1, precision);
             Apfloat falling = new Apfloat(1, precision);

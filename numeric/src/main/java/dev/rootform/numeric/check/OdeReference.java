@@ -23,8 +23,9 @@ import org.apache.commons.math3.ode.sampling.StepInterpolator;
  * DOP853 (E. Hairer, S. P. Nørsett, G. Wanner, Solving Ordinary Differential Equations I, 2nd ed.,
  * Springer 1993), as implemented by Commons Math, with step-size control at relative tolerance
  * {@link #RELATIVE_TOLERANCE} and absolute tolerance {@link #RELATIVE_TOLERANCE}·scale, where scale
- * is the largest of 1 and the |initial derivatives|. Each point is reached by a separate integration
- * from t0, forward or backward. The values are approximate: local errors are controlled, global
+ * is the largest of 1 and the |initial derivatives|. The points on each side of t0 are reached in
+ * order of distance, each integration starting from the state the previous one reached (one
+ * pass forward, one backward). The values are approximate: local errors are controlled, global
  * error is not bounded (it grows with |t − t0| and with the growth rate of the solution).
  *
  * <p>A step handler checks the current {@link Deadline} after every accepted step, so a long
@@ -102,21 +103,39 @@ public final class OdeReference {
         FirstOrderDifferentialEquations system = new CompanionSystem(ratios, t -> forcing.applyAsDouble(t) / lead);
         double begin = t0.doubleValue();
         double[] result = new double[points.length];
-        for (int i = 0; i < points.length; i++) {
+        sweep(system, begin, start, scale, points, result, 1, maxEvaluations);
+        sweep(system, begin, start, scale, points, result, -1, maxEvaluations);
+        return result;
+    }
+
+    /**
+     * The points on one side of t0 ({@code direction} +1: at or after it, −1: before it), in order of
+     * distance: each integration continues from the state the previous one reached, so the
+     * integrator covers the farthest span once instead of every span from t0. The evaluation budget
+     * counts from t0, as for a single integration to each point.
+     */
+    private static void sweep(FirstOrderDifferentialEquations system, double begin, double[] start, double scale,
+            double[] points, double[] result, int direction, int maxEvaluations) {
+        Integer[] order = java.util.stream.IntStream.range(0, points.length).boxed()
+                .filter(i -> direction > 0 ? points[i] >= begin : points[i] < begin)
+                .sorted(java.util.Comparator.comparingDouble(i -> Math.abs(points[i] - begin)))
+                .toArray(Integer[]::new);
+        double[] state = start.clone();
+        double at = begin;
+        int used = 0;
+        for (int i : order) {
             double span = Math.abs(points[i] - begin);
-            if (span == 0) {
-                result[i] = start[0];
-                continue;
+            if (points[i] != at) {
+                DormandPrince853Integrator integrator = new DormandPrince853Integrator(
+                        MIN_STEP_FRACTION * span, Math.abs(points[i] - at), RELATIVE_TOLERANCE * scale, RELATIVE_TOLERANCE);
+                integrator.setMaxEvaluations(maxEvaluations - used);
+                integrator.addStepHandler(new DeadlineCheck());
+                integrator.integrate(system, at, state, points[i], state);
+                used += integrator.getEvaluations();
+                at = points[i];
             }
-            DormandPrince853Integrator integrator = new DormandPrince853Integrator(
-                    MIN_STEP_FRACTION * span, span, RELATIVE_TOLERANCE * scale, RELATIVE_TOLERANCE);
-            integrator.setMaxEvaluations(maxEvaluations);
-            integrator.addStepHandler(new DeadlineCheck());
-            double[] state = start.clone();
-            integrator.integrate(system, begin, state, points[i], state);
             result[i] = state[0];
         }
-        return result;
     }
 
     /** Checks the current deadline at the start and after each accepted step. */

@@ -8,6 +8,7 @@ import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ConditionFitter;
 import dev.rootform.symbolic.solve.ExactSolution;
+import dev.rootform.symbolic.solve.RadicalSolution;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -41,8 +42,9 @@ public final class Diagnoser {
         List<FactorRoot> entries = FactorRoot.of(solution.factors(), roots);
         Stability stability = new StabilityJudge(eq.domain(), digits).judge(entries);
         DominantMode dominant = new DominantMode(eq.domain(), solution.closedForm().variable(), digits);
-        Growth growth = dominant.of(entries, solution.exact().map(Diagnoser::effectivePowers)
-                .orElseGet(() -> generalPowers(eq.domain(), solution.factors())));
+        Growth growth = dominant.withTerms(dominant.of(entries, solution.exact().map(Diagnoser::effectivePowers)
+                .or(() -> solution.radical().map(Diagnoser::effectivePowers))
+                .orElseGet(() -> generalPowers(eq.domain(), solution.factors()))), solution.closedForm().terms());
         List<String> warnings = new ArrayList<>();
         CloseRoots.warning(entries).ifPresent(warnings::add);
         solution.exact().flatMap(s -> Cancellation.warning(s, entries, samples)).ifPresent(warnings::add);
@@ -65,6 +67,17 @@ public final class Diagnoser {
             }
             powers.put(c.factor().polynomial(), m);
         }
+        return powers;
+    }
+
+    /**
+     * Per factor of x = a + √r·b, the larger effective power of the two parts: a term
+     * (c(α) + √r·d(α))·v^i·α^v vanishes at every root α only when c = d = 0 (c and d have rational
+     * coefficients and degree below the factor's), so a nonzero c or d is a term of some mode.
+     */
+    private static Map<RationalPolynomial, Integer> effectivePowers(RadicalSolution s) {
+        Map<RationalPolynomial, Integer> powers = effectivePowers(s.rational());
+        effectivePowers(s.radical()).forEach((factor, power) -> powers.merge(factor, power, Math::max));
         return powers;
     }
 

@@ -1,6 +1,8 @@
 package dev.rootform.numeric.diagnostics;
 
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.closedform.Surd;
+import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Domain;
 import java.util.List;
 import java.util.Map;
@@ -49,6 +51,39 @@ final class DominantMode {
         }
         double rate = rate(best);
         return new Growth(Optional.of(best.approximation()), bestPower - 1, rate, theta(bestPower - 1, rate));
+    }
+
+    /**
+     * {@code modes}, or the growth of a term of {@code terms} that outgrows every mode of the
+     * characteristic roots, with no root named: a forcing that grows faster than the modes
+     * (x[n+1] = x[n]/2 + 3^n grows as 3^n) or a stable system's constant input (y' + y = 1 tends to
+     * 1, Θ(1), not Θ(e^(-t))). Conjugate sums are left to the modes (their factors are characteristic).
+     */
+    Growth withTerms(Growth modes, List<Term> terms) {
+        if (modes.root().isEmpty()) {
+            return modes;
+        }
+        double bestRate = modes.rate();
+        int bestPower = modes.power() + 1;
+        boolean outgrown = false;
+        for (Term t : terms) {
+            if (t.vanishes() || t instanceof Term.ConjugateSum) {
+                continue;
+            }
+            double rate = t instanceof Term.Exponential e ? rate(e.rate()) : rate(((Term.Oscillating) t).growth());
+            if (beats(rate, t.power() + 1, 0, bestRate, bestPower)) {
+                bestRate = rate;
+                bestPower = t.power() + 1;
+                outgrown = true;
+            }
+        }
+        return outgrown ? new Growth(Optional.empty(), bestPower - 1, bestRate, theta(bestPower - 1, bestRate)) : modes;
+    }
+
+    /** Re λ of a real exponential rate or of the growth of an oscillation (continuous), |λ| (discrete). */
+    private double rate(Surd rateOrGrowth) {
+        double v = rateOrGrowth.doubleValue();
+        return domain == Domain.DIFFERENTIAL ? v : Math.abs(v);
     }
 
     private double rate(FactorRoot r) {

@@ -10,7 +10,8 @@ import java.util.Optional;
  * Θ(t^{m-1}·e^{σt}) or Θ(n^{m-1}·ρ^n) for the envelope of the solution (an oscillating mode
  * touches zero, so for it the bound holds for the envelope, not pointwise).
  *
- * @param root the dominant root (the one with Im λ &ge; 0 of a pair); empty for a zero solution
+ * @param root the dominant root (the one with Im λ &ge; 0 of a pair); empty for a zero solution and
+ *     when a term of the forcing outgrows every mode of the characteristic roots
  * @param power m − 1, the power of t or n
  * @param rate σ = Re λ or ρ = |λ|, approximate (double precision from the certified root value)
  * @param theta the bound as text, e.g. {@code "Θ(t·e^(-t))"} or {@code "Θ(1.618034^n)"}

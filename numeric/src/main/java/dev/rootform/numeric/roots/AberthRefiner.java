@@ -30,10 +30,7 @@ final class AberthRefiner {
     /** An iteration for p at {@code precision} significant decimal digits. */
     AberthRefiner(RationalPolynomial p, long precision) {
         this.precision = precision;
-        this.coefficients = new Apfloat[p.degree() + 1];
-        for (int i = 0; i < coefficients.length; i++) {
-            coefficients[i] = Seeds.toApfloat(p.coefficient(i), precision);
-        }
+        this.coefficients = Horner.coefficients(p, precision);
         this.tolerance = ApfloatMath.pow(new Apfloat(10, precision), SETTLED_DIGITS - precision);
     }
 
@@ -85,12 +82,9 @@ final class AberthRefiner {
 
     /** The Aberth correction for z_i. */
     private Apcomplex correction(Apcomplex[] z, double[] re, double[] im, int i) {
-        Apcomplex value = Apcomplex.ZERO;
-        Apcomplex slope = Apcomplex.ZERO;
-        for (int k = coefficients.length - 1; k >= 0; k--) {
-            slope = slope.multiply(z[i]).add(value);
-            value = value.multiply(z[i]).add(coefficients[k]);
-        }
+        Apcomplex[] horner = Horner.valueAndSlope(coefficients, z[i]);
+        Apcomplex value = horner[0];
+        Apcomplex slope = horner[1];
         if (value.equals(Apcomplex.ZERO)) {
             return Apcomplex.ZERO;
         }

@@ -21,6 +21,8 @@ import java.util.List;
 final class DoubleSeeds {
     /** Iteration budget of the double-precision phase. */
     static final int MAX_ITERATIONS = 500;
+    /** Significant digits a settled double-precision approximation carries at best. */
+    static final int DIGITS = 15;
     /** Relative correction below which a double approximation is considered settled. */
     static final double TOLERANCE = 8 * Math.ulp(1.0);
     /** Rotation (radians) applied to each circle of starting points, to break symmetry. */

@@ -21,7 +21,9 @@ import org.apfloat.Apcomplex;
  * Roots proven real have {@code im} exactly 0; non-real roots come in exact conjugate pairs.
  * Order: by real part descending, then imaginary part descending.
  *
- * <p>Method: starting points from {@link Seeds}, the multiprecision Aberth–Ehrlich iteration
+ * <p>Method: starting points from {@link Seeds}, first polished root by root with Newton's iteration
+ * at doubling precision ({@link NewtonPolisher}) and certified once; when that certificate fails
+ * for lack of separation (not of digits), the multiprecision Aberth–Ehrlich iteration
  * ({@link AberthRefiner}; O. Aberth, Math. Comp. 27 (1973) 339–344; L. W. Ehrlich, Comm. ACM 10
  * (1967) 107–108), then an independent certificate by the Braess–Hadeler inclusion theorem
  * ({@link InclusionCertificate}; D. Braess and K. P. Hadeler, Numer. Math. 21 (1973) 161–165).
@@ -38,6 +40,8 @@ public final class RootFinder {
     public static final int MAX_ESCALATIONS = 5;
     /** Aberth sweeps allowed per precision level. */
     public static final int MAX_SWEEPS = 200;
+    /** Precision raises of the Newton fast path before the Aberth iteration takes over. */
+    static final int NEWTON_ESCALATIONS = 2;
     /** Significant digits of published radii for the exact linear case (rounded up). */
     private static final int RADIUS_DIGITS = 5;
 
@@ -103,6 +107,10 @@ public final class RootFinder {
     private List<Enclosure> nonlinear(RationalPolynomial p) {
         long precision = workingPrecision(p.degree());
         Apcomplex[] z = Seeds.of(p, precision);
+        Optional<List<Enclosure>> polished = polished(p, z, precision);
+        if (polished.isPresent()) {
+            return polished.get();
+        }
         for (int attempt = 0; attempt <= MAX_ESCALATIONS; attempt++) {
             Deadline.checkCurrent();
             new AberthRefiner(p, precision).refine(z, MAX_SWEEPS);
@@ -122,5 +130,32 @@ public final class RootFinder {
         throw new IllegalStateException("could not certify the roots of a degree-" + p.degree()
                 + " polynomial to " + digits + " digits within " + MAX_ESCALATIONS
                 + " precision increases");
+    }
+
+    /**
+     * The fast path: each seed polished by Newton's iteration at doubling precision
+     * ({@link NewtonPolisher}), certified once; when the disks are merely too wide, the precision is
+     * raised by the shortfall and the roots polished again, at most {@link #NEWTON_ESCALATIONS}
+     * times. Empty when the certificate cannot be had this way (overlapping disks: two seeds went
+     * to one root), and the Aberth iteration takes over from the original seeds.
+     */
+    private Optional<List<Enclosure>> polished(RationalPolynomial p, Apcomplex[] seeds, long precision) {
+        long working = precision;
+        Apcomplex[] z = NewtonPolisher.polish(p, seeds, DoubleSeeds.DIGITS, working);
+        for (int attempt = 0; attempt <= NEWTON_ESCALATIONS; attempt++) {
+            Deadline.checkCurrent();
+            Optional<CentreSet> centres = ConjugateSymmetry.centres(z, working);
+            if (centres.isEmpty()) {
+                return Optional.empty();
+            }
+            InclusionCertificate.Outcome outcome = InclusionCertificate.certify(p, centres.get(), digits);
+            if (outcome.enclosures().isPresent() || outcome.missingDigits() == InclusionCertificate.UNKNOWN) {
+                return outcome.enclosures();
+            }
+            long accurate = working - outcome.missingDigits();
+            working += outcome.missingDigits() + GUARD_DIGITS;
+            z = NewtonPolisher.polish(p, z, accurate, working);
+        }
+        return Optional.empty();
     }
 }

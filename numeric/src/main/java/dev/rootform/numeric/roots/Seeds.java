@@ -2,7 +2,6 @@ package dev.rootform.numeric.roots;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
-import java.math.BigDecimal;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -35,25 +34,15 @@ final class Seeds {
         Rational c = p.coefficient(0);
         Rational discriminant = b.multiply(b).subtract(a.multiply(c).multiply(4));
         Apfloat two = new Apfloat(2, precision);
-        Apfloat root = ApfloatMath.sqrt(toApfloat(discriminant.abs(), precision));
-        Apfloat ap = toApfloat(a, precision);
-        Apfloat bp = toApfloat(b, precision);
+        Apfloat root = ApfloatMath.sqrt(ApfloatConversion.of(discriminant.abs(), precision));
+        Apfloat ap = ApfloatConversion.of(a, precision);
+        Apfloat bp = ApfloatConversion.of(b, precision);
         if (discriminant.signum() < 0) {
             Apfloat re = bp.negate().divide(two.multiply(ap));
             Apfloat im = root.divide(two.multiply(ap));
             return new Apcomplex[] {new Apcomplex(re, im), new Apcomplex(re, im.negate())};
         }
         Apfloat q = (b.signum() < 0 ? bp.subtract(root) : bp.add(root)).negate().divide(two);
-        return new Apcomplex[] {new Apcomplex(q.divide(ap)), new Apcomplex(toApfloat(c, precision).divide(q))};
-    }
-
-    /**
-     * r at {@code precision} digits. Numerator and denominator go in through {@code BigDecimal}: apfloat
-     * 1.12's {@code BigInteger} constructor took about 0.5 ms even for one-digit integers (measured; its
-     * time goes to reading the digits through a stream and sizing a data storage), the
-     * {@code BigDecimal} one about 0.2 µs, for the same value.
-     */
-    static Apfloat toApfloat(Rational r, long precision) {
-        return new Apfloat(new BigDecimal(r.numerator()), precision).divide(new Apfloat(new BigDecimal(r.denominator()), precision));
+        return new Apcomplex[] {new Apcomplex(q.divide(ap)), new Apcomplex(ApfloatConversion.of(c, precision).divide(q))};
     }
 }

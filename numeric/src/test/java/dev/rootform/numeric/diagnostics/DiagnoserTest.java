@@ -101,6 +101,30 @@ class DiagnoserTest {
     }
 
     @Test
+    void resonanceAtAQuarticCyclotomicFactorGrowsLinearly() {
+        // λ^4 + 1 has the roots e^(±iπ/4), e^(±3iπ/4); cos(πn/4) forces the first pair at resonance,
+        // so the solution carries n·cos(πn/4) (method of undetermined coefficients, common practice;
+        // the answer's part -1/4·n·cos(πn/4) was checked by exact iteration in Q(√2))
+        Diagnostics d = diagnose("x[n+4] = -x[n] + cos(pi n/4); x[0] = 1; x[1] = 0; x[2] = 0; x[3] = 0");
+        assertEquals("Θ(n)", d.growth().theta());
+        // off resonance the same forcing (values in Q(√2)) leaves a stable section bounded
+        assertEquals("Θ(1)", diagnose("x[n+1] = x[n]/2 + sin(pi n/4); x[0] = 0").growth().theta());
+    }
+
+    @Test
+    void aForcingThatOutgrowsTheModesSetsTheGrowth() {
+        // by hand (undetermined coefficients, common practice): x[n+1] = x[n]/2 + 3^n, x[0] = 0 is
+        // 2/5·3^n - 2/5·(1/2)^n, and y' + y = 1, y(0) = 0 is 1 - e^(-t), which tends to 1
+        Diagnostics d = diagnose("x[n+1] = x[n]/2 + 3^n; x[0] = 0");
+        assertEquals("Θ(3^n)", d.growth().theta());
+        assertTrue(d.growth().root().isEmpty());
+        assertEquals("Θ(1)", diagnose("y' + y = 1; y(0) = 0").growth().theta());
+        assertEquals("Θ(t)", diagnose("y' + y = t; y(0) = 0").growth().theta());
+        // a transient that outlasts a faster-decaying input keeps its mode: 4·(1/2)^n - 4·(1/4)^n by hand
+        assertEquals("Θ(0.5^n)", diagnose("x[n+1] = x[n]/2 + (1/4)^n; x[0] = 0").growth().theta());
+    }
+
+    @Test
     void conditionNumberOfTheFittingSystem() {
         // by hand: rows λ^0 = (1, 0) and λ^5 mod (λ² − λ − 1) = 3 + 5λ; A⁻¹ = ((1, 0), (−3/5, 1/5)); ‖A‖∞ = 8, ‖A⁻¹‖∞ = 1, κ∞ = 8
         Diagnostics d = diagnose("x[n+2] = x[n+1] + x[n]; x[0] = 0; x[5] = 5");

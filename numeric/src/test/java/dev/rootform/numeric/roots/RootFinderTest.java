@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.testing.RandomPolynomials;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.MathContext;
@@ -174,14 +175,7 @@ class RootFinderTest {
     }
 
     static RationalPolynomial randomPolynomial(int degree, long seed) {
-        Random random = new Random(seed);
-        long[] c = new long[degree + 1];
-        for (int i = 0; i <= degree; i++) {
-            c[i] = random.nextInt(2001) - 1000;
-        }
-        c[degree] = 1 + random.nextInt(1000);
-        c[0] = c[0] == 0 ? 1 : c[0];
-        return RationalPolynomial.ofIntegers(c);
+        return RationalPolynomial.ofIntegers(RandomPolynomials.integerCoefficients(degree, seed));
     }
 
     private static void assertExactlyOneContains(List<Enclosure> roots, BigDecimal x, BigDecimal y, String what) {

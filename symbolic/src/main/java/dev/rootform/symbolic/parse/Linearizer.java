@@ -141,7 +141,7 @@ final class Linearizer {
         if (Names.isUnsupportedFunction(name)) {
             throw error(text(call) + " is out of scope", call);
         }
-        if (!name.equals(shape.function())) {
+        if (isFactor(call)) {
             Node.Name factor = new Node.Name(name, call.start(), call.start() + name.length());
             return product(new Node.Binary(Node.Binary.Op.MUL, factor, call.argument(), call.start(), call.end()));
         }
@@ -255,9 +255,19 @@ final class Linearizer {
         return evaluate(b.left()).scale(c.inverse());
     }
 
+    /** True when {@code call} is a name that is no function before parentheses: a product such as {@code t (t+1)}. */
+    private boolean isFactor(Node.Call call) {
+        String name = call.name();
+        return !name.equals("sin") && !name.equals("cos") && !name.equals("exp") && !Names.isUnsupportedFunction(name)
+                && !name.equals(shape.function());
+    }
+
     private Value power(Node.Binary b) {
         if (b.left() instanceof Node.Name name && name.name().equals(Names.EULER)) {
             return exponential(b, b.right());
+        }
+        if (b.left() instanceof Node.Call call && isFactor(call)) {
+            return product(call.factorTimesPower(b.right(), b.end()));
         }
         Value base = evaluate(b.left());
         Value exponent = free(evaluate(b.right()), b);

@@ -71,6 +71,16 @@ sealed interface Node {
         public List<Node> children() {
             return List.of(argument);
         }
+
+        /**
+         * This call raised to {@code exponent}, read as a product for a name that is no function:
+         * the name is a factor and {@code ^} binds to the parentheses only ({@code t (3)^2} is
+         * t·3^2, {@code D (D+1)^2} is D·(D+1)^2), as it does after a number ({@code 2 (3)^2}).
+         */
+        Binary factorTimesPower(Node exponent, int powerEnd) {
+            Node power = new Binary(Binary.Op.POW, argument, exponent, start, powerEnd);
+            return new Binary(Binary.Op.MUL, new Name(name, start, start + name.length()), power, start, powerEnd);
+        }
     }
 
     /** A sequence term such as {@code x[n+1]}. */

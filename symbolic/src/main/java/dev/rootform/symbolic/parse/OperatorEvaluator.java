@@ -46,6 +46,10 @@ final class OperatorEvaluator {
         if (node instanceof Node.Negation negation) {
             return polynomial(negation.operand()).negate();
         }
+        if (node instanceof Node.Binary b && b.op() == Node.Binary.Op.POW && b.left() instanceof Node.Call call
+                && call.name().equals(symbol)) {
+            return polynomial(call.factorTimesPower(b.right(), b.end()));
+        }
         if (node instanceof Node.Binary b) {
             return binary(b);
         }

@@ -38,6 +38,7 @@ record Shape(Domain domain, String function, String variable) {
     /** The explicit variable, else one named by dy/dx or y(x), else t; all that are named must agree. */
     private static String timeName(String source, List<Node> nodes, String explicitVariable) {
         String chosen = explicitVariable;
+        refuseFixedVariable(source, explicitVariable, -1);
         for (Node node : nodes) {
             String named = namedVariable(node, explicitVariable);
             if (named == null) {
@@ -47,9 +48,23 @@ record Shape(Domain domain, String function, String variable) {
                 throw new InputException(text(source, node) + ": the variable is " + chosen + ", not " + named,
                         source, node.start());
             }
+            refuseFixedVariable(source, named, node.start());
             chosen = named;
         }
         return chosen == null ? Names.DEFAULT_TIME : chosen;
+    }
+
+    /**
+     * A variable named like a constant, an operator or a function (--var e, dy/dpi) would make the
+     * answer read as that constant ({@code u(e) = e^(-e)}, {@code y(pi) = cos(pi)}): refused.
+     */
+    private static void refuseFixedVariable(String source, String name, int at) {
+        if (name == null || name.equals(Names.DEFAULT_TIME) || name.equals(Names.DEFAULT_INDEX)
+                || !Names.isReserved(name, null)) {
+            return;
+        }
+        throw new InputException((name.equals(Names.EULER) ? "e is Euler's number" : name + " has a fixed meaning")
+                + " and cannot name the variable; use another name such as t", source, at);
     }
 
     private static String namedVariable(Node node, String explicitVariable) {

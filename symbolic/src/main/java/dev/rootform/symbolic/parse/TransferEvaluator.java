@@ -70,6 +70,11 @@ final class TransferEvaluator {
         if (b.left() instanceof Node.Name n && n.name().equals(Names.EULER)) {
             throw delay(b);
         }
+        if (b.left() instanceof Node.Call call && !call.name().equals("exp") && !Names.isSupportedFunction(call.name())
+                && !Names.isUnsupportedFunction(call.name()) && !parts.containsKey(call.name())) {
+            // s (s+1)^2 is s·(s+1)^2: ^ binds to the parentheses, the name before them is a factor
+            return evaluate(call.factorTimesPower(b.right(), b.end()), parts);
+        }
         Block exponent = evaluate(b.right(), parts);
         Rational k = exponent.constantValue().orElseThrow(() -> error(text(b)
                 + ": the exponent must be an integer constant (not a rational function otherwise)", b.right()));

@@ -82,17 +82,47 @@ public record ExactSolution(LinearEquation equation, ForcingPart forcingPart, Ra
         Rational sum = Rational.ZERO;
         for (Component c : components) {
             NumberField k = new NumberField(c.factor().polynomial());
-            RationalPolynomial total = RationalPolynomial.ZERO;
-            Rational falling = Rational.ONE;
-            for (int i = 0; i < c.coefficients().size() && i <= d; i++) {
-                Deadline.checkCurrent();
-                RationalPolynomial term = k.multiply(c.coefficients().get(i), k.pow(k.generator(), d - i));
-                total = total.add(term.multiply(falling));
-                falling = falling.multiply(d - i);
-            }
-            sum = sum.add(k.trace(total));
+            sum = sum.add(k.trace(derivative(k, c, d, j -> k.pow(k.generator(), j))));
         }
         return sum;
+    }
+
+    /**
+     * y(origin), y'(origin), …, y^(count−1)(origin) exactly, as {@link #derivativeAtOrigin} gives
+     * them one by one, with the powers of each factor's root built up once.
+     *
+     * @throws IllegalArgumentException if this is a difference equation or count &lt; 0
+     */
+    public List<Rational> derivativesAtOrigin(int count) {
+        if (domain() != Domain.DIFFERENTIAL || count < 0) {
+            throw new IllegalArgumentException("derivativesAtOrigin needs a differential equation and count >= 0");
+        }
+        Rational[] sums = new Rational[count];
+        java.util.Arrays.fill(sums, Rational.ZERO);
+        for (Component c : components) {
+            NumberField k = new NumberField(c.factor().polynomial());
+            List<RationalPolynomial> powers = new java.util.ArrayList<>(count);
+            for (int j = 0; j < count; j++) {
+                Deadline.checkCurrent();
+                powers.add(j == 0 ? RationalPolynomial.ONE : k.multiply(powers.get(j - 1), k.generator()));
+            }
+            for (int d = 0; d < count; d++) {
+                sums[d] = sums[d].add(k.trace(derivative(k, c, d, powers::get)));
+            }
+        }
+        return List.of(sums);
+    }
+
+    /** Σ_{i≤d} c_i·d!/(d−i)!·α^{d−i} in Q(α) for one component, α^j from {@code power}. */
+    private static RationalPolynomial derivative(NumberField k, Component c, int d, java.util.function.IntFunction<RationalPolynomial> power) {
+        RationalPolynomial total = RationalPolynomial.ZERO;
+        Rational falling = Rational.ONE;
+        for (int i = 0; i < c.coefficients().size() && i <= d; i++) {
+            Deadline.checkCurrent();
+            total = total.add(k.multiply(c.coefficients().get(i), power.apply(d - i)).multiply(falling));
+            falling = falling.multiply(d - i);
+        }
+        return total;
     }
 
     /** The same solution with other components (e.g. without its transient part). */

@@ -9,7 +9,10 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.LongFunction;
 
 /**
@@ -41,17 +44,43 @@ final class ExactVerifier {
     }
 
     static List<Check> verify(ExactSolution solution, List<Condition> conditions) {
+        Exact exact = new Exact(solution, remembered(value(solution)), remembered(forcing(solution)));
         List<Check> checks = new ArrayList<>();
-        checks.add(substitution(solution));
+        checks.add(substitution(exact));
         if (!conditions.isEmpty()) {
-            checks.add(conditions(solution, conditions));
+            checks.add(conditions(exact, conditions));
         }
-        checks.add(solution.domain() == Domain.DIFFERENCE ? iteration(solution) : taylor(solution));
+        checks.add(solution.domain() == Domain.DIFFERENCE ? iteration(exact) : taylor(exact));
         return checks;
+    }
+
+    /**
+     * The solution with its exact values y (x[n] or y^(n)(t0)) and forcing values g, each computed
+     * once per verification: the residuals, the conditions and the reference share them (the same
+     * exact numbers, not a weaker check).
+     */
+    private record Exact(ExactSolution solution, LongFunction<Rational> y, LongFunction<Rational> g) {
+    }
+
+    private static LongFunction<Rational> remembered(LongFunction<Rational> f) {
+        Map<Long, Rational> known = new HashMap<>();
+        return n -> {
+            Rational v = known.get(n);
+            if (v == null) {
+                v = f.apply(n);
+                known.put(n, v);
+            }
+            return v;
+        };
     }
 
     /** Check 1 alone: the operator annihilates every component, and L y - g vanishes for a forced equation. */
     static Check substitution(ExactSolution solution) {
+        return substitution(new Exact(solution, value(solution), forcing(solution)));
+    }
+
+    private static Check substitution(Exact exact) {
+        ExactSolution solution = exact.solution();
         for (Component c : solution.components()) {
             if (!annihilates(solution.domain(), solution.operator().coefficients(), c)) {
                 return new Check("satisfies the equation", false,
@@ -64,7 +93,7 @@ final class ExactVerifier {
         long last = solution.domain() == Domain.DIFFERENCE ? Math.max(solution.validFrom(), first + points) : points;
         for (long n = first; n < last; n++) {
             Deadline.checkCurrent();
-            if (!residual(solution, n).isZero()) {
+            if (!residual(exact, n).isZero()) {
                 return new Check("satisfies the equation", false, (solution.domain() == Domain.DIFFERENCE
                         ? "residual at n = " : "derivative of the residual at t0, order ") + n + " is not zero");
             }
@@ -74,19 +103,33 @@ final class ExactVerifier {
     }
 
     /** (L y - g)[n] for a difference equation; the n-th derivative of L y - g at t0 for a differential one. */
-    private static Rational residual(ExactSolution solution, long n) {
-        List<Rational> a = solution.equation().coefficients();
-        LongFunction<Rational> y = value(solution);
-        Rational r = forcing(solution).apply(n).negate();
+    private static Rational residual(Exact exact, long n) {
+        List<Rational> a = exact.solution().equation().coefficients();
+        Rational r = exact.g().apply(n).negate();
         for (int j = 0; j < a.size(); j++) {
-            r = r.add(a.get(j).multiply(y.apply(n + j)));
+            r = r.add(a.get(j).multiply(exact.y().apply(n + j)));
         }
         return r;
     }
 
     /** x[n] (difference) or y^(n)(t0) (differential), exactly. */
     private static LongFunction<Rational> value(ExactSolution s) {
-        return s.domain() == Domain.DIFFERENCE ? s::valueAt : d -> s.derivativeAtOrigin(Math.toIntExact(d));
+        return s.domain() == Domain.DIFFERENCE ? s::valueAt : derivatives(s);
+    }
+
+    /**
+     * y^(n)(t0) from {@link ExactSolution#derivativesAtOrigin}: first the k + {@link #REFERENCE_TERMS}
+     * that the Taylor check compares, then runs twice as long as the last when more are asked for.
+     */
+    private static LongFunction<Rational> derivatives(ExactSolution s) {
+        AtomicReference<List<Rational>> known = new AtomicReference<>(List.of());
+        long first = s.equation().order() + REFERENCE_TERMS;
+        return n -> {
+            if (n >= known.get().size()) {
+                known.set(s.derivativesAtOrigin(Math.toIntExact(Math.max(n + 1, Math.max(first, 2L * known.get().size())))));
+            }
+            return known.get().get(Math.toIntExact(n));
+        };
     }
 
     /** g(n) (difference) or g^(n)(t0) (differential), exactly; zero for a homogeneous equation. */
@@ -154,12 +197,11 @@ final class ExactVerifier {
         return r;
     }
 
-    private static Check conditions(ExactSolution solution, List<Condition> conditions) {
+    private static Check conditions(Exact exact, List<Condition> conditions) {
         for (Condition c : conditions) {
             Deadline.checkCurrent();
-            Rational actual = solution.domain() == Domain.DIFFERENCE
-                    ? solution.valueAt(c.at().toBigInteger().longValueExact())
-                    : solution.derivativeAtOrigin(c.derivative());
+            Rational actual = exact.y().apply(exact.solution().domain() == Domain.DIFFERENCE
+                    ? c.at().toBigInteger().longValueExact() : c.derivative());
             if (!actual.equals(c.value())) {
                 return new Check(CONDITIONS, false,
                         "condition at " + c.at() + " gives " + actual + ", expected " + c.value());
@@ -174,18 +216,19 @@ final class ExactVerifier {
      * ({@link #longestScale}, at most {@link #MAX_ITERATION} terms), compared there at about 12
      * indices per decade and the last.
      */
-    private static Check iteration(ExactSolution solution) {
+    private static Check iteration(Exact exact) {
+        ExactSolution solution = exact.solution();
         long first = first(solution);
         int k = solution.equation().order();
         int terms = (int) Math.min(MAX_ITERATION, Math.max(k + REFERENCE_TERMS, Math.ceil(4 * longestScale(solution))));
-        List<Rational> x = extend(solution, terms);
+        List<Rational> x = extend(exact, terms);
         int compared = 0;
         for (int i = 0; i < x.size(); i++) {
             if (i >= k + REFERENCE_TERMS && i != x.size() - 1 && Math.floor(12 * Math.log10(i)) == Math.floor(12 * Math.log10(i - 1))) {
                 continue;
             }
             Deadline.checkCurrent();
-            Rational closed = solution.valueAt(first + i);
+            Rational closed = exact.y().apply(first + i);
             compared++;
             if (!x.get(i).equals(closed)) {
                 return new Check("agrees with exact iteration", false, "differs at n = " + (first + i)
@@ -231,11 +274,11 @@ final class ExactVerifier {
         return longest;
     }
 
-    private static Check taylor(ExactSolution solution) {
-        List<Rational> d = extend(solution, solution.equation().order() + REFERENCE_TERMS);
+    private static Check taylor(Exact exact) {
+        List<Rational> d = extend(exact, exact.solution().equation().order() + REFERENCE_TERMS);
         for (int i = 0; i < d.size(); i++) {
             Deadline.checkCurrent();
-            if (!d.get(i).equals(solution.derivativeAtOrigin(i))) {
+            if (!d.get(i).equals(exact.y().apply(i))) {
                 return new Check("agrees with the Taylor series", false, "derivative " + i + " at t0 differs");
             }
         }
@@ -248,12 +291,12 @@ final class ExactVerifier {
      * each from s_{i+k} = (g_i - Σ_{j<k} a_j s_{i+j})/a_k: the recurrence itself, or the derivatives
      * that the differential equation forces.
      */
-    private static List<Rational> extend(ExactSolution solution, int count) {
-        List<Rational> a = solution.equation().coefficients();
+    private static List<Rational> extend(Exact exact, int count) {
+        List<Rational> a = exact.solution().equation().coefficients();
         int k = a.size() - 1;
-        long first = first(solution);
-        LongFunction<Rational> y = value(solution);
-        LongFunction<Rational> g = forcing(solution);
+        long first = first(exact.solution());
+        LongFunction<Rational> y = exact.y();
+        LongFunction<Rational> g = exact.g();
         List<Rational> s = new ArrayList<>();
         for (int i = 0; i < k; i++) {
             Deadline.checkCurrent();

@@ -67,8 +67,8 @@ final class ForcingValues {
         Rational turns = t.frequency().multiply(n);
         Rational angle = t.oscillation() == ForcingTerm.Oscillation.COS ? turns : Rational.of(1, 2).subtract(turns);
         return CosineTable.cosPi(angle).orElseThrow(() -> new InputException("the forcing takes the value cos("
-                + angle + "·π) at an integer index, which lies in no quadratic field; frequencies that are multiples "
-                + "of π/4, π/5 and π/6 are solved exactly", "", -1));
+                + angle + "·π) at an integer index, which lies in no quadratic field; cos and sin of multiples of "
+                + "π/4 and π/6 per step, and cos of multiples of π/5, are solved exactly", "", -1));
     }
 
     /** g^(j)(t0) for a differential equation. */

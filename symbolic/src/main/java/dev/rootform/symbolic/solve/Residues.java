@@ -29,7 +29,7 @@ final class Residues {
         int m = factor.multiplicity();
         RationalPolynomial big = f.pow(m);
         RationalPolynomial cofactor = chi.divide(big);
-        RationalPolynomial n = numerator.multiply(cofactor.inverseModulo(big)).mod(big);
+        RationalPolynomial n = numerator.multiply(inverseModuloPower(cofactor, f, m)).mod(big);
         NumberField k = new NumberField(f);
         List<RationalPolynomial> top = new ArrayList<>(m);
         List<RationalPolynomial> h = new ArrayList<>(m);
@@ -54,6 +54,26 @@ final class Residues {
             b.add(e.get(m - i));
         }
         return b;
+    }
+
+    /**
+     * g^{-1} mod f^m, for g coprime to f: the inverse mod f by the extended Euclidean algorithm,
+     * then Newton's iteration u ← u·(2 − g·u), which takes g·u ≡ 1 mod f^k to mod f^{2k} (since
+     * 1 − g·u' = (1 − g·u)^2; common practice, e.g. J. von zur Gathen and J. Gerhard, Modern Computer
+     * Algebra, chapter 9 — chapter from memory). The same unique residue as Euclid's algorithm mod
+     * f^m, without its growth of intermediate coefficients at high multiplicity.
+     */
+    static RationalPolynomial inverseModuloPower(RationalPolynomial g, RationalPolynomial f, int m) {
+        RationalPolynomial u = g.inverseModulo(f);
+        RationalPolynomial two = RationalPolynomial.constant(Rational.of(2));
+        for (int have = 1; have < m; ) {
+            Deadline.checkCurrent();
+            have = Math.min(2 * have, m);
+            RationalPolynomial modulus = f.pow(have);
+            RationalPolynomial gu = g.mod(modulus).multiply(u).mod(modulus);
+            u = u.multiply(two.subtract(gu)).mod(modulus);
+        }
+        return u;
     }
 
     /** The Hasse derivative p^[l](x) = Σ_j p_j·C(j,l)·x^{j-l} = p^(l)(x)/l!. */

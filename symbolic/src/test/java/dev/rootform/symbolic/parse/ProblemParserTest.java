@@ -90,6 +90,13 @@ class ProblemParserTest {
         "(E-2)^2 x = 3^n                        | x[n+2] - 4x[n+1] + 4x[n] = 3^n",
         "(D+1)^2 (D^2+4) y = t e^(-t)           | y'''' + 2y''' + 5y'' + 8y' + 4y = t*exp(-t)",
         "(D^2 + 2D + 5) y = sin(3t)             | d^2y/dt^2 + 2 dy/dt = -5y + sin(3 t)",
+        // a name that is no function before parentheses is a factor, and ^ binds to the parentheses
+        // only, as after a number (common practice: exponentiation before multiplication)
+        "D (D+1)^2 y = 0                        | y''' + 2y'' + y' = 0",
+        "E (E-2)^2 x = 0                        | x[n+3] - 4x[n+2] + 4x[n+1] = 0",
+        "y' + y = t (3)^2                       | y' + y = 9*t",
+        "x[n+1] = x[n]/2 + n (1/3)^n            | x[n+1] = x[n]/2 + n*(1/3)^n",
+        "y' + y = t (t+1)^2                     | y' + y = t*(t+1)*(t+1)",
     })
     void operatorFormEqualsWrittenForm(String operatorForm, String writtenForm) {
         assertEquals(equation(writtenForm), equation(operatorForm));
@@ -124,6 +131,18 @@ class ProblemParserTest {
         LinearEquation e = equation("y''(x) + y(x) = x");
         assertEquals("x", e.variable());
         assertEquals(List.of(polynomial("1", 1, Domain.DIFFERENTIAL)), e.forcing());
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"e", "pi", "D", "E", "sin", "exp", "log"})
+    void fixedNameCannotBeTheVariable(String name) {
+        // u(e) = e^(-e) + e·e^(-e) or y(pi) = cos(pi) would read as values of the constants
+        InputException x = assertThrows(InputException.class,
+                () -> ProblemParser.parse("u'' + 2u' + u = 0", List.of(), name));
+        assertTrue(x.getMessage().contains("cannot name the variable"), x.getMessage());
+        InputException leibniz = assertThrows(InputException.class,
+                () -> ProblemParser.parse("du/d" + name + " + u = 0", List.of(), null));
+        assertTrue(leibniz.getMessage().contains("cannot name the variable"), leibniz.getMessage());
     }
 
     @Test

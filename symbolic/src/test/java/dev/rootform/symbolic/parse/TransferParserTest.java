@@ -33,6 +33,9 @@ class TransferParserTest {
         "H(s) = 2(s + 3)/((s + 1)^2 + 4)                     | 6 2      | 5 2 1",
         "H(s) = 1/(s + 1) + 1/(s + 2)                        | 3 2      | 2 3 1",
         "H(s) = 1/(s(s + 1))                                 | 1        | 0 1 1",
+        // ^ binds to the parentheses after a name, as after a number (common practice): s·(s+1)^2
+        "H(s) = 1/(s (s + 1)^2)                              | 1        | 0 1 2 1",
+        "G(s) = 1/(s + 1); H(s) = G(s)^2                     | 1        | 1 2 1",
         "H(s) = 0.5/(0.25s + 1)                              | 2        | 4 1",
         "H(s) = (s + 1)^-1                                   | 1        | 1 1",
         "H(s) = (3/4)/(s - 1/2)                              | 3/4      | -1/2 1",

@@ -19,11 +19,16 @@ final class ColdStart {
         run(args);
         Timings timings = new Timings();
         for (int i = 0; i < runs; i++) {
-            long start = System.nanoTime();
-            run(args);
-            timings.add(System.nanoTime() - start);
+            timings.add(time(args));
         }
         return timings;
+    }
+
+    /** Wall time of one process, in nanoseconds. */
+    long time(String... args) throws IOException, InterruptedException {
+        long start = System.nanoTime();
+        run(args);
+        return System.nanoTime() - start;
     }
 
     private void run(String... args) throws IOException, InterruptedException {
