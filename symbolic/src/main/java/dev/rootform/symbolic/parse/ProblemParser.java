@@ -67,7 +67,7 @@ public final class ProblemParser {
     }
 
     /** @throws InputException for a text longer than {@link Limits#MAX_INPUT_LENGTH} characters */
-    private static void requireShort(String text) {
+    static void requireShort(String text) {
         if (text.length() > Limits.MAX_INPUT_LENGTH) {
             throw new InputException("input of " + text.length() + " characters: at most " + Limits.MAX_INPUT_LENGTH
                     + " are accepted", text.substring(0, 60), -1);
@@ -75,7 +75,7 @@ public final class ProblemParser {
     }
 
     /** The [begin, end) ranges between semicolons that contain more than white space. */
-    private static List<int[]> segments(String text) {
+    static List<int[]> segments(String text) {
         List<int[]> segments = new ArrayList<>();
         int begin = 0;
         for (int i = 0; i <= text.length(); i++) {
