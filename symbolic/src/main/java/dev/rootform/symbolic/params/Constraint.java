@@ -24,16 +24,28 @@ public record Constraint(ParamPolynomial polynomial, Relation relation) {
         return relation.holdsFor(polynomial.evaluate(values).signum());
     }
 
+    /** The same condition with integer coefficients without a common factor (a positive multiple of p). */
+    public Constraint integral() {
+        java.math.BigInteger lcm = java.math.BigInteger.ONE;
+        java.math.BigInteger gcd = java.math.BigInteger.ZERO;
+        for (Map.Entry<int[], Rational> t : polynomial.exponentVectors()) {
+            java.math.BigInteger d = t.getValue().denominator();
+            lcm = lcm.divide(lcm.gcd(d)).multiply(d);
+            gcd = gcd.gcd(t.getValue().numerator());
+        }
+        return gcd.signum() == 0 ? this : new Constraint(polynomial.scale(Rational.of(lcm, gcd)), relation);
+    }
+
     @Override
     public String toString() {
         List<Map.Entry<int[], Rational>> plus = new ArrayList<>();
         List<Map.Entry<int[], Rational>> minus = new ArrayList<>();
-        for (Map.Entry<int[], Rational> t : polynomial.exponentVectors()) {
+        for (Map.Entry<int[], Rational> t : integral().polynomial.exponentVectors()) {
             (t.getValue().signum() > 0 ? plus : minus).add(t.getValue().signum() > 0 ? t : Map.entry(t.getKey(), t.getValue().negate()));
         }
         List<String> names = polynomial.names();
         if (plus.isEmpty() || minus.isEmpty()) {
-            return polynomial + " " + relation.symbol() + " 0";
+            return integral().polynomial + " " + relation.symbol() + " 0";
         }
         return ParamPolynomial.fromExponents(names, plus) + " " + relation.symbol() + " " + ParamPolynomial.fromExponents(names, minus);
     }

@@ -281,7 +281,17 @@ public final class ParametricSolver {
             if (!possible) {
                 continue;
             }
-            out.add(new ParametricCase(conditions, excluded, substitution, modes, combo, fitted.pieces(), constants, verified));
+            List<Optional<SquareRoot>> scales = new ArrayList<>();
+            for (int i = 0; i < modes.size(); i++) {
+                ParamMode m = modes.get(i);
+                Regime r = combo.get(i);
+                scales.add(r == Regime.REAL_PAIR ? Optional.of(SquareRoot.of(m.square()))
+                        : r != Regime.COMPLEX_PAIR ? Optional.empty()
+                        : problem.domain() == Domain.DIFFERENTIAL ? Optional.of(SquareRoot.of(m.square().negate()))
+                        : Optional.of(new SquareRoot(ParamFunction.one(names), m.centre().pow(2).subtract(m.square()))));
+            }
+            out.add(new ParametricCase(conditions, excluded, substitution, modes, combo, scales, fitted.pieces(), constants,
+                    verified));
         }
     }
 
