@@ -40,7 +40,7 @@ final class ParametricJob {
             Optional<ParametricReport.Specialisation> specialised = Optional.empty();
             if (at.isPresent()) {
                 int number = Specialiser.caseAt(answer, at.get());
-                if (number == 0) {
+                if (number == 0 && !answer.cases().isEmpty()) {
                     throw new InputException("no derived case holds at " + request.at().get()
                             + (answer.notes().isEmpty() ? "" : " (" + String.join("; ", answer.notes()) + ")"), request.at().get(), 0);
                 }

@@ -92,7 +92,8 @@ final class ParametricFormula {
         String sigma = factor(m.centre());
         switch (r) {
             case ROOT:
-                out.add(product(p.even(), power(p.power()), sigma + "^" + v));
+                boolean one = m.centre().isConstant() && m.centre().constantValue().isOne();
+                out.add(product(p.even(), power(p.power()), one ? "" : sigma + "^" + v));
                 break;
             case DOUBLE_ROOT:
                 out.add(product(p.even(), power(p.power()), sigma + "^" + v));

@@ -51,7 +51,7 @@ public record ParametricReport(ParametricAnswer answer, List<Agreement> checks, 
      * The answer at given parameter values.
      *
      * @param values the values, in the order of the parameters
-     * @param caseNumber the case that holds, from 1
+     * @param caseNumber the case that holds, from 1 (0 when no case formula was derived)
      * @param problem the problem text with the values put in
      * @param report the ordinary solver's answer to it
      */

@@ -55,7 +55,8 @@ public final class ParametricTextRenderer {
         s.append('\n').append(verification(r)).append('\n');
         s.append(stability(a.stability())).append('\n');
         r.at().ifPresent(at -> {
-            s.append("\nAt ").append(values(at.values())).append(": case ").append(at.caseNumber()).append(" holds.\n");
+            s.append("\nAt ").append(values(at.values())).append(at.caseNumber() == 0 ? ": no case formula; the ordinary solver's answer:\n"
+                    : ": case " + at.caseNumber() + " holds.\n");
             s.append("Specialised problem: ").append(at.problem().strip()).append("\n\n");
             s.append(TextRenderer.render(at.report()).strip()).append('\n');
         });

@@ -165,15 +165,28 @@ public final class ParamFunction {
         return Objects.hash(numerator, denominator);
     }
 
-    /** Plain text: {@code -c/(2·m)}, {@code (k - m·w^2)/m}. */
+    /** Plain text: {@code -c/(2·m)}, {@code (k - m·w^2)/m}; numerator and denominator with integer coefficients. */
     @Override
     public String toString() {
-        String top = numerator.toString();
-        if (denominator.isConstant() && denominator.constantValue().isOne()) {
-            return top;
+        java.math.BigInteger lcm = java.math.BigInteger.ONE;
+        java.math.BigInteger gcd = java.math.BigInteger.ZERO;
+        for (ParamPolynomial p : List.of(numerator, denominator)) {
+            for (Map.Entry<int[], Rational> t : p.exponentVectors()) {
+                java.math.BigInteger d = t.getValue().denominator();
+                lcm = lcm.divide(lcm.gcd(d)).multiply(d);
+                gcd = gcd.gcd(t.getValue().numerator());
+            }
         }
+        Rational scale = Rational.of(lcm, gcd);
+        String top = numerator.scale(scale).toString();
         boolean single = numerator.exponentVectors().size() == 1;
-        String bottom = denominator.toString();
+        if (numerator.isZero() || denominator.isConstant() && denominator.scale(scale).constantValue().isOne()) {
+            return numerator.isZero() ? "0" : top;
+        }
+        if (denominator.isConstant()) {
+            return (single ? top : "(" + top + ")") + "/" + denominator.scale(scale);
+        }
+        String bottom = denominator.scale(scale).toString();
         boolean simpleBottom = denominator.exponentVectors().size() == 1 && !bottom.contains("·") && !bottom.contains("/");
         return (single ? top : "(" + top + ")") + "/" + (simpleBottom ? bottom : "(" + bottom + ")");
     }

@@ -45,7 +45,11 @@ public record SquareRoot(ParamFunction outside, ParamFunction inside) {
             ParamFunction o = unit.outside;
             ParamFunction i = unit.inside;
             for (ParamFactor factor : factors.subList(1, factors.size())) {
-                ParamFunction base = ParamFunction.of(factor.polynomial());
+                Rational s = integralScale(factor.polynomial());
+                ParamFunction base = ParamFunction.of(factor.polynomial().scale(s));
+                SquareRoot fix = rationalRoot(s.pow(factor.multiplicity()).inverse(), f.names());
+                o = o.multiply(fix.outside);
+                i = i.multiply(fix.inside);
                 o = o.multiply(base.pow(factor.multiplicity() / 2));
                 i = i.multiply(base.pow(factor.multiplicity() % 2));
             }
@@ -57,6 +61,18 @@ public record SquareRoot(ParamFunction outside, ParamFunction inside) {
             }
         }
         return new SquareRoot(out, in);
+    }
+
+    /** The positive s that makes s·p integral with coprime coefficients. */
+    private static Rational integralScale(ParamPolynomial p) {
+        java.math.BigInteger lcm = java.math.BigInteger.ONE;
+        java.math.BigInteger gcd = java.math.BigInteger.ZERO;
+        for (java.util.Map.Entry<int[], Rational> t : p.exponentVectors()) {
+            java.math.BigInteger d = t.getValue().denominator();
+            lcm = lcm.divide(lcm.gcd(d)).multiply(d);
+            gcd = gcd.gcd(t.getValue().numerator());
+        }
+        return Rational.of(lcm, gcd);
     }
 
     /** √c for a rational c ≠ 0 as outside·√inside with an integer square-free-ish inside (squares up to 10^4 taken out). */
