@@ -11,6 +11,9 @@ import java.util.Optional;
  * ParametricResult r = Rootform.solveWithParameters(
  *         ParametricRequest.of("m y'' + c y' + k y = 0; y(0) = x0; y'(0) = 0", "m, c, k, x0")
  *                 .where("m > 0, c >= 0, k > 0").at("m = 2, c = 1/5, k = 8, x0 = 1/100"));
+ * if (r instanceof ParametricResult.Solved s) {
+ *     s.report().answer().cases().forEach(c -> System.out.println(c.when() + "  " + c.regimes()));
+ * }
  * }</pre>
  *
  * @param problem the equation and {@code ;}-separated conditions
