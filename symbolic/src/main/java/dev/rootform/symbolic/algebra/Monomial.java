@@ -8,9 +8,17 @@ import java.util.Arrays;
  */
 final class Monomial implements Comparable<Monomial> {
     private final int[] exponents;
+    private final int degree;
+    private final int hash;
 
     Monomial(int[] exponents) {
         this.exponents = exponents.clone();
+        int sum = 0;
+        for (int e : exponents) {
+            sum += e;
+        }
+        this.degree = sum;
+        this.hash = Arrays.hashCode(exponents);
     }
 
     static Monomial one(int variables) {
@@ -32,7 +40,7 @@ final class Monomial implements Comparable<Monomial> {
     }
 
     int degree() {
-        return Arrays.stream(exponents).sum();
+        return degree;
     }
 
     Monomial times(Monomial other) {
@@ -56,7 +64,7 @@ final class Monomial implements Comparable<Monomial> {
 
     @Override
     public int compareTo(Monomial other) {
-        int byDegree = Integer.compare(other.degree(), degree());
+        int byDegree = Integer.compare(other.degree, degree);
         return byDegree != 0 ? byDegree : -Arrays.compare(exponents, other.exponents);
     }
 
@@ -67,6 +75,6 @@ final class Monomial implements Comparable<Monomial> {
 
     @Override
     public int hashCode() {
-        return Arrays.hashCode(exponents);
+        return hash;
     }
 }

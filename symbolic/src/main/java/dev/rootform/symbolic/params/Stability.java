@@ -19,9 +19,9 @@ import java.util.List;
  * a_N^(k mod 2)·Δ_k &gt; 0. Minors by Bareiss's fraction-free elimination over Q[params].
  *
  * <p>Difference: Jury's necessary conditions a_N·χ(1) &gt; 0 and (−1)^N·a_N·χ(−1) &gt; 0 first,
- * then the Schur–Cohn recursion (p of degree d, lead L, constant c: L² − c² &gt; 0 and the same for
- * (L·p − c·p*)/z, p* the reversed polynomial; each reduced polynomial divided by the gcd of its
- * coefficients, which divides its leading coefficient and so is nonzero where that is positive).
+ * then the Hurwitz conditions of the image of χ under the bilinear map z = (1 + s)/(1 − s) (the
+ * Schur–Cohn recursion gives the same set but its polynomials double in degree at each step: measured
+ * 52 s at order 4 with four parameters against milliseconds this way).
  *
  * <p>Each condition is factored; factors already known positive (from the assumptions or earlier
  * conditions) and squares of factors known nonzero are dropped, and conditions left with nothing
@@ -33,7 +33,7 @@ final class Stability {
 
     static StabilityConditions of(Domain domain, List<ParamFunction> coefficients, Assumptions assumptions) {
         List<ParamPolynomial> a = integral(coefficients);
-        List<Constraint> raw = domain == Domain.DIFFERENTIAL ? hurwitz(a) : schurCohn(a);
+        List<Constraint> raw = domain == Domain.DIFFERENTIAL ? hurwitz(a) : jury(a);
         Signs signs = new Signs(assumptions);
         List<Constraint> kept = new ArrayList<>();
         for (Constraint c : raw) {
@@ -51,7 +51,7 @@ final class Stability {
     }
 
     private static String criterion(Domain domain) {
-        return domain == Domain.DIFFERENTIAL ? "Routh–Hurwitz" : "Schur–Cohn / Jury";
+        return domain == Domain.DIFFERENTIAL ? "Routh–Hurwitz" : "Jury, by Routh–Hurwitz after z = (1 + s)/(1 − s)";
     }
 
     /** The coefficients times the lcm of their denominators: polynomials with the same roots. */
@@ -99,43 +99,48 @@ final class Stability {
         return conditions;
     }
 
-    private static List<Constraint> schurCohn(List<ParamPolynomial> a) {
+    /**
+     * Jury's necessary conditions a_N·p(1) &gt; 0 and (−1)^N·a_N·p(−1) &gt; 0, then the Hurwitz
+     * conditions of q(s) = Σ a_j·(1 + s)^j·(1 − s)^(N−j), the image of p under z = (1 + s)/(1 − s),
+     * which maps |z| &lt; 1 onto Re s &lt; 0 (so p has every root inside the unit circle exactly when q
+     * is Hurwitz; q(0) = p(1) and q's leading coefficient is (−1)^N·p(−1)).
+     */
+    private static List<Constraint> jury(List<ParamPolynomial> a) {
         int n = a.size() - 1;
         List<String> names = a.get(0).names();
         ParamPolynomial lead = a.get(n);
-        ParamPolynomial atOne = ParamPolynomial.constant(names, Rational.ZERO);
-        ParamPolynomial atMinusOne = atOne;
+        ParamPolynomial zero = ParamPolynomial.constant(names, Rational.ZERO);
+        List<ParamPolynomial> q = new ArrayList<>();
+        for (int i = 0; i <= n; i++) {
+            q.add(zero);
+        }
         for (int j = 0; j <= n; j++) {
-            atOne = atOne.add(a.get(j));
-            atMinusOne = atMinusOne.add(j % 2 == 0 ? a.get(j) : a.get(j).negate());
+            // (1 + s)^j (1 − s)^(n−j), coefficients by convolution of binomials
+            long[] plus = binomials(j, 1);
+            long[] minus = binomials(n - j, -1);
+            for (int u = 0; u <= j; u++) {
+                for (int w = 0; w <= n - j; w++) {
+                    q.set(u + w, q.get(u + w).add(a.get(j).scale(Rational.of(plus[u] * minus[w]))));
+                }
+            }
         }
         List<Constraint> conditions = new ArrayList<>();
-        conditions.add(new Constraint(lead.multiply(atOne), Relation.POSITIVE));
-        conditions.add(new Constraint((n % 2 == 0 ? lead : lead.negate()).multiply(atMinusOne), Relation.POSITIVE));
-        List<ParamPolynomial> p = new ArrayList<>(a);
-        while (p.size() > 1) {
-            Deadline.checkCurrent();
-            int d = p.size() - 1;
-            ParamPolynomial l = p.get(d);
-            ParamPolynomial c = p.get(0);
-            conditions.add(new Constraint(l.multiply(l).subtract(c.multiply(c)), Relation.POSITIVE));
-            List<ParamPolynomial> next = new ArrayList<>();
-            for (int j = 1; j <= d; j++) {
-                next.add(l.multiply(p.get(j)).subtract(c.multiply(p.get(d - j))));
-            }
-            ParamPolynomial content = ParamPolynomial.constant(names, Rational.ZERO);
-            for (ParamPolynomial q : next) {
-                content = JasMultivariate.gcd(content, q);
-            }
-            if (content.isZero()) {
-                break;
-            }
-            List<ParamPolynomial> reduced = new ArrayList<>();
-            for (ParamPolynomial q : next) {
-                reduced.add(JasMultivariate.divide(q, content));
-            }
-            p = reduced;
-        }
+        conditions.add(new Constraint(lead.multiply(q.get(0)), Relation.POSITIVE));
+        conditions.add(new Constraint(lead.multiply(q.get(n)), Relation.POSITIVE));
+        conditions.addAll(hurwitz(q));
         return conditions;
+    }
+
+    /** The coefficients of (1 + sign·s)^k. */
+    private static long[] binomials(int k, int sign) {
+        long[] c = new long[k + 1];
+        c[0] = 1;
+        for (int i = 1; i <= k; i++) {
+            c[i] = c[i - 1] * (k - i + 1) / i;
+        }
+        for (int i = 1; i <= k; i += 2) {
+            c[i] *= sign;
+        }
+        return c;
     }
 }
