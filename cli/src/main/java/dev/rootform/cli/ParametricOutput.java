@@ -6,6 +6,8 @@ import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.export.Rendering;
 import dev.rootform.export.document.ParametricJsonRenderer;
+import dev.rootform.export.document.ParametricLatexRenderer;
+import dev.rootform.export.document.ParametricMathMlRenderer;
 import dev.rootform.export.document.ParametricTextRenderer;
 import dev.rootform.symbolic.model.InputException;
 import java.io.IOException;
@@ -26,8 +28,8 @@ final class ParametricOutput {
             throw new InputException("--given is not taken with --params: write the conditions after the equation", "", -1);
         }
         String format = command.out.format;
-        if (!format.equals("text") && !format.equals("json")) {
-            throw new InputException("--format " + format + " is not available with --params (text, json)", "", -1);
+        if (!java.util.List.of("text", "json", "latex", "mathml").contains(format)) {
+            throw new InputException("--format " + format + " is not available with --params (text, json, latex, mathml)", "", -1);
         }
         ParametricRequest request = new ParametricRequest(command.input, command.params, command.where == null ? "" : command.where,
                 Optional.ofNullable(command.at), command.out.options(command.variable));
@@ -39,7 +41,10 @@ final class ParametricOutput {
             return n.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
         }
         ParametricResult.Solved solved = (ParametricResult.Solved) result;
-        String text = format.equals("json") ? ParametricJsonRenderer.render(solved.report()) : ParametricTextRenderer.render(solved.report());
+        String text = format.equals("json") ? ParametricJsonRenderer.render(solved.report())
+                : format.equals("latex") ? ParametricLatexRenderer.render(solved.report())
+                : format.equals("mathml") ? ParametricMathMlRenderer.render(solved.report())
+                : ParametricTextRenderer.render(solved.report());
         try {
             return command.out.print(new Rendering(text, Optional.empty()), solved.report().verified() ? ExitCode.VERIFIED
                     : ExitCode.CHECK_FAILED, command.spec);

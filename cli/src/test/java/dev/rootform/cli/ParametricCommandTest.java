@@ -46,4 +46,24 @@ class ParametricCommandTest {
         assertTrue(r.err().contains("nonlinear term"), r.err());
         assertEquals("", r.out());
     }
+
+    @Test
+    void latexPutsTheCasesInOneCasesEnvironment() {
+        Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0", "--format", "latex");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("y\\left(t\\right) = \\begin{cases}") || r.out().contains("= \\begin{cases}"), r.out());
+        assertEquals(2, r.out().split("\\\\\\\\\n", -1).length - 1, r.out());
+        assertTrue(r.out().contains("\\end{cases}") && r.out().contains("\\sqrt{") && r.out().contains("\\omega_{1}"), r.out());
+    }
+
+    @Test
+    void mathMlIsWellFormedWithOneTableRowPerCase() throws Exception {
+        Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0", "--format", "mathml");
+        assertEquals(0, r.code(), r.err());
+        javax.xml.parsers.DocumentBuilderFactory factory = javax.xml.parsers.DocumentBuilderFactory.newInstance();
+        factory.setNamespaceAware(true);
+        org.w3c.dom.Document doc = factory.newDocumentBuilder().parse(new org.xml.sax.InputSource(
+                new java.io.StringReader("<root>" + r.out() + "</root>")));
+        assertEquals(3, doc.getElementsByTagNameNS("http://www.w3.org/1998/Math/MathML", "mtr").getLength());
+    }
 }
