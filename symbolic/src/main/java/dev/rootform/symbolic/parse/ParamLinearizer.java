@@ -16,7 +16,7 @@ import java.util.TreeMap;
  * ({@code sin(w t)}, differential equations only); every other use is refused with one line
  * naming the term.
  */
-final class ParamLinearizer {
+final class ParamLinearizer extends NodeEvaluator<ParamValue> {
     private static final int MAX_EXPONENT = 64;
 
     private final String source;
@@ -29,41 +29,37 @@ final class ParamLinearizer {
         this.names = List.copyOf(names);
     }
 
+    @Override
     ParamValue evaluate(Node node) {
-        if (node instanceof Node.Num num) {
-            return constant(ParamFunction.constant(names, num.value()));
+        return dispatch(node);
+    }
+
+    @Override
+    ParamValue number(Node.Num node) {
+        return constant(ParamFunction.constant(names, node.value()));
+    }
+
+    @Override
+    ParamValue indexed(Node.Indexed node) {
+        if (!node.name().equals(shape.function())) {
+            throw error("unknown sequence " + node.name(), node);
         }
-        if (node instanceof Node.Name name) {
-            return name(name);
-        }
-        if (node instanceof Node.Call call) {
-            return call(call);
-        }
-        if (node instanceof Node.Indexed indexed) {
-            if (!indexed.name().equals(shape.function())) {
-                throw error("unknown sequence " + indexed.name(), indexed);
-            }
-            return ParamValue.unknown(offset(indexed.index(), indexed), names);
-        }
-        if (node instanceof Node.Derivative d) {
-            return derivative(d);
-        }
-        if (node instanceof Node.Negation negation) {
-            return evaluate(negation.operand()).negate();
-        }
-        Node.Binary b = (Node.Binary) node;
-        switch (b.op()) {
-            case ADD:
-                return evaluate(b.left()).add(evaluate(b.right()));
-            case SUB:
-                return evaluate(b.left()).add(evaluate(b.right()).negate());
-            case MUL:
-                return product(evaluate(b.left()), evaluate(b.right()), b);
-            case DIV:
-                return quotient(b);
-            default:
-                return power(b);
-        }
+        return ParamValue.unknown(offset(node.index(), node), names);
+    }
+
+    @Override
+    ParamValue negate(ParamValue value) {
+        return value.negate();
+    }
+
+    @Override
+    ParamValue sum(ParamValue left, ParamValue right) {
+        return left.add(right);
+    }
+
+    @Override
+    ParamValue product(Node.Binary node) {
+        return product(evaluate(node.left()), evaluate(node.right()), node);
     }
 
     /** The value of a constant expression in the parameters, such as {@code x0} or {@code F/m}. */
@@ -95,7 +91,8 @@ final class ParamLinearizer {
         return shift.constantValue().toBigInteger().intValueExact();
     }
 
-    private ParamValue name(Node.Name node) {
+    @Override
+    ParamValue name(Node.Name node) {
         String name = node.name();
         int index = names.indexOf(name);
         if (index >= 0) {
@@ -120,7 +117,8 @@ final class ParamLinearizer {
         throw error("undeclared parameter '" + name + "': list it in --params", node);
     }
 
-    private ParamValue call(Node.Call call) {
+    @Override
+    ParamValue call(Node.Call call) {
         String name = call.name();
         if (names.contains(name)) {
             return product(name(new Node.Name(name, call.start(), call.start() + name.length())), evaluate(call.argument()), call);
@@ -146,7 +144,8 @@ final class ParamLinearizer {
         throw error("undeclared parameter or function '" + name + "'", call);
     }
 
-    private ParamValue derivative(Node.Derivative d) {
+    @Override
+    ParamValue derivative(Node.Derivative d) {
         if (shape.domain() == Domain.DIFFERENCE) {
             throw error("derivative " + text(d) + " does not fit a recurrence", d);
         }
@@ -191,7 +190,8 @@ final class ParamLinearizer {
         return sum;
     }
 
-    private ParamValue quotient(Node.Binary b) {
+    @Override
+    ParamValue quotient(Node.Binary b) {
         ParamFunction divisor = constantOf(b.right(), "a divisor");
         if (divisor.isZero()) {
             throw error("division by zero", b.right());
@@ -199,7 +199,8 @@ final class ParamLinearizer {
         return evaluate(b.left()).scale(ParamFunction.one(names).divide(divisor));
     }
 
-    private ParamValue power(Node.Binary b) {
+    @Override
+    ParamValue power(Node.Binary b) {
         if (b.left() instanceof Node.Name base && base.name().equals(Names.EULER)) {
             return exponential(evaluate(b.right()), b);
         }
