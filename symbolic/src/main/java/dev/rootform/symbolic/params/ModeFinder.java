@@ -11,8 +11,9 @@ import java.util.List;
 /**
  * The modes of μ = χ·A over Q(params): χ factored over Q[params][λ] (irreducible there means
  * irreducible over Q(params), by Gauss's lemma), A from the forcing terms ((λ − r)^(p+1),
- * ((λ − r)² + w²)^(p+1), (λ − a)^(p+1)), equal factors merged. Also the factors whose vanishing
- * changes the equation's order (contents and leading coefficients), which must be nonzero.
+ * ((λ − r)² + w²)^(p+1), (λ − a)^(p+1)), equal factors merged. Also the polynomials that must not
+ * vanish: contents and leading coefficients (else the order drops), the denominators of every
+ * coefficient, amplitude, rate, frequency and condition value, a recurrence's forcing bases.
  */
 final class ModeFinder {
     /** The modes and the polynomials that must not vanish. */
@@ -79,7 +80,19 @@ final class ModeFinder {
                         + "): its roots have no closed form here; give the parameters values with --at");
             }
         }
+        for (ParamFunction c : problem.coefficients()) {
+            nonzero.add(c.denominator().over(names));
+        }
+        for (ParamCondition c : problem.conditions()) {
+            nonzero.add(c.value().denominator().over(names));
+        }
         for (ParamTerm t : problem.forcing()) {
+            for (ParamFunction f : List.of(t.amplitude(), t.rate(), t.frequency())) {
+                nonzero.add(f.denominator().over(names));
+            }
+            if (problem.domain() == Domain.DIFFERENCE) {
+                nonzero.add(t.rate().numerator().over(names));
+            }
             ParamMode forced = t.wave() == ParamTerm.Wave.NONE
                     ? new ParamMode(false, over(t.rate(), names), ParamFunction.zero(names), null, 0, t.power() + 1)
                     : new ParamMode(true, over(t.rate(), names), over(t.frequency(), names).pow(2).negate(), null, 0, t.power() + 1);

@@ -37,8 +37,16 @@ final class Substitution {
         return Optional.ofNullable(best);
     }
 
-    /** The problem with the parameter replaced; empty when its leading coefficient vanishes identically. */
+    /** The problem with the parameter replaced; empty when its leading coefficient or a denominator vanishes identically. */
     Optional<ParametricProblem> apply(ParametricProblem problem) {
+        try {
+            return substituted(problem);
+        } catch (ArithmeticException e) {
+            return Optional.empty();
+        }
+    }
+
+    private Optional<ParametricProblem> substituted(ParametricProblem problem) {
         List<ParamFunction> coefficients = new ArrayList<>();
         for (ParamFunction c : problem.coefficients()) {
             coefficients.add(c.substitute(index, value));
