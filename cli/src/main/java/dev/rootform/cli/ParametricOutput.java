@@ -4,7 +4,9 @@ import dev.rootform.api.ParametricRequest;
 import dev.rootform.api.ParametricResult;
 import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
+import dev.rootform.export.CodeNames;
 import dev.rootform.export.Rendering;
+import dev.rootform.export.code.ParametricCode;
 import dev.rootform.export.document.ParametricJsonRenderer;
 import dev.rootform.export.document.ParametricLatexRenderer;
 import dev.rootform.export.document.ParametricMathMlRenderer;
@@ -28,9 +30,11 @@ final class ParametricOutput {
             throw new InputException("--given is not taken with --params: write the conditions after the equation", "", -1);
         }
         String format = command.out.format;
-        if (!java.util.List.of("text", "json", "latex", "mathml").contains(format)) {
-            throw new InputException("--format " + format + " is not available with --params (text, json, latex, mathml)", "", -1);
+        if (!java.util.List.of("text", "json", "latex", "mathml", "java", "c").contains(format)) {
+            throw new InputException("--format " + format + " is not available with --params (text, json, latex, mathml, java, c)",
+                    "", -1);
         }
+        CodeNames names = command.out.names();
         ParametricRequest request = new ParametricRequest(command.input, command.params, command.where == null ? "" : command.where,
                 Optional.ofNullable(command.at), command.out.options(command.variable));
         ParametricResult result = Rootform.solveWithParameters(request);
@@ -41,7 +45,14 @@ final class ParametricOutput {
             return n.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
         }
         ParametricResult.Solved solved = (ParametricResult.Solved) result;
-        String text = format.equals("json") ? ParametricJsonRenderer.render(solved.report())
+        if (format.equals("java") || format.equals("c")) {
+            ParametricCode.refusal(solved.report()).ifPresent(m -> {
+                throw new InputException(m, "", -1);
+            });
+        }
+        String text = format.equals("java") ? ParametricCode.java(solved.report(), names.packageName(), names.className())
+                : format.equals("c") ? ParametricCode.c(solved.report(), names.function())
+                : format.equals("json") ? ParametricJsonRenderer.render(solved.report())
                 : format.equals("latex") ? ParametricLatexRenderer.render(solved.report())
                 : format.equals("mathml") ? ParametricMathMlRenderer.render(solved.report())
                 : ParametricTextRenderer.render(solved.report());

@@ -66,4 +66,48 @@ class ParametricCommandTest {
                 new java.io.StringReader("<root>" + r.out() + "</root>")));
         assertEquals(3, doc.getElementsByTagNameNS("http://www.w3.org/1998/Math/MathML", "mtr").getLength());
     }
+
+    @Test
+    void generatedJavaBranchesOnTheCaseAndMatchesTheOrdinarySolver(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0", "--format", "java",
+                "--class", "Mast");
+        assertEquals(0, r.code(), r.err());
+        java.nio.file.Files.writeString(dir.resolve("Mast.java"), r.out());
+        assertEquals(0, javax.tools.ToolProvider.getSystemJavaCompiler().run(null, null, null, "-d", dir.toString(),
+                dir.resolve("Mast.java").toString()), r.out());
+        try (java.net.URLClassLoader loader = new java.net.URLClassLoader(new java.net.URL[] {dir.toUri().toURL()})) {
+            java.lang.reflect.Method value = loader.loadClass("Mast").getMethod("value", double.class, double.class, double.class,
+                    double.class, double.class, double.class);
+            // underdamped, critically damped (c = 2√(km), common practice) and overdamped, against the ordinary solver
+            String[][] points = {{"2", "0.4", "8"}, {"1", "4", "4"}, {"1", "5", "4"}};
+            for (String[] p : points) {
+                Run ordinary = MainTest.run("solve", "(" + p[0] + ") y'' + (" + p[1] + ") y' + (" + p[2] + ") y = 0; y(0) = 1/100; y'(0) = 1/2",
+                        "--values-at", "3/2", "--format", "json");
+                double expected = new ObjectMapper().readTree(ordinary.out()).get("values").get(0).get("value").asDouble();
+                double actual = (double) value.invoke(null, Double.parseDouble(p[0]), Double.parseDouble(p[1]), Double.parseDouble(p[2]),
+                        0.01, 0.5, 1.5);
+                assertEquals(expected, actual, 1e-12 * Math.max(1, Math.abs(expected)), String.join(",", p));
+            }
+        }
+    }
+
+    @Test
+    void generatedCCompilesAndTakesTheRecurrencesResonantCase(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        // x[n+1] = a x[n] + 1, x[0] = 0: the geometric sum, and n at a = 1 (common practice)
+        Run r = MainTest.run("solve", "x[n+1] = a x[n] + 1; x[0] = 0", "--params", "a", "--format", "c", "--function", "sum");
+        assertEquals(0, r.code(), r.err());
+        java.nio.file.Files.writeString(dir.resolve("sum.c"), r.out() + "\n#include <stdio.h>\nint main(void) {\n"
+                + "    printf(\"%.17g %.17g\\n\", sum(1.0, 7), sum(0.5, 3));\n    return 0;\n}\n");
+        Process gcc = new ProcessBuilder("gcc", "-std=c99", "-Wall", "-Werror", "-o", dir.resolve("sum").toString(),
+                dir.resolve("sum.c").toString(), "-lm").redirectErrorStream(true).start();
+        String log = new String(gcc.getInputStream().readAllBytes());
+        assertEquals(0, gcc.waitFor(), log + r.out());
+        Process run = new ProcessBuilder(dir.resolve("sum").toString()).start();
+        String[] out = new String(run.getInputStream().readAllBytes()).trim().split(" ");
+        assertEquals(0, run.waitFor());
+        assertEquals(7.0, Double.parseDouble(out[0]), 1e-12);
+        assertEquals(1.75, Double.parseDouble(out[1]), 1e-12);
+    }
 }
