@@ -81,6 +81,15 @@ public final class Rootform {
     }
 
     /**
+     * Analyses a transfer function exactly (lowest terms, poles and zeros, DC gain, properness,
+     * stability) and computes its response to the request's input in closed form, verified, with
+     * the frequency response and, for a step into a stable system, the step figures.
+     */
+    public static ResponseResult response(ResponseRequest request) {
+        return ResponseJob.run(request);
+    }
+
+    /**
      * Solves a problem with parameters exactly over the rational functions in them, split into the
      * cases where the form of the solution changes, with stability as conditions on the parameters;
      * checks the cases against the ordinary solver at rational parameter points and, with values,

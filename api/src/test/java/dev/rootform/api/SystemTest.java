@@ -9,7 +9,7 @@ import dev.rootform.export.document.SystemReport;
 import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
-import dev.rootform.symbolic.statespace.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -30,7 +30,7 @@ class SystemTest {
         // companion (controllable canonical) form of 1/(s^2 + 2s + 5): common practice
         SystemReport r = analysed(SystemRequest.continuous("[[0,1],[-5,-2]]").withB("[[0],[1]]").withC("[[1,0]]")
                 .withInput("step").with(Options.builder().points("1").build()));
-        assertEquals(RationalFunction.of(RationalPolynomial.ONE, RationalPolynomial.ofIntegers(5, 2, 1)),
+        assertEquals(new RationalFunction(RationalPolynomial.ONE, RationalPolynomial.ofIntegers(5, 2, 1)),
                 r.transfer().orElseThrow().entries().get(0).get(0));
         assertEquals(2, r.controllabilityRank().getAsInt());
         assertEquals(2, r.observabilityRank().getAsInt());
@@ -89,7 +89,7 @@ class SystemTest {
         assertEquals(1, r.controllabilityRank().getAsInt());
         assertEquals(1, r.observabilityRank().getAsInt());
         // the hidden mode cancels: G(s) = 1/(s + 1)
-        assertEquals(RationalFunction.of(RationalPolynomial.ONE, RationalPolynomial.ofIntegers(1, 1)),
+        assertEquals(new RationalFunction(RationalPolynomial.ONE, RationalPolynomial.ofIntegers(1, 1)),
                 r.transfer().orElseThrow().entries().get(0).get(0));
     }
 

@@ -9,8 +9,8 @@ import picocli.CommandLine.Command;
  * failure to an exit code with one line on stderr and never a stack trace.
  */
 @Command(name = "rootform", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
-        subcommands = {SolveCommand.class, CheckCommand.class, RecoverCommand.class, SystemCommand.class, BatchCommand.class,
-            DemoCommand.class},
+        subcommands = {SolveCommand.class, CheckCommand.class, ResponseCommand.class, RecoverCommand.class, SystemCommand.class,
+            BatchCommand.class, DemoCommand.class},
         description = "Exact closed forms of linear constant-coefficient difference and differential equations.")
 public final class Main implements Runnable {
     @CommandLine.Spec

@@ -27,9 +27,9 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 
 /**
- * The options of every command that prints a solve answer: digits, values, format, output file,
- * names and C variant of generated code and the time limit; checked before any work, so a bad
- * option fails fast.
+ * The options of every command that prints an answer (solve, recover, response): digits, values,
+ * format, output file, names and C variant of generated code and the time limit; checked before
+ * any work, so a bad option fails fast.
  */
 final class OutputOptions {
     @Option(names = "--digits", paramLabel = "N", description = "Significant digits of numeric output (default ${DEFAULT-VALUE}).")
@@ -176,7 +176,7 @@ final class OutputOptions {
     }
 
     /** @throws InputException for a bad class, package, function or header name, or a C option without --format c */
-    private CodeNames codeNames() {
+    CodeNames codeNames() {
         refuse(Identifiers.javaClassRefusal(className));
         if (packageName != null) {
             refuse(Identifiers.javaPackageRefusal(packageName));
@@ -203,7 +203,7 @@ final class OutputOptions {
     }
 
     /** @throws InputException with the refusal's message, when there is one */
-    private static void refuse(Optional<String> refusal) {
+    static void refuse(Optional<String> refusal) {
         refusal.ifPresent(message -> {
             throw new InputException(message, "", -1);
         });
@@ -215,7 +215,7 @@ final class OutputOptions {
      *
      * @throws InputException when a file cannot be written (then none has changed)
      */
-    private void write(Rendering rendering, PrintWriter out) {
+    void write(Rendering rendering, PrintWriter out) {
         Map<OutputFiles.Target, String> texts = new LinkedHashMap<>();
         List<OutputFiles.Target> files = files();
         for (OutputFiles.Target file : files) {

@@ -17,7 +17,7 @@ import dev.rootform.symbolic.algebra.Factor;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.matrix.RationalMatrix;
 import dev.rootform.symbolic.solve.Check;
-import dev.rootform.symbolic.statespace.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import java.io.UncheckedIOException;
 import java.util.List;
 

@@ -6,7 +6,7 @@ import dev.rootform.export.notation.Formulas;
 
 import dev.rootform.export.document.SystemReport.SignalReport;
 import dev.rootform.symbolic.closedform.ClosedForm;
-import dev.rootform.symbolic.statespace.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;

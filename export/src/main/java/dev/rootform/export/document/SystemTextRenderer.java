@@ -7,7 +7,7 @@ import dev.rootform.export.document.SystemReport.ValueRow;
 import dev.rootform.numeric.diagnostics.Stability;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.solve.Check;
-import dev.rootform.symbolic.statespace.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.statespace.StateModel;
 import java.util.ArrayList;
 import java.util.List;

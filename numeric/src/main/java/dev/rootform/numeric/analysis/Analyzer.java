@@ -121,6 +121,15 @@ public final class Analyzer {
     }
 
     /**
+     * The values of exact roots to this analyzer's digits: exact forms rounded, implicit roots
+     * from certified enclosures; in the order given.
+     */
+    public List<RootApproximation> approximate(List<ExactRoot> roots) {
+        RootCache cache = new RootCache();
+        return roots.stream().map(r -> approximate(r, cache)).toList();
+    }
+
+    /**
      * The solution's values at {@code points}, and nothing else: exact for sequences, to the
      * digits of this analyzer for functions (boundary-value constants are solved again).
      *

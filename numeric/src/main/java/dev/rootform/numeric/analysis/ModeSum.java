@@ -10,6 +10,7 @@ import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.RadicalSolution;
 import dev.rootform.symbolic.work.Deadline;
+import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
@@ -22,8 +23,10 @@ import org.apfloat.Apfloat;
  * D^d(u^p e^{zu}) = Σ_{l ≤ min(d,p)} C(d,l)·p!/(p-l)!·u^{p-l}·z^{d-l}·e^{zu} (Leibniz rule).
  * Approximate; built from exact solutions and basis functions with certified root values. The
  * value of a fitted solution y(t) = Σ_components Σ_α Σ_i c_i(α)·u^i·e^{αu} is one such sum.
+ *
+ * @since 0.3 (public)
  */
-final class ModeSum {
+public final class ModeSum {
     /** One mode w·u^p·e^{zu}. */
     record Mode(Apcomplex weight, int power, Apcomplex rate) {
     }
@@ -36,6 +39,19 @@ final class ModeSum {
         this.origin = origin;
         this.modes = List.copyOf(modes);
         this.precision = precision;
+    }
+
+    /**
+     * A fitted differential-equation solution at a working precision of {@code digits} significant
+     * digits (root values certified to that precision).
+     */
+    public static ModeSum of(ExactSolution s, int digits) {
+        return of(s, new RootCache(), digits);
+    }
+
+    /** The d-th derivative at t, rounded to the working precision. */
+    public BigDecimal derivativeAt(int d, BigDecimal t) {
+        return Decimals.toBigDecimal(derivative(d, new Apfloat(t, precision)), (int) precision);
     }
 
     /** The exact solution's components Σ_α Σ_i c_i(α) u^i e^{αu}. */

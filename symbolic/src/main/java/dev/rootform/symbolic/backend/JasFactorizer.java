@@ -48,6 +48,22 @@ public final class JasFactorizer {
     /** One JAS factorisation at a time (see the class comment). */
     static final ReentrantLock JAS = new ReentrantLock();
 
+    private static final int RECENT_SIZE = 64;
+    /**
+     * The most recently factored monic polynomials (a response factors its denominator for the
+     * transfer function's poles and again as the equation's characteristic polynomial); the map's
+     * lock is not held while factoring.
+     */
+    private static final Map<RationalPolynomial, List<Factor>> RECENT = java.util.Collections.synchronizedMap(
+            new java.util.LinkedHashMap<>(16, 0.75f, true) {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<RationalPolynomial, List<Factor>> eldest) {
+                    return size() > RECENT_SIZE;
+                }
+            });
+
     private JasFactorizer() {
     }
 
@@ -61,6 +77,17 @@ public final class JasFactorizer {
         if (p.degree() < 1) {
             throw new IllegalArgumentException("degree (" + p.degree() + ") must be >= 1");
         }
+        RationalPolynomial key = p.monic();
+        List<Factor> known = RECENT.get(key);
+        if (known != null) {
+            return known;
+        }
+        List<Factor> factors = factorMonic(key);
+        RECENT.put(key, factors);
+        return factors;
+    }
+
+    private static List<Factor> factorMonic(RationalPolynomial p) {
         List<Factor> factors = scaledBinomial(p).orElseGet(() -> factorsOf(p));
         factors = new ArrayList<>(factors);
         factors.sort(Comparator.comparingInt(Factor::degree).thenComparing(f -> f.polynomial().toString()));

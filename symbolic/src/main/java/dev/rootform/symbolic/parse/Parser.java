@@ -66,6 +66,15 @@ final class Parser {
         return side;
     }
 
+    /** Reads the whole range as one expression (no {@code =}). */
+    Node expressionOnly() {
+        Node node = expression();
+        if (!peek().is(Kind.END)) {
+            throw unexpected(peek());
+        }
+        return node;
+    }
+
     private Node expression() {
         enter();
         int start = peek().start();

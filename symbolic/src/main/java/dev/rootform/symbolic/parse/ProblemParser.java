@@ -1,6 +1,8 @@
 package dev.rootform.symbolic.parse;
 
 import dev.rootform.symbolic.model.Condition;
+import dev.rootform.symbolic.model.Domain;
+import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -64,6 +66,29 @@ public final class ProblemParser {
             }
         }
         return new Problem(equation, conditions);
+    }
+
+    /**
+     * Reads a right-hand side alone, in the forms a forced equation accepts: polynomials,
+     * exponentials, cos and sin of the independent variable, their products and sums
+     * ({@code 2sin(3t)}, {@code e^(-t)}, {@code (1/2)^n}, {@code n^2 + 1}).
+     *
+     * @param text the expression
+     * @param domain {@link Domain#DIFFERENTIAL} for a function of t, {@link Domain#DIFFERENCE} for a
+     *     sequence in n
+     * @return the terms in a fixed order; empty for an expression that is 0
+     * @throws InputException naming the problem and its position in {@code text}
+     */
+    public static List<ForcingTerm> forcing(String text, Domain domain) {
+        String source = text == null ? "" : text;
+        if (source.isBlank()) {
+            throw new InputException("empty input", source, 0);
+        }
+        requireShort(source);
+        String variable = domain == Domain.DIFFERENCE ? Names.DEFAULT_INDEX : Names.DEFAULT_TIME;
+        Node node = new Parser(source, 0, source.length(), variable).expressionOnly();
+        Value value = new Linearizer(source, new Shape(domain, "", variable)).evaluate(node);
+        return value.forcing().toTerms();
     }
 
     /** @throws InputException for a text longer than {@link Limits#MAX_INPUT_LENGTH} characters */

@@ -10,21 +10,24 @@ import java.util.Optional;
 /**
  * Exact Gauss–Jordan elimination for square rational systems: A·v = b, explaining its failures
  * (an inconsistent system comes with a certificate u: u·A = 0, u·b ≠ 0; an underdetermined one
- * with a kernel vector v ≠ 0: A·v = 0), and the inverse A⁻¹. Package-private worker of
- * {@link ConditionFitter}.
+ * with a kernel vector v ≠ 0: A·v = 0), and the inverse A⁻¹. Used by {@link ConditionFitter} and
+ * by the fit of a response's forced part (dev.rootform.symbolic.response).
+ *
+ * @since 0.3
  */
-final class LinearSystem {
+public final class LinearSystem {
     /**
      * Outcome of elimination: exactly one of {@code solution}, {@code certificate} (inconsistent)
      * or {@code kernel} (underdetermined) is non-null.
      */
-    record Result(List<Rational> solution, List<Rational> certificate, List<Rational> kernel, int rank) {
+    public record Result(List<Rational> solution, List<Rational> certificate, List<Rational> kernel, int rank) {
     }
 
     private LinearSystem() {
     }
 
-    static Result solve(List<List<Rational>> matrix, List<Rational> rhs) {
+    /** Solves the square system A·v = b; see {@link Result}. */
+    public static Result solve(List<List<Rational>> matrix, List<Rational> rhs) {
         int n = matrix.size();
         // [A | b | I]: the identity part records the row operations, for the certificate
         List<List<Rational>> right = identity(n);

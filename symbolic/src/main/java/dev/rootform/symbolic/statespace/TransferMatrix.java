@@ -1,5 +1,6 @@
 package dev.rootform.symbolic.statespace;
 
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.matrix.RationalMatrix;
 import dev.rootform.symbolic.matrix.Resolvent;
 import dev.rootform.symbolic.algebra.Rational;
@@ -34,7 +35,7 @@ public record TransferMatrix(List<List<RationalFunction>> entries) {
                 for (int j = 0; j < p.length; j++) {
                     p[j] = cmb.get(j).get(r, k);
                 }
-                row.add(RationalFunction.of(RationalPolynomial.of(p), resolvent.characteristic()).add(model.d().get(r, k)));
+                row.add(new RationalFunction(RationalPolynomial.of(p), resolvent.characteristic()).add(RationalFunction.of(model.d().get(r, k))));
             }
             rows.add(row);
         }
