@@ -158,8 +158,12 @@ public final class ParametricSolver {
             }
             List<Constraint> inner = new ArrayList<>(when);
             inner.add(new Constraint(f, Relation.ZERO));
-            cases(substituted.get(), sub, inner, (substitution.isEmpty() ? "" : substitution + ", ") + s.get(),
-                    depth + 1, out, notes);
+            try {
+                cases(substituted.get(), sub, inner, (substitution.isEmpty() ? "" : substitution + ", ") + s.get(),
+                        depth + 1, out, notes);
+            } catch (InputException e) {
+                notes.add("where " + join(inner) + ": not derived (" + e.getMessage() + ")");
+            }
         }
     }
 
