@@ -35,7 +35,7 @@ public final class JavaRenderer {
                     java.util.Arrays.fill(r, java.math.BigInteger.ZERO);
                     r[0] = java.math.BigInteger.ONE;
                     for (int bit = 63 - Long.numberOfLeadingZeros(m); bit >= 0; bit--) {
-                        r = multiplyMod(r, r);
+                        r = squareMod(r);
                         if ((m >>> bit & 1L) != 0) {
                             r = timesL(r);
                         }
@@ -52,19 +52,25 @@ public final class JavaRenderer {
                     return term(n).longValueExact();
                 }
 
-                /** a(L)*b(L) mod chi(L), where L^k = sum_j STEP[j] L^j. */
-                private static java.math.BigInteger[] multiplyMod(java.math.BigInteger[] a, java.math.BigInteger[] b) {
+                /**
+                 * a(L)^2 mod chi(L), where L^k = sum_j STEP[j] L^j: k squarings and k(k-1)/2 products (each
+                 * cross term once, doubled by a shift); for k = 2 as many big multiplications as fast doubling.
+                 */
+                private static java.math.BigInteger[] squareMod(java.math.BigInteger[] a) {
                     int k = STEP.length;
                     java.math.BigInteger[] p = new java.math.BigInteger[2 * k - 1];
                     java.util.Arrays.fill(p, java.math.BigInteger.ZERO);
                     for (int i = 0; i < k; i++) {
-                        for (int j = 0; j < k; j++) {
-                            p[i + j] = p[i + j].add(a[i].multiply(b[j]));
+                        p[2 * i] = p[2 * i].add(a[i].multiply(a[i]));
+                        for (int j = i + 1; j < k; j++) {
+                            p[i + j] = p[i + j].add(a[i].multiply(a[j]).shiftLeft(1));
                         }
                     }
                     for (int d = 2 * k - 2; d >= k; d--) {
                         for (int j = 0; j < k; j++) {
-                            p[d - k + j] = p[d - k + j].add(p[d].multiply(STEP[j]));
+                            if (STEP[j].signum() != 0) {
+                                p[d - k + j] = p[d - k + j].add(p[d].multiply(STEP[j]));
+                            }
                         }
                     }
                     return java.util.Arrays.copyOf(p, k);

@@ -15,7 +15,9 @@ import java.util.function.UnaryOperator;
  * — near t0 the Taylor series (SERIES, SERIES_RADIUS), else the loop over the constant arrays
  * AMPLITUDE, POWER, GROWTH, FREQUENCY, PHASE (the last two left out when no term oscillates and the
  * code may not call the math library) and, when some angle is reduced exactly, MODULUS and
- * MULTIPLIER.
+ * MULTIPLIER. The growth factor (pow or exp, the costly call) is taken once per run of equal rates
+ * (the waves n^p·λ^n of one repeated root follow each other) and reused, which gives the same value as
+ * calling it again.
  *
  * @since 0.2
  */
@@ -32,8 +34,12 @@ final class WaveLoop {
             """;
     private static final String TEMPLATE = """
             REAL total = ZERO;
+            REAL growth = ZERO;
             for (int i = 0; i < COUNT; i++) {
-                REAL term = AMPLITUDE[i] * GROWTH_FACTOR;
+                if (i == 0 || GROWTH[i] != GROWTH[i - 1]) {
+                    growth = GROWTH_FACTOR;
+                }
+                REAL term = AMPLITUDE[i] * growth;
                 if (POWER[i] > 0) {
                     term *= POW(v, POWER[i]);
                 }

@@ -12,6 +12,7 @@ import dev.rootform.symbolic.closedform.ExactRoot;
 import dev.rootform.symbolic.closedform.Surd;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.solve.Check;
+import dev.rootform.symbolic.solve.Component;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.RadicalSolution;
 import dev.rootform.symbolic.solve.Solution;
@@ -223,6 +224,8 @@ public final class Analyzer {
             return new PointValue(at, v.toBigDecimal(new MathContext(digits)),
                     v.isRational() ? Optional.of(v.rational()) : Optional.empty(), v.isRational() ? Optional.empty() : Optional.of(v));
         }
+        certifyRoots(r.rational(), cache, n, digits);
+        certifyRoots(r.radical(), cache, n, digits);
         Apfloat[] value = settledSequence(n, digits, working -> {
             Apfloat root = ApfloatMath.sqrt(new Apfloat(r.radicand(), working));
             Apfloat[] a = SequenceSum.of(r.rational(), cache, working).valueAndLargest(n);
@@ -244,13 +247,32 @@ public final class Analyzer {
             Rational v = s.valueAt(n);
             return new PointValue(at, v.toBigDecimal(new MathContext(wanted)), Optional.of(v));
         }
+        certifyRoots(s, cache, n, wanted);
         Apfloat[] value = settledSequence(n, wanted, working -> SequenceSum.of(s, cache, working).valueAndLargest(n));
         return new PointValue(at, Decimals.toBigDecimal(value[0], wanted), Optional.empty());
     }
 
+    /**
+     * Certifies the roots of s once, at the higher precision of the first round of {@link #settledSequence},
+     * so that both evaluations of that round reuse them (the cache keeps the tightest enclosures; a
+     * root finder run per working precision cost more than the evaluation at n = 10^6).
+     */
+    private static void certifyRoots(ExactSolution s, RootCache cache, long n, int wanted) {
+        for (Component c : s.components()) {
+            if (c.factor().polynomial().degree() > 1) {
+                cache.roots(c.factor().polynomial(), wanted + lostDigits(n) + 2 * WorkingPrecision.GUARD_DIGITS);
+            }
+        }
+    }
+
+    /** Digits that powering to the n-th power loses, about log10|n|. */
+    private static int lostDigits(long n) {
+        return (int) Math.ceil(Math.log10(Math.abs((double) n) + 1));
+    }
+
     /** {value, largest mode} at the first two working precisions that agree; log10|n| digits more to start with. */
     private static Apfloat[] settledSequence(long n, int wanted, java.util.function.IntFunction<Apfloat[]> evaluate) {
-        int lost = (int) Math.ceil(Math.log10(Math.abs((double) n) + 1));
+        int lost = lostDigits(n);
         return WorkingPrecision.settle(wanted + lost, evaluate,
                 (low, high, working) -> WorkingPrecision.agree(low, high, working, wanted),
                 (working, high) -> working + WorkingPrecision.GUARD_DIGITS + lost, "value at n = " + n);

@@ -1,6 +1,5 @@
 package dev.rootform.numeric.roots;
 
-import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.work.Deadline;
 import org.apfloat.Apcomplex;
@@ -33,8 +32,7 @@ final class AberthRefiner {
         this.precision = precision;
         this.coefficients = new Apfloat[p.degree() + 1];
         for (int i = 0; i < coefficients.length; i++) {
-            Rational c = p.coefficient(i);
-            coefficients[i] = new Apfloat(c.numerator(), precision).divide(new Apfloat(c.denominator(), precision));
+            coefficients[i] = Seeds.toApfloat(p.coefficient(i), precision);
         }
         this.tolerance = ApfloatMath.pow(new Apfloat(10, precision), SETTLED_DIGITS - precision);
     }

@@ -107,6 +107,11 @@ public final class Rational implements Comparable<Rational> {
         return denominator.equals(BigInteger.ONE);
     }
 
+    /**
+     * The sum in lowest terms by Henrici's method (Knuth, TAOCP vol. 2, §4.5.1): with d1 = gcd(b, d),
+     * a/b + c/d = (t/d2) / ((b/d1)·(d/d2)) where t = a·(d/d1) + c·(b/d1) and d2 = gcd(t, d1), so no gcd
+     * of the full cross products is needed (none at all when d1 = 1, e.g. for integers).
+     */
     public Rational add(Rational other) {
         if (isZero()) {
             return other;
@@ -114,19 +119,39 @@ public final class Rational implements Comparable<Rational> {
         if (other.isZero()) {
             return this;
         }
-        return of(numerator.multiply(other.denominator).add(other.numerator.multiply(denominator)),
-                denominator.multiply(other.denominator));
+        BigInteger d1 = denominator.gcd(other.denominator);
+        if (d1.equals(BigInteger.ONE)) {
+            return new Rational(numerator.multiply(other.denominator).add(other.numerator.multiply(denominator)),
+                    denominator.multiply(other.denominator));
+        }
+        BigInteger t = numerator.multiply(other.denominator.divide(d1)).add(other.numerator.multiply(denominator.divide(d1)));
+        if (t.signum() == 0) {
+            return ZERO;
+        }
+        BigInteger d2 = t.gcd(d1);
+        return new Rational(t.divide(d2), denominator.divide(d1).multiply(other.denominator.divide(d2)));
     }
 
     public Rational subtract(Rational other) {
         return add(other.negate());
     }
 
+    /**
+     * The product in lowest terms by cross-cancelling first (Knuth, TAOCP vol. 2, §4.5.1):
+     * (a/b)·(c/d) = ((a/g1)·(c/g2)) / ((b/g2)·(d/g1)) with g1 = gcd(a, d), g2 = gcd(c, b), two gcds of
+     * one factor each instead of one of the products.
+     */
     public Rational multiply(Rational other) {
         if (isZero() || other.isZero()) {
             return ZERO;
         }
-        return of(numerator.multiply(other.numerator), denominator.multiply(other.denominator));
+        if (denominator.equals(BigInteger.ONE) && other.denominator.equals(BigInteger.ONE)) {
+            return new Rational(numerator.multiply(other.numerator), BigInteger.ONE);
+        }
+        BigInteger g1 = numerator.gcd(other.denominator);
+        BigInteger g2 = other.numerator.gcd(denominator);
+        return new Rational(numerator.divide(g1).multiply(other.numerator.divide(g2)),
+                denominator.divide(g2).multiply(other.denominator.divide(g1)));
     }
 
     public Rational multiply(long factor) {
@@ -135,7 +160,11 @@ public final class Rational implements Comparable<Rational> {
 
     /** @throws ArithmeticException if {@code other} is zero */
     public Rational divide(Rational other) {
-        return of(numerator.multiply(other.denominator), denominator.multiply(other.numerator));
+        if (other.isZero()) {
+            throw new ArithmeticException("division by zero");
+        }
+        BigInteger sign = BigInteger.valueOf(other.signum());
+        return multiply(new Rational(other.denominator.multiply(sign), other.numerator.abs()));
     }
 
     public Rational negate() {
