@@ -35,7 +35,7 @@ public final class CodeRequests {
                     + String.join(", ", form.freeConstants()));
         }
         boolean sequence = form.domain() == Domain.DIFFERENCE;
-        if (sequence && r.solution().exact().isEmpty() && r.solution().radical().isEmpty()) {
+        if (sequence && r.solution().exact().isEmpty() && r.solution().radical().isEmpty() && r.solution().sinusoid().isEmpty()) {
             return Optional.of("code output needs a fitted solution");
         }
         return Optional.empty();

@@ -22,7 +22,8 @@ import org.apfloat.ApfloatMath;
 
 /**
  * Turns the terms of a fitted {@link ClosedForm} into {@link Wave}s. Every constant is computed
- * from its exact form at {@link #DIGITS} significant digits and rounded once to the nearest double:
+ * from its exact form at {@link #DIGITS} significant digits (a sampled sinusoid's coefficients from cos ω
+ * and sin ω at two working precisions) and rounded once to the nearest double:
  * a·cos x + b·sin x becomes √(a²+b²)·cos(x − atan2(b, a)); a conjugate sum over an irreducible factor
  * uses certified roots ({@link RootFinder}): a real root ρ gives c(ρ)·v^i·ρ^v (or e^{ρv}), a
  * conjugate pair α, ᾱ gives 2|c(α)|·v^i·|α|^v·cos(v·arg α + arg c(α)) (differential:
@@ -130,6 +131,9 @@ final class WaveBuilder {
     static Apfloat exact(Coefficient c) {
         if (c instanceof Coefficient.Exact e) {
             return surd(e.value());
+        }
+        if (c instanceof Coefficient.Trig t) {
+            return apfloat(t.toBigDecimal(CONTEXT));
         }
         throw new AssertionError("free constant " + c);
     }

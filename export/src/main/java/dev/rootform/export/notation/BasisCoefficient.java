@@ -27,6 +27,9 @@ public record BasisCoefficient(String coefficient, String basis, Coefficient val
 
     /** The coefficient rounded to {@code digits} significant digits, or its name when it is free. */
     public String decimal(int digits) {
+        if (value instanceof Coefficient.Trig t) {
+            return Numbers.decimal(t.toBigDecimal(new MathContext(digits + 2)), digits);
+        }
         return value instanceof Coefficient.Exact e
                 ? Numbers.decimal(e.value().toBigDecimal(new MathContext(digits + 2)), digits) : coefficient;
     }

@@ -1,6 +1,7 @@
 package dev.rootform.export.notation;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalFunction;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.closedform.ClosedForm;
@@ -179,8 +180,75 @@ public final class FormulaWriter {
                 String written = surd(m);
                 fs.add(0, fs.isEmpty() || m.isRational() ? written : twoParts(m) ? n.parens(written) : n.clarify(written));
             }
+        } else if (c instanceof Coefficient.Trig trig) {
+            List<Signed> parts = trig.parts().stream().map(p -> trig(p, trig.radicand())).toList();
+            Signed written = parts.size() == 1 ? parts.get(0) : new Signed(false, sum(parts));
+            negative = written.negative();
+            fs.add(0, fs.isEmpty() ? written.body() : n.parens(written.body()));
         }
         return Optional.of(new Signed(negative, fs.stream().reduce(n::times).orElseThrow()));
+    }
+
+    /**
+     * One part a + b·√r of a coefficient, a and b in Q(cos ω)[sin ω], over the common denominator D(cos ω):
+     * (N0 + N1·sin ω + (N2 + N3·sin ω)·√r)/D, every N_k a polynomial in cos ω written term by term;
+     * a sign in front of a lone numerator term is pulled out.
+     */
+    private Signed trig(Coefficient.Trig.Part t, BigInteger radicand) {
+        String omega = number(t.frequency());
+        String cos = n.function("cos", omega);
+        String sin = n.function("sin", omega);
+        String root = n.sqrt(n.number(radicand.toString()));
+        List<RationalFunction> parts = List.of(t.rational().rational(), t.rational().sine(), t.radical().rational(),
+                t.radical().sine());
+        List<List<String>> extra = List.of(List.of(), List.of(sin), List.of(root), List.of(sin, root));
+        RationalPolynomial d = RationalPolynomial.ONE;
+        for (RationalFunction f : parts) {
+            d = d.multiply(f.denominator()).divide(d.gcd(f.denominator()));
+        }
+        List<RationalPolynomial> tops = new ArrayList<>();
+        for (RationalFunction f : parts) {
+            tops.add(f.numerator().multiply(d.divide(f.denominator())));
+        }
+        // integer coefficients without a common factor: (N·L/g)/(D·L/g)
+        List<RationalPolynomial> all = new ArrayList<>(tops);
+        all.add(d);
+        BigInteger lcm = BigInteger.ONE;
+        BigInteger gcd = BigInteger.ZERO;
+        for (RationalPolynomial p : all) {
+            for (Rational q : p.coefficients()) {
+                lcm = lcm.divide(lcm.gcd(q.denominator())).multiply(q.denominator());
+            }
+        }
+        for (RationalPolynomial p : all) {
+            for (Rational q : p.coefficients()) {
+                gcd = gcd.gcd(q.multiply(Rational.of(lcm)).numerator());
+            }
+        }
+        Rational scale = Rational.of(lcm, gcd.signum() == 0 ? BigInteger.ONE : gcd).multiply(Rational.of(d.leadingCoefficient().signum()));
+        List<Signed> pieces = new ArrayList<>();
+        for (int k = 0; k < parts.size(); k++) {
+            RationalPolynomial top = tops.get(k).multiply(scale);
+            for (int i = top.degree(); i >= 0; i--) {
+                List<String> fs = new ArrayList<>();
+                fs.add(power(cos, i));
+                fs.addAll(extra.get(k));
+                product(new Coefficient.Exact(Surd.of(top.coefficient(i))), fs).ifPresent(pieces::add);
+            }
+        }
+        boolean negative = pieces.size() == 1 && pieces.get(0).negative();
+        if (negative) {
+            pieces.replaceAll(Signed::flipped);
+        }
+        String top = sum(pieces);
+        RationalPolynomial bottom = d.multiply(scale);
+        if (bottom.degree() == 0 && bottom.coefficient(0).isOne()) {
+            return new Signed(negative, top);
+        }
+        long terms = bottom.coefficients().stream().filter(q -> !q.isZero()).count();
+        boolean single = terms == 1 && (bottom.degree() == 0 || bottom.leadingCoefficient().isOne());
+        String under = polynomial(bottom, cos);
+        return new Signed(negative, n.fraction(pieces.size() > 1 ? n.clarify(top) : top, single ? under : n.clarify(under)));
     }
 
     /** e^(rate·v) for differential equations, rate^v for difference equations; empty when trivial. */

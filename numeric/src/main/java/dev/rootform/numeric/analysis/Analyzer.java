@@ -102,6 +102,10 @@ public final class Analyzer {
             }
         }
         solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p, cache))));
+        solution.sinusoid().ifPresent(s -> {
+            points.forEach(p -> values.add(SinusoidValues.value(s, p, digits, cache)));
+            checks.add(SinusoidValues.iterationCheck(s, solution.problem().equation(), digits, cache));
+        });
         Optional<ExactSolution> exact = solution.exact();
         exact.ifPresent(s -> points.forEach(p -> values.add(exactValue(s, p, cache))));
         if (solution.problem().equation().domain() == Domain.DIFFERENTIAL) {
@@ -166,6 +170,7 @@ public final class Analyzer {
             points.forEach(p -> values.add(boundaryValue(bvp, p)));
         }
         solution.radical().ifPresent(r -> points.forEach(p -> values.add(radicalValue(r, p, cache))));
+        solution.sinusoid().ifPresent(s -> points.forEach(p -> values.add(SinusoidValues.value(s, p, digits, cache))));
         solution.exact().ifPresent(s -> points.forEach(p -> values.add(exactValue(s, p, cache))));
         return values;
     }

@@ -271,11 +271,19 @@ public final class NumericClaimCheck {
             if (claimed == null) {
                 continue;
             }
-            Surd exact = exactValue(n);
-            Apcomplex x = new Apfloat(exact.toBigDecimal(new MathContext((int) precision)), precision);
+            Apcomplex x;
+            String required;
+            if (solution.sinusoid().isPresent()) {
+                x = new Apfloat(SinusoidValues.value(solution.sinusoid().get(), p, (int) precision, new RootCache()).value(), precision);
+                required = "≈ " + decimal(x);
+            } else {
+                Surd exact = exactValue(n);
+                x = new Apfloat(exact.toBigDecimal(new MathContext((int) precision)), precision);
+                required = exact.toString();
+            }
             Apfloat difference = ApcomplexMath.abs(claimed.subtract(x));
             if (!small(difference, max(ApcomplexMath.abs(claimed), ApcomplexMath.abs(x)))) {
-                return Optional.of(new Mismatch(p.toString(), "≈ " + decimal(claimed), exact.toString(), ""));
+                return Optional.of(new Mismatch(p.toString(), "≈ " + decimal(claimed), required, ""));
             }
         }
         return Optional.empty();

@@ -95,6 +95,9 @@ final class PlotSampler {
             ExactSolution e = s.exact().get();
             total = n -> e.valueAt(n).doubleValue();
             steady = forced ? Optional.of(steadyPart(s, e)) : Optional.empty();
+        } else if (s.sinusoid().isPresent()) {
+            RootCache cache = new RootCache();
+            total = n -> SinusoidValues.value(s.sinusoid().get(), Rational.of(n), Analyzer.SAMPLE_DIGITS, cache).value().doubleValue();
         } else {
             RadicalSolution r = s.radical().orElseThrow(() -> new IllegalStateException("no values for " + s.closedForm()));
             total = n -> r.valueAt(n).toBigDecimal(MathContext.DECIMAL64).doubleValue();

@@ -5,6 +5,7 @@ import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.RadicalSolution;
+import dev.rootform.symbolic.solve.SinusoidSolution;
 import dev.rootform.symbolic.solve.Solution;
 import java.math.MathContext;
 import java.util.List;
@@ -29,7 +30,7 @@ public final class ValueRequests {
      */
     public static Optional<String> refusal(Solution solution, List<Rational> points) {
         if (!points.isEmpty() && solution.exact().isEmpty() && solution.radical().isEmpty()
-                && solution.problem().conditions().isEmpty()) {
+                && solution.sinusoid().isEmpty() && solution.problem().conditions().isEmpty()) {
             return Optional.of("values need conditions: the general solution has free constants");
         }
         boolean sequence = solution.problem().equation().domain() == Domain.DIFFERENCE;
@@ -50,7 +51,7 @@ public final class ValueRequests {
      */
     static Optional<String> refusalOfAnySize(Solution solution, List<Rational> points) {
         if (!points.isEmpty() && solution.exact().isEmpty() && solution.radical().isEmpty()
-                && solution.problem().conditions().isEmpty()) {
+                && solution.sinusoid().isEmpty() && solution.problem().conditions().isEmpty()) {
             return Optional.of("values need conditions: the general solution has free constants");
         }
         Optional<Rational> first = firstIndex(solution);
@@ -78,6 +79,7 @@ public final class ValueRequests {
         if (s.problem().equation().domain() != Domain.DIFFERENCE) {
             return Optional.empty();
         }
-        return s.exact().or(() -> s.radical().map(RadicalSolution::rational)).map(ExactSolution::origin);
+        return s.exact().or(() -> s.radical().map(RadicalSolution::rational)).or(() -> s.sinusoid().map(SinusoidSolution::rest))
+                .map(ExactSolution::origin);
     }
 }

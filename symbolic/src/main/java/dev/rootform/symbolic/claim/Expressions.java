@@ -1,6 +1,8 @@
 package dev.rootform.symbolic.claim;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.closedform.Angle;
 import dev.rootform.symbolic.closedform.ClosedForm;
 import dev.rootform.symbolic.closedform.Coefficient;
@@ -9,6 +11,7 @@ import dev.rootform.symbolic.closedform.Term;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
+import dev.rootform.symbolic.sinusoid.TrigNumber;
 import java.util.List;
 
 /**
@@ -100,7 +103,34 @@ public final class Expressions {
         if (c instanceof Coefficient.Exact e) {
             return surd(e.value());
         }
+        if (c instanceof Coefficient.Trig t) {
+            Expr root = new Expr.Call(Expr.Call.Function.SQRT, number(Rational.of(t.radicand())), NOWHERE);
+            Expr sum = number(Rational.ZERO);
+            for (Coefficient.Trig.Part p : t.parts()) {
+                sum = plus(sum, plus(trig(p.rational(), p.frequency()), times(trig(p.radical(), p.frequency()), root)));
+            }
+            return sum;
+        }
         throw new IllegalArgumentException("free constant " + ((Coefficient.Free) c).name());
+    }
+
+    /** a(c) + b(c)·s with c = cos ω, s = sin ω written as calls, a and b as quotients of polynomials. */
+    private static Expr trig(TrigNumber x, Rational frequency) {
+        Expr cos = new Expr.Call(Expr.Call.Function.COS, number(frequency), NOWHERE);
+        Expr sin = new Expr.Call(Expr.Call.Function.SIN, number(frequency), NOWHERE);
+        return plus(quotient(x.rational(), cos), times(quotient(x.sine(), cos), sin));
+    }
+
+    private static Expr quotient(RationalFunction f, Expr x) {
+        return new Expr.Binary(Expr.Binary.Op.DIVIDE, polynomial(f.numerator(), x), polynomial(f.denominator(), x), NOWHERE);
+    }
+
+    private static Expr polynomial(RationalPolynomial p, Expr x) {
+        Expr sum = number(Rational.ZERO);
+        for (int i = 0; i <= p.degree(); i++) {
+            sum = plus(sum, times(number(p.coefficient(i)), power(x, i)));
+        }
+        return sum;
     }
 
     private static Expr surd(Surd s) {

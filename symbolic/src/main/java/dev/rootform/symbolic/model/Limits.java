@@ -28,6 +28,12 @@ public final class Limits {
     public static final int MAX_FORCING_TERMS = 100;
     /** Size of a sequence index in conditions and values ({@code x[1000000]}). */
     public static final long MAX_INDEX = 1_000_000;
+    /**
+     * Size of a condition's index in a recurrence forced at a frequency ω that is not a rational multiple
+     * of π: cos(kω) is a polynomial of degree k in cos ω, so the exact constants grow with k
+     * (x[100] = 1 takes seconds, x[300] = 1 minutes; measured in README "Input syntax").
+     */
+    public static final long MAX_SINUSOID_INDEX = 100;
     /** Size of a point of a function in conditions and values ({@code y(1e6)}). */
     public static final long MAX_POINT = 1_000_000;
     /** Significant digits of numeric output. */

@@ -1,8 +1,6 @@
 package dev.rootform.symbolic.sinusoid;
 
 import dev.rootform.symbolic.algebra.Rational;
-import dev.rootform.symbolic.algebra.RationalFunction;
-import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -18,6 +16,8 @@ import java.util.Map;
  * q·n^p·r^n·cos(ωn) and q·n^p·r^n·sin(ωn) with ω a nonzero rational (not a rational multiple of
  * π), by undetermined coefficients (common practice) in the basis n^j·r^n·cos(ωn),
  * n^j·r^n·sin(ωn), j ≤ m = the highest p, with constants in Q(c)[s] ({@link TrigNumber}).
+ *
+ * <p>Each frequency has its own field Q(cos ω)[sin ω]; the sum over frequencies is a formal sum.
  *
  * <p>Shifting uses cos(ω(n + d)) = cos(ωn)·cos(dω) − sin(ωn)·sin(dω) and
  * sin(ω(n + d)) = sin(ωn)·cos(dω) + cos(ωn)·sin(dω), with cos(dω) = T_d(c) and
@@ -39,9 +39,15 @@ public final class SinusoidSolver {
         return t.oscillation() != ForcingTerm.Oscillation.NONE && !t.frequencyTimesPi() && !t.frequency().isZero();
     }
 
+    /** True for a recurrence with at least one forcing term this class solves. */
+    public static boolean appliesTo(LinearEquation eq) {
+        return eq.domain() == Domain.DIFFERENCE && eq.forcing().stream().anyMatch(SinusoidSolver::handles);
+    }
+
     /**
-     * One particular solution per (base, frequency) among the forcing terms that {@link #handles};
-     * their sum solves the equation for those terms (other terms are left to the caller).
+     * One particular solution per (base, |frequency|) among the forcing terms that {@link #handles};
+     * their sum solves the equation for those terms (other terms are left to the caller). The constants
+     * of frequency ω lie in Q(cos ω)[sin ω].
      *
      * @throws IllegalArgumentException for a differential equation
      */
@@ -52,7 +58,7 @@ public final class SinusoidSolver {
         Map<List<Rational>, List<ForcingTerm>> groups = new LinkedHashMap<>();
         for (ForcingTerm t : eq.forcing()) {
             if (handles(t)) {
-                groups.computeIfAbsent(List.of(t.exponential(), t.frequency()), k -> new ArrayList<>()).add(t);
+                groups.computeIfAbsent(List.of(t.exponential(), t.frequency().abs()), k -> new ArrayList<>()).add(t);
             }
         }
         List<SinusoidalParticular> result = new ArrayList<>();
@@ -66,7 +72,7 @@ public final class SinusoidSolver {
      */
     public static boolean verifies(LinearEquation eq, SinusoidalParticular p) {
         List<ForcingTerm> terms = eq.forcing().stream()
-                .filter(t -> handles(t) && t.exponential().equals(p.base()) && t.frequency().equals(p.frequency())).toList();
+                .filter(t -> handles(t) && t.exponential().equals(p.base()) && t.frequency().abs().equals(p.frequency())).toList();
         int size = 2 * (p.degree() + 1);
         List<TrigNumber> unknowns = new ArrayList<>(p.cosine());
         unknowns.addAll(p.sine());
@@ -90,13 +96,15 @@ public final class SinusoidSolver {
         return new SinusoidalParticular(frequency, base, List.of(x).subList(0, m + 1), List.of(x).subList(m + 1, 2 * m + 2));
     }
 
-    /** The right-hand side: rows cos_0..cos_m, then sin_0..sin_m. */
+    /** The right-hand side: rows cos_0..cos_m, then sin_0..sin_m (sin(−ωn) = −sin(ωn)). */
     private static TrigNumber[] forcing(List<ForcingTerm> terms, int m) {
         TrigNumber[] f = new TrigNumber[2 * (m + 1)];
         Arrays.fill(f, TrigNumber.ZERO);
         for (ForcingTerm t : terms) {
-            int row = (t.oscillation() == ForcingTerm.Oscillation.COS ? 0 : m + 1) + t.power();
-            f[row] = f[row].add(TrigNumber.of(t.coefficient()));
+            boolean cosine = t.oscillation() == ForcingTerm.Oscillation.COS;
+            int row = (cosine ? 0 : m + 1) + t.power();
+            Rational q = cosine ? t.coefficient() : t.coefficient().multiply(Rational.of(t.frequency().signum()));
+            f[row] = f[row].add(TrigNumber.of(q));
         }
         return f;
     }
@@ -113,8 +121,8 @@ public final class SinusoidSolver {
         }
         for (int k = 0; k < eq.coefficients().size(); k++) {
             int d = eq.shift() + k;
-            TrigNumber cosD = cosineOfMultiple(d);
-            TrigNumber sinD = sineOfMultiple(d);
+            TrigNumber cosD = TrigNumber.cosineOfMultiple(d);
+            TrigNumber sinD = TrigNumber.sineOfMultiple(d);
             Rational scale = eq.coefficients().get(k).multiply(base.pow(d));
             for (int j = 0; j <= m; j++) {
                 for (int i = 0; i <= j; i++) {
@@ -164,36 +172,6 @@ public final class SinusoidSolver {
         Object held = array[i];
         array[i] = array[j];
         array[j] = held;
-    }
-
-    /** cos(dω) = T_|d|(c). */
-    static TrigNumber cosineOfMultiple(int d) {
-        return TrigNumber.of(RationalFunction.of(chebyshev(Math.abs(d), RationalPolynomial.X)));
-    }
-
-    /** sin(dω) = sign(d)·s·U_{|d|−1}(c). */
-    static TrigNumber sineOfMultiple(int d) {
-        if (d == 0) {
-            return TrigNumber.ZERO;
-        }
-        RationalPolynomial u = chebyshev(Math.abs(d) - 1, RationalPolynomial.ofIntegers(0, 2));
-        return TrigNumber.SINE.multiply(TrigNumber.of(RationalFunction.of(u.multiply(Rational.of(Integer.signum(d))))));
-    }
-
-    /** P_k with P_0 = 1, P_1 = {@code first}, P_{k+1} = 2c·P_k − P_{k−1} (T for first = c, U for 2c). */
-    private static RationalPolynomial chebyshev(int k, RationalPolynomial first) {
-        RationalPolynomial previous = RationalPolynomial.ONE;
-        RationalPolynomial current = first;
-        if (k == 0) {
-            return previous;
-        }
-        RationalPolynomial twoC = RationalPolynomial.ofIntegers(0, 2);
-        for (int i = 1; i < k; i++) {
-            RationalPolynomial next = twoC.multiply(current).subtract(previous);
-            previous = current;
-            current = next;
-        }
-        return current;
     }
 
     private static Rational binomial(int n, int k) {

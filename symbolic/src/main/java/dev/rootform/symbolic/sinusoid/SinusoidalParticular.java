@@ -8,7 +8,7 @@ import java.util.Objects;
  * A particular solution Σ_j n^j·r^n·(A_j·cos(ωn) + B_j·sin(ωn)) of a recurrence, with exact
  * constants A_j, B_j in Q(c)[s] (c = cos ω, s = sin ω).
  *
- * @param frequency ω, a nonzero rational
+ * @param frequency ω &gt; 0, a rational
  * @param base r, the nonzero base of the exponential factor (1 when there is none)
  * @param cosine A_0..A_m
  * @param sine B_0..B_m
@@ -23,11 +23,27 @@ public record SinusoidalParticular(Rational frequency, Rational base, List<TrigN
         if (cosine.size() != sine.size()) {
             throw new IllegalArgumentException("as many cosine as sine constants are needed");
         }
+        if (frequency.signum() <= 0) {
+            throw new IllegalArgumentException("the frequency must be positive");
+        }
     }
 
     /** m, the highest power of n. */
     public int degree() {
         return cosine.size() - 1;
+    }
+
+    /** The exact value at n in Q(c)[s], with cos(ωn) = T_n(c) and sin(ωn) = s·U_{n−1}(c). */
+    public TrigNumber valueAt(long n) {
+        TrigNumber cosAtN = TrigNumber.cosineOfMultiple(n);
+        TrigNumber sinAtN = TrigNumber.sineOfMultiple(n);
+        TrigNumber sum = TrigNumber.ZERO;
+        Rational power = Rational.ONE;
+        for (int j = 0; j <= degree(); j++) {
+            sum = sum.add(cosine.get(j).multiply(cosAtN).add(sine.get(j).multiply(sinAtN)).multiply(power));
+            power = power.multiply(Rational.of(n));
+        }
+        return sum.multiply(base.pow(Math.toIntExact(n)));
     }
 
     /**

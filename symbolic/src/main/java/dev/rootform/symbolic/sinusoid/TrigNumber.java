@@ -2,6 +2,7 @@ package dev.rootform.symbolic.sinusoid;
 
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalFunction;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
 import java.util.Objects;
 
 /**
@@ -38,6 +39,54 @@ public record TrigNumber(RationalFunction rational, RationalFunction sine) {
     /** The rational constant q. */
     public static TrigNumber of(Rational q) {
         return of(RationalFunction.of(q));
+    }
+
+    /** cos(dω) = T_|d|(c) (Chebyshev polynomial of the first kind; handbook identity). */
+    public static TrigNumber cosineOfMultiple(long d) {
+        return of(RationalFunction.of(chebyshev(Math.abs(d), RationalPolynomial.X)));
+    }
+
+    /** sin(dω) = sign(d)·s·U_{|d|−1}(c) (Chebyshev polynomial of the second kind; handbook identity). */
+    public static TrigNumber sineOfMultiple(long d) {
+        if (d == 0) {
+            return ZERO;
+        }
+        RationalPolynomial u = chebyshev(Math.abs(d) - 1, RationalPolynomial.ofIntegers(0, 2));
+        return SINE.multiply(of(RationalFunction.of(u.multiply(Rational.of(Long.signum(d))))));
+    }
+
+    /** P_k with P_0 = 1, P_1 = {@code first}, P_{k+1} = 2c·P_k − P_{k−1} (T for first = c, U for 2c). */
+    private static RationalPolynomial chebyshev(long k, RationalPolynomial first) {
+        RationalPolynomial previous = RationalPolynomial.ONE;
+        RationalPolynomial current = first;
+        if (k == 0) {
+            return previous;
+        }
+        RationalPolynomial twoC = RationalPolynomial.ofIntegers(0, 2);
+        for (long i = 1; i < k; i++) {
+            RationalPolynomial next = twoC.multiply(current).subtract(previous);
+            previous = current;
+            current = next;
+        }
+        return current;
+    }
+
+    /** True when this is a rational constant (no c, no s). */
+    public boolean isRational() {
+        return sine.isZero() && rational.denominator().degree() == 0 && rational.numerator().degree() <= 0;
+    }
+
+    /** The rational constant. @throws IllegalStateException unless {@link #isRational} */
+    public Rational toRational() {
+        if (!isRational()) {
+            throw new IllegalStateException(this + " depends on cos ω or sin ω");
+        }
+        return rational.numerator().coefficient(0);
+    }
+
+    /** q·this. */
+    public TrigNumber multiply(Rational q) {
+        return multiply(of(q));
     }
 
     public boolean isZero() {

@@ -27,11 +27,14 @@ import java.util.Optional;
  * @param numericParticular true when the particular solution is a trial form whose constants P1..
  *     are transcendental (forcing with a frequency qπ in a differential equation)
  * @param checks the exact verification steps, all run
+ * @param sinusoid the fitted solution of a recurrence forced by a sampled sinusoid at a rational
+ *     frequency, exact over Q(cos ω)[sin ω] (then {@code exact} and {@code radical} are empty)
  * @since 0.1
  */
 public record Solution(Problem problem, RationalPolynomial characteristic, List<Factor> factors,
         List<ExactRoot> roots, ClosedForm closedForm, ClosedForm general, Optional<ExactSolution> exact,
-        Optional<ExactSolution> particular, Optional<RadicalSolution> radical, boolean numericParticular, List<Check> checks) {
+        Optional<ExactSolution> particular, Optional<RadicalSolution> radical, boolean numericParticular, List<Check> checks,
+        Optional<SinusoidSolution> sinusoid) {
     public Solution {
         Objects.requireNonNull(problem, "problem");
         Objects.requireNonNull(characteristic, "characteristic");
@@ -43,6 +46,15 @@ public record Solution(Problem problem, RationalPolynomial characteristic, List<
         Objects.requireNonNull(particular, "particular");
         Objects.requireNonNull(radical, "radical");
         checks = List.copyOf(checks);
+        Objects.requireNonNull(sinusoid, "sinusoid");
+    }
+
+    /** A solution without a sampled sinusoid. */
+    public Solution(Problem problem, RationalPolynomial characteristic, List<Factor> factors,
+            List<ExactRoot> roots, ClosedForm closedForm, ClosedForm general, Optional<ExactSolution> exact,
+            Optional<ExactSolution> particular, Optional<RadicalSolution> radical, boolean numericParticular, List<Check> checks) {
+        this(problem, characteristic, factors, roots, closedForm, general, exact, particular, radical, numericParticular, checks,
+                Optional.empty());
     }
 
     /**
@@ -52,7 +64,7 @@ public record Solution(Problem problem, RationalPolynomial characteristic, List<
      * are given, else only the trial form's P1..).
      */
     public boolean hasNumericConstants() {
-        return exact.isEmpty() && radical.isEmpty() && (!problem.conditions().isEmpty() || numericParticular);
+        return exact.isEmpty() && radical.isEmpty() && sinusoid.isEmpty() && (!problem.conditions().isEmpty() || numericParticular);
     }
 
     /** True when every check ran and held. */

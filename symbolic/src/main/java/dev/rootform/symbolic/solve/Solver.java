@@ -13,6 +13,7 @@ import dev.rootform.symbolic.model.InputException;
 import dev.rootform.symbolic.model.Limits;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.model.Problem;
+import dev.rootform.symbolic.sinusoid.SinusoidSolver;
 import dev.rootform.symbolic.work.Deadline;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -44,6 +45,9 @@ public final class Solver {
      */
     public static Solution solve(Problem problem) {
         LinearEquation eq = problem.equation();
+        if (SinusoidSolver.appliesTo(eq)) {
+            return SinusoidFit.solve(problem, Solver::solve);
+        }
         RationalPolynomial chi = eq.characteristicPolynomial();
         List<Factor> factors = JasFactorizer.factor(chi);
         boolean trial = eq.domain() == Domain.DIFFERENTIAL && eq.forcing().stream().anyMatch(Solver::transcendentalFrequency);
