@@ -88,4 +88,18 @@ public final class Rootform {
     public static ResponseResult response(ResponseRequest request) {
         return ResponseJob.run(request);
     }
+
+    /**
+     * Solves a problem with parameters exactly over the rational functions in them, split into the
+     * cases where the form of the solution changes, with stability as conditions on the parameters;
+     * checks the cases against the ordinary solver at rational parameter points and, with values,
+     * gives the specialised answer.
+     *
+     * @param request the problem, the parameter names, assumptions, values and options
+     * @return the cases, or why there are none
+     * @since 0.4
+     */
+    public static ParametricResult solveWithParameters(ParametricRequest request) {
+        return ParametricJob.run(request);
+    }
 }

@@ -32,6 +32,16 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--var", paramLabel = "NAME", description = "Independent variable of a differential equation (default t).")
     String variable;
 
+    @Option(names = "--params", paramLabel = "NAMES",
+            description = "Parameters in the equation, comma-separated (e.g. m,c,k): the answer is split into cases over them.")
+    String params;
+
+    @Option(names = "--where", paramLabel = "CONDS", description = "With --params: sign conditions such as \"m > 0, c >= 0, k > 0\".")
+    String where;
+
+    @Option(names = "--at", paramLabel = "VALUES", description = "With --params: values such as \"m=2, c=0.4, k=8\"; adds the answer there.")
+    String at;
+
     @Mixin
     OutputOptions out;
 
@@ -39,6 +49,9 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() {
         try {
             out.check();
+            if (params != null || where != null || at != null) {
+                return ParametricOutput.print(this);
+            }
             return out.print(Rootform.solve(SolveRequest.of(input, given).with(out.options(variable))), UnaryOperator.identity(), spec);
         } catch (InputException e) {
             PrintWriter err = spec.commandLine().getErr();

@@ -46,7 +46,7 @@ import java.util.concurrent.locks.ReentrantLock;
  */
 public final class JasFactorizer {
     /** One JAS factorisation at a time (see the class comment). */
-    private static final ReentrantLock JAS = new ReentrantLock();
+    static final ReentrantLock JAS = new ReentrantLock();
 
     private static final int RECENT_SIZE = 64;
     /**
@@ -129,7 +129,7 @@ public final class JasFactorizer {
     }
 
     /** Takes {@link #JAS}, checking the current deadline while another thread holds it. */
-    private static void lock() {
+    static void lock() {
         JasStartup.waitFor(step -> JAS.tryLock(step, TimeUnit.MILLISECONDS), "waiting to factor");
     }
 

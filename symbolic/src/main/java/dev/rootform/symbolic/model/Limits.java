@@ -37,6 +37,10 @@ public final class Limits {
     /** Size of a point of a function in conditions and values ({@code y(1e6)}). */
     public static final long MAX_POINT = 1_000_000;
     /** Significant digits of numeric output. */
+    /** Parameters declared with --params. */
+    public static final int MAX_PARAMETERS = 12;
+    /** Order of an equation with parameters, including the forcing's annihilator. */
+    public static final int MAX_PARAMETRIC_ORDER = 8;
     public static final int MAX_DIGITS = 10_000;
 
     private Limits() {

@@ -25,12 +25,20 @@ final class Lexer {
 
     private final String source;
     private final int end;
+    /** Declared parameter names, which may carry digits ({@code x0}); empty for an ordinary problem. */
+    private final java.util.Set<String> parameters;
     private int position;
 
     /** A lexer for {@code source.substring(begin, end)}; token offsets refer to the whole source. */
     Lexer(String source, int begin, int end) {
+        this(source, begin, end, java.util.Set.of());
+    }
+
+    /** A lexer that also reads the declared {@code parameters} (letters then letters or digits) as single names. */
+    Lexer(String source, int begin, int end, java.util.Set<String> parameters) {
         this.source = source;
         this.end = end;
+        this.parameters = java.util.Set.copyOf(parameters);
         this.position = begin;
     }
 
@@ -64,6 +72,12 @@ final class Lexer {
         }
         if (c == PI_LETTER) {
             return new Token(Token.Kind.NAME, Names.PI, position, position + 1, null, null);
+        }
+        if (Character.isLetter(c) && !parameters.isEmpty()) {
+            String identifier = run(ch -> ch < 0x80 && Character.isLetterOrDigit(ch));
+            if (parameters.contains(identifier)) {
+                return Token.of(Token.Kind.NAME, identifier, position);
+            }
         }
         if (Character.isLetter(c)) {
             return Token.of(Token.Kind.NAME, run(ch -> Character.isLetter(ch) && ch != PI_LETTER), position);

@@ -13,7 +13,7 @@ import java.util.Optional;
  * forcing terms. Rejects everything that would leave the linear constant-coefficient form,
  * naming the offending term and pointing at its start.
  */
-final class Linearizer {
+final class Linearizer extends NodeEvaluator<Value> {
     /** Bound on integer exponents; the sizes of the results are bounded by {@link Limits}. */
     private static final int MAX_EXPONENT = 10_000;
 
@@ -33,8 +33,9 @@ final class Linearizer {
      * The value of {@code node}, refused when it exceeds a size of {@link Limits} (checked at every
      * node, so that no intermediate result grows beyond them).
      */
+    @Override
     Value evaluate(Node node) {
-        Value value = evaluateNode(node);
+        Value value = dispatch(node);
         bounded(value.forcing(), node);
         if (value.unknown().values().stream().anyMatch(Linearizer::huge)) {
             throw tooLarge(node);
@@ -42,38 +43,24 @@ final class Linearizer {
         return value;
     }
 
-    private Value evaluateNode(Node node) {
-        if (node instanceof Node.Num num) {
-            return constant(num.value());
-        }
-        if (node instanceof Node.Name name) {
-            return name(name);
-        }
-        if (node instanceof Node.Call call) {
-            return call(call);
-        }
-        if (node instanceof Node.Indexed indexed) {
-            return Value.unknown(offset(indexed.index(), indexed), zero);
-        }
-        if (node instanceof Node.Derivative derivative) {
-            return derivative(derivative);
-        }
-        if (node instanceof Node.Negation negation) {
-            return evaluate(negation.operand()).negate();
-        }
-        Node.Binary b = (Node.Binary) node;
-        switch (b.op()) {
-            case ADD:
-                return evaluate(b.left()).add(evaluate(b.right()));
-            case SUB:
-                return evaluate(b.left()).add(evaluate(b.right()).negate());
-            case MUL:
-                return product(b);
-            case DIV:
-                return quotient(b);
-            default:
-                return power(b);
-        }
+    @Override
+    Value number(Node.Num node) {
+        return constant(node.value());
+    }
+
+    @Override
+    Value indexed(Node.Indexed node) {
+        return Value.unknown(offset(node.index(), node), zero);
+    }
+
+    @Override
+    Value negate(Value value) {
+        return value.negate();
+    }
+
+    @Override
+    Value sum(Value left, Value right) {
+        return left.add(right);
     }
 
     /** The offset j of a sequence term x[v + j] or x(v + j). */
@@ -107,7 +94,8 @@ final class Linearizer {
         return Value.of(Forcing.constant(shape.domain(), value));
     }
 
-    private Value name(Node.Name node) {
+    @Override
+    Value name(Node.Name node) {
         String name = node.name();
         if (name.equals(shape.function())) {
             return Value.unknown(0, zero);
@@ -130,7 +118,8 @@ final class Linearizer {
         throw error("unknown name '" + name + "'", node);
     }
 
-    private Value call(Node.Call call) {
+    @Override
+    Value call(Node.Call call) {
         String name = call.name();
         if (name.equals("sin") || name.equals("cos")) {
             return oscillation(call, name.equals("sin") ? Oscillation.SIN : Oscillation.COS);
@@ -152,7 +141,8 @@ final class Linearizer {
         return Value.unknown(0, zero);
     }
 
-    private Value derivative(Node.Derivative d) {
+    @Override
+    Value derivative(Node.Derivative d) {
         if (shape.domain() == Domain.DIFFERENCE) {
             throw error("derivative " + text(d) + " does not fit a recurrence", d);
         }
@@ -168,7 +158,8 @@ final class Linearizer {
         }
     }
 
-    private Value product(Node.Binary b) {
+    @Override
+    Value product(Node.Binary b) {
         if (OperatorEvaluator.isOperator(b.left())) {
             Value operand = evaluate(b.right());
             if (!operand.forcing().isZero() || !operand.hasUnknown()) {
@@ -243,7 +234,8 @@ final class Linearizer {
         return c.pow(n);
     }
 
-    private Value quotient(Node.Binary b) {
+    @Override
+    Value quotient(Node.Binary b) {
         Value divisor = evaluate(b.right());
         if (divisor.hasUnknown()) {
             throw nonlinear(b);
@@ -262,7 +254,8 @@ final class Linearizer {
                 && !name.equals(shape.function());
     }
 
-    private Value power(Node.Binary b) {
+    @Override
+    Value power(Node.Binary b) {
         if (b.left() instanceof Node.Name name && name.name().equals(Names.EULER)) {
             return exponential(b, b.right());
         }

@@ -30,8 +30,13 @@ final class Parser {
      * @param variable the explicit independent variable, or null; it is never read as a derivative in {@code v^(k)}
      */
     Parser(String source, int begin, int end, String variable) {
+        this(source, begin, end, variable, java.util.Set.of());
+    }
+
+    /** A reader that takes the declared {@code parameters} as single names (see {@link Lexer}). */
+    Parser(String source, int begin, int end, String variable, java.util.Set<String> parameters) {
         this.source = source;
-        this.tokens = new Lexer(source, begin, end).tokens();
+        this.tokens = new Lexer(source, begin, end, parameters).tokens();
         this.variable = variable;
     }
 

@@ -92,7 +92,7 @@ public final class ProblemParser {
     }
 
     /** @throws InputException for a text longer than {@link Limits#MAX_INPUT_LENGTH} characters */
-    private static void requireShort(String text) {
+    static void requireShort(String text) {
         if (text.length() > Limits.MAX_INPUT_LENGTH) {
             throw new InputException("input of " + text.length() + " characters: at most " + Limits.MAX_INPUT_LENGTH
                     + " are accepted", text.substring(0, 60), -1);

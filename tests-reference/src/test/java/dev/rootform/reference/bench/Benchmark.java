@@ -38,6 +38,7 @@ public final class Benchmark {
         warm();
         RecoverBenchmark.run();
         AccuracyBenchmark.run();
+        ParametricBenchmark.run();
         cold(Path.of(args.length > 0 ? args[0] : "../rootform"));
         scaling();
         CheckBenchmark.run();
