@@ -53,7 +53,8 @@ final class ParametricOutput {
         String text = format.equals("java") ? ParametricCode.java(solved.report(), names.packageName(), names.className())
                 : format.equals("c") ? ParametricCode.c(solved.report(), names.function())
                 : format.equals("json") ? ParametricJsonRenderer.render(solved.report())
-                : format.equals("latex") ? ParametricLatexRenderer.render(solved.report())
+                : format.equals("latex") ? (command.out.documentOptions().standalone() ? ParametricLatexRenderer.document(solved.report())
+                        : ParametricLatexRenderer.render(solved.report()))
                 : format.equals("mathml") ? ParametricMathMlRenderer.render(solved.report())
                 : ParametricTextRenderer.render(solved.report());
         try {

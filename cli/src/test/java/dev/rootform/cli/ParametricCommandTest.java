@@ -57,6 +57,18 @@ class ParametricCommandTest {
     }
 
     @Test
+    void standaloneLatexIsOneCompleteDocumentWithTheCommentsBeforeThePreamble() {
+        Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0", "--format", "latex",
+                "--standalone");
+        assertEquals(0, r.code(), r.err());
+        String tex = r.out();
+        int preamble = tex.indexOf("\\documentclass[10pt,a4paper]{article}");
+        assertTrue(preamble > 0 && tex.substring(0, preamble).lines().allMatch(l -> l.startsWith("%")), tex);
+        assertTrue(tex.indexOf("\\begin{document}") < tex.indexOf("\\begin{cases}") && tex.strip().endsWith("\\end{document}"), tex);
+        assertTrue(tex.contains("\\text{(1) if }"), tex);
+    }
+
+    @Test
     void mathMlIsWellFormedWithOneTableRowPerCase() throws Exception {
         Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0", "--format", "mathml");
         assertEquals(0, r.code(), r.err());

@@ -18,6 +18,9 @@ import java.util.List;
  * @since 0.2
  */
 public final class LatexRenderer {
+    private static final String PREAMBLE =
+            "\\documentclass[10pt,a4paper]{article}\n\\usepackage{amsmath}\n\\usepackage{amssymb}\n\\begin{document}\n";
+
     /** The widest line of a row, in characters of the plain form (A4 at 10 pt, after the label column). */
     static final int WIDTH = 50;
 
@@ -45,8 +48,23 @@ public final class LatexRenderer {
     public static String document(Report r) {
         String fragment = render(r);
         int body = fragment.indexOf("\\begin{aligned}");
-        return fragment.substring(0, body) + "\\documentclass[10pt,a4paper]{article}\n\\usepackage{amsmath}\n"
-                + "\\usepackage{amssymb}\n\\begin{document}\n\\[\n" + fragment.substring(body) + "\\]\n\\end{document}\n";
+        return fragment.substring(0, body) + PREAMBLE + "\\[\n" + fragment.substring(body) + "\\]\n\\end{document}\n";
+    }
+
+    /**
+     * A fragment of display formulas and comment lines as a complete document: the comment lines
+     * before the first formula stay before the preamble, the rest is the body.
+     */
+    static String document(List<String> fragment) {
+        int body = 0;
+        while (body < fragment.size() && fragment.get(body).startsWith("%")) {
+            body++;
+        }
+        StringBuilder s = new StringBuilder();
+        fragment.subList(0, body).forEach(line -> s.append(line).append('\n'));
+        s.append(PREAMBLE);
+        fragment.subList(body, fragment.size()).forEach(line -> s.append(line).append('\n'));
+        return s.append("\\end{document}\n").toString();
     }
 
     /**

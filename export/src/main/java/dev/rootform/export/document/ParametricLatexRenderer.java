@@ -62,8 +62,16 @@ public final class ParametricLatexRenderer {
         return s.toString();
     }
 
+    /**
+     * The answer as a complete document (article, 10 pt, A4, amsmath and amssymb): the comment lines
+     * of {@link #render} stay before the preamble, the display formulas form the body.
+     */
+    public static String document(ParametricReport r) {
+        return LatexRenderer.document(render(r).lines().toList());
+    }
+
     private static String condition(ParametricCase c, int number) {
-        return "(" + number + ") " + (condition(c).isEmpty() ? "for all parameter values allowed" : "if");
+        return "(" + number + ") " + (condition(c).isEmpty() ? "for all parameter values allowed" : "if ");
     }
 
     /** The case's conditions as one plain formula, joined by commas. */
