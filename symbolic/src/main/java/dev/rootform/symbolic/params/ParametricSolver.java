@@ -182,13 +182,14 @@ public final class ParametricSolver {
         List<ParamFunction> right = new ArrayList<>();
         int forcingRows = functions.size() - problem.order();
         int first = problem.domain() == Domain.DIFFERENCE ? Math.max(0, -problem.shift()) : 0;
+        List<ParamFunction> coefficients = problem.coefficients().stream().map(a -> ModeFinder.over(a, names)).toList();
         for (int i = 0; i < forcingRows; i++) {
             List<ParamFunction> row = new ArrayList<>();
             for (ParamBasis.Function f : unknowns) {
                 ParamFunction sum = ParamFunction.zero(names);
-                for (int j = 0; j < problem.coefficients().size(); j++) {
+                for (int j = 0; j < coefficients.size(); j++) {
                     int at = problem.domain() == Domain.DIFFERENCE ? first + i + problem.shift() + j : i + j;
-                    sum = sum.add(ModeFinder.over(problem.coefficients().get(j), names).multiply(basis.value(f, at)));
+                    sum = sum.add(coefficients.get(j).multiply(basis.value(f, at)));
                 }
                 row.add(sum);
             }
@@ -222,7 +223,7 @@ public final class ParametricSolver {
             if (unknowns.contains(f)) {
                 values.add(solved.get().x().get(u++));
             } else {
-                values.add(ParamFunction.of(dev.rootform.symbolic.algebra.ParamPolynomial.variable(names,
+                values.add(ParamFunction.of(ParamPolynomial.variable(names,
                         names.indexOf(constants.get(c++)))));
             }
         }

@@ -1,6 +1,7 @@
 package dev.rootform.symbolic.sinusoid;
 
 import dev.rootform.symbolic.algebra.Rational;
+import dev.rootform.symbolic.algebra.RationalPolynomial;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.ForcingTerm;
 import dev.rootform.symbolic.model.LinearEquation;
@@ -125,10 +126,10 @@ public final class SinusoidSolver {
             TrigNumber sinD = TrigNumber.sineOfMultiple(d);
             Rational scale = eq.coefficients().get(k).multiply(base.pow(d));
             for (int j = 0; j <= m; j++) {
+                RationalPolynomial shifted = RationalPolynomial.monomial(Rational.ONE, j).shift(Rational.of(d)); // (n + d)^j
                 for (int i = 0; i <= j; i++) {
                     Deadline.checkCurrent();
-                    // (n + d)^j = Σ_i C(j, i)·d^(j−i)·n^i
-                    TrigNumber w = TrigNumber.of(scale.multiply(binomial(j, i)).multiply(Rational.of(d).pow(j - i)));
+                    TrigNumber w = TrigNumber.of(scale.multiply(shifted.coefficient(i)));
                     a[i][j] = a[i][j].add(w.multiply(cosD));
                     a[m + 1 + i][j] = a[m + 1 + i][j].subtract(w.multiply(sinD));
                     a[m + 1 + i][m + 1 + j] = a[m + 1 + i][m + 1 + j].add(w.multiply(cosD));
@@ -172,13 +173,5 @@ public final class SinusoidSolver {
         Object held = array[i];
         array[i] = array[j];
         array[j] = held;
-    }
-
-    private static Rational binomial(int n, int k) {
-        Rational r = Rational.ONE;
-        for (int i = 1; i <= k; i++) {
-            r = r.multiply(Rational.of(n - k + i, i));
-        }
-        return r;
     }
 }

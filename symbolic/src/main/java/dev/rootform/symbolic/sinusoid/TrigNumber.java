@@ -84,9 +84,9 @@ public record TrigNumber(RationalFunction rational, RationalFunction sine) {
         return rational.numerator().coefficient(0);
     }
 
-    /** q·this. */
+    /** q·this: both parts scaled, without the field product. */
     public TrigNumber multiply(Rational q) {
-        return multiply(of(q));
+        return new TrigNumber(rational.multiply(q), sine.multiply(q));
     }
 
     public boolean isZero() {
