@@ -132,7 +132,7 @@ final class OutputOptions {
      * Writes a rendering that the command made itself (an answer other than a solve report) to -o
      * or standard output, and a C header to --header; returns {@code exitCode}.
      */
-    int print(Rendering rendering, int exitCode, CommandSpec spec) throws IOException {
+    int print(Rendering rendering, int exitCode, CommandSpec spec) {
         write(rendering, spec.commandLine().getOut());
         return exitCode;
     }

@@ -12,9 +12,7 @@ import dev.rootform.export.document.ParametricLatexRenderer;
 import dev.rootform.export.document.ParametricMathMlRenderer;
 import dev.rootform.export.document.ParametricTextRenderer;
 import dev.rootform.symbolic.model.InputException;
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.UncheckedIOException;
 import java.util.Optional;
 
 /** {@code solve --params}: the answer with parameters in text or JSON, and its exit code. */
@@ -56,11 +54,7 @@ final class ParametricOutput {
                 : format.equals("latex") ? ParametricLatexRenderer.render(solved.report())
                 : format.equals("mathml") ? ParametricMathMlRenderer.render(solved.report())
                 : ParametricTextRenderer.render(solved.report());
-        try {
-            return command.out.print(new Rendering(text, Optional.empty()), solved.report().verified() ? ExitCode.VERIFIED
-                    : ExitCode.CHECK_FAILED, command.spec);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        return command.out.print(new Rendering(text, Optional.empty()), solved.report().verified() ? ExitCode.VERIFIED
+                : ExitCode.CHECK_FAILED, command.spec);
     }
 }

@@ -7,7 +7,6 @@ import dev.rootform.api.SystemRequest;
 import dev.rootform.api.SystemResult;
 import dev.rootform.export.document.SystemReport;
 import dev.rootform.symbolic.model.InputException;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -65,7 +64,7 @@ final class SystemCommand implements Callable<Integer> {
     }
 
     @Override
-    public Integer call() throws IOException {
+    public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
         try {
             out.check();
