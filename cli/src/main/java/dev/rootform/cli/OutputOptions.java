@@ -137,11 +137,6 @@ final class OutputOptions {
         return exitCode;
     }
 
-    /** The checked names for generated code. @throws InputException for a bad name */
-    CodeNames names() {
-        return codeNames();
-    }
-
     /** @throws InputException for an unknown format, or a layout option the format does not take */
     private Exporter exporter() {
         if (standalone && !format.equals("latex")) {

@@ -32,7 +32,7 @@ final class ParametricOutput {
             throw new InputException("--format " + format + " is not available with --params (text, json, latex, mathml, java, c)",
                     "", -1);
         }
-        CodeNames names = command.out.names();
+        CodeNames names = command.out.codeNames();
         ParametricRequest request = new ParametricRequest(command.input, command.params, command.where == null ? "" : command.where,
                 Optional.ofNullable(command.at), command.out.options(command.variable));
         ParametricResult result = Rootform.solveWithParameters(request);

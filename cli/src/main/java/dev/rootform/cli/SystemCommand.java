@@ -86,7 +86,7 @@ final class SystemCommand implements Callable<Integer> {
                 // a scalar part answered only numerically (the exact path ran out of its time) ends like a time-out
                 return reason instanceof Result.OutOfTime || reason instanceof Result.Numeric ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
             }
-            return out.print(SystemExporters.render(answer.get(), out.format, out.names()),
+            return out.print(SystemExporters.render(answer.get(), out.format, out.codeNames()),
                     result instanceof SystemResult.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED, spec);
         } catch (InputException e) {
             err.println(ErrorLine.describe(e));
