@@ -73,10 +73,8 @@ final class CheckCommand implements Callable<Integer> {
             Options options = Options.builder().digits(digits).timeLimit(Duration.ofSeconds(timeLimit)).variable(variable).build();
             CheckResult result = Rootform.check(new CheckRequest(input, given, claim, options));
             if (result instanceof CheckResult.Unchecked u) {
-                err.println(ErrorLine.describe(u.reason()));
-                err.flush();
-                return u.reason() instanceof Result.OutOfTime || u.reason() instanceof Result.CheckFailed
-                        ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+                return ErrorLine.print(err, ErrorLine.describe(u.reason()), u.reason() instanceof Result.OutOfTime
+                        || u.reason() instanceof Result.CheckFailed ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
             }
             String text = renderer.apply(result.report().orElseThrow());
             PrintWriter out = spec.commandLine().getOut();
@@ -84,9 +82,7 @@ final class CheckCommand implements Callable<Integer> {
             out.flush();
             return result instanceof CheckResult.Holds ? ExitCode.VERIFIED : ExitCode.CLAIM_FAILS;
         } catch (InputException e) {
-            err.println(ErrorLine.describe(e));
-            err.flush();
-            return ExitCode.BAD_INPUT;
+            return ErrorLine.print(err, ErrorLine.describe(e), ExitCode.BAD_INPUT);
         }
     }
 }

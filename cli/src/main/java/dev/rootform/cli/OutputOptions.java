@@ -116,10 +116,8 @@ final class OutputOptions {
         }
         Optional<Report> answer = result.answer();
         if (answer.isEmpty()) {
-            PrintWriter err = spec.commandLine().getErr();
-            err.println(ErrorLine.describe(result));
-            err.flush();
-            return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+            return ErrorLine.print(spec.commandLine().getErr(), ErrorLine.describe(result),
+                    result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
         }
         Exporter exporter = exporter();
         CodeNames names = codeNames();

@@ -12,7 +12,6 @@ import dev.rootform.export.document.ParametricLatexRenderer;
 import dev.rootform.export.document.ParametricMathMlRenderer;
 import dev.rootform.export.document.ParametricTextRenderer;
 import dev.rootform.symbolic.model.InputException;
-import java.io.PrintWriter;
 import java.util.Optional;
 
 /** {@code solve --params}: the answer with parameters in text or JSON, and its exit code. */
@@ -37,10 +36,8 @@ final class ParametricOutput {
                 Optional.ofNullable(command.at), command.out.options(command.variable));
         ParametricResult result = Rootform.solveWithParameters(request);
         if (result instanceof ParametricResult.NotSolved n) {
-            PrintWriter err = command.spec.commandLine().getErr();
-            err.println(ErrorLine.describe(n.result()));
-            err.flush();
-            return n.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+            return ErrorLine.print(command.spec.commandLine().getErr(), ErrorLine.describe(n.result()),
+                    n.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
         }
         ParametricResult.Solved solved = (ParametricResult.Solved) result;
         if (format.equals("java") || format.equals("c")) {
