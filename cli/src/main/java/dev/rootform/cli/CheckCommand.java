@@ -10,7 +10,6 @@ import dev.rootform.export.document.ClaimReport;
 import dev.rootform.export.document.ClaimTextRenderer;
 import dev.rootform.symbolic.model.InputException;
 import java.io.PrintWriter;
-import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -64,13 +63,7 @@ final class CheckCommand implements Callable<Integer> {
             if (renderer == null) {
                 throw new InputException("--format " + format + " is not one of text, json", "", -1);
             }
-            if (digits < 1 || digits > Options.MAX_DIGITS) {
-                throw new InputException("--digits " + digits + " is out of range 1.." + Options.MAX_DIGITS, "", -1);
-            }
-            if (timeLimit < 1) {
-                throw new InputException("--time-limit " + timeLimit + " must be at least 1 second", "", -1);
-            }
-            Options options = Options.builder().digits(digits).timeLimit(Duration.ofSeconds(timeLimit)).variable(variable).build();
+            Options options = OutputOptions.limits(digits, timeLimit).variable(variable).build();
             CheckResult result = Rootform.check(new CheckRequest(input, given, claim, options));
             if (result instanceof CheckResult.Unchecked u) {
                 return ErrorLine.print(err, ErrorLine.describe(u.reason()), u.reason() instanceof Result.OutOfTime

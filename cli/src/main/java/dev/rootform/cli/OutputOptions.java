@@ -157,15 +157,24 @@ final class OutputOptions {
      * @throws InputException for digits or a time limit out of range
      */
     Options options(String variable) {
+        return limits(digits, timeLimit).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
+                .numeric(numeric).variable(variable)
+                .code(format.equals("java") || format.equals("c") || withCode != null).plots(format.equals("html")).build();
+    }
+
+    /**
+     * Solve options with --digits and --time-limit, checked (also for commands without this mixin).
+     *
+     * @throws InputException for digits or a time limit out of range
+     */
+    static Options.Builder limits(int digits, int timeLimit) {
         if (digits < 1 || digits > Options.MAX_DIGITS) {
             throw new InputException("--digits " + digits + " is out of range 1.." + Options.MAX_DIGITS, "", -1);
         }
         if (timeLimit < 1) {
             throw new InputException("--time-limit " + timeLimit + " must be at least 1 second", "", -1);
         }
-        return Options.builder().digits(digits).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
-                .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable)
-                .code(format.equals("java") || format.equals("c") || withCode != null).plots(format.equals("html")).build();
+        return Options.builder().digits(digits).timeLimit(Duration.ofSeconds(timeLimit));
     }
 
     /** --standalone and --with-code as the API takes them. */
