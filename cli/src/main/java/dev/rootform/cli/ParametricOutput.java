@@ -41,9 +41,7 @@ final class ParametricOutput {
         }
         ParametricResult.Solved solved = (ParametricResult.Solved) result;
         if (format.equals("java") || format.equals("c")) {
-            ParametricCode.refusal(solved.report()).ifPresent(m -> {
-                throw new InputException(m, "", -1);
-            });
+            OutputOptions.refuse(ParametricCode.refusal(solved.report()));
         }
         String text = format.equals("java") ? ParametricCode.java(solved.report(), names.packageName(), names.className())
                 : format.equals("c") ? ParametricCode.c(solved.report(), names.function())
