@@ -73,10 +73,9 @@ final class CheckJob {
                             : exact.firstMismatch());
             return checked.holds() ? new CheckResult.Holds(checked) : new CheckResult.Fails(checked);
         } catch (ConditionsException e) {
-            return new CheckResult.Unchecked(e.contradictory() ? new Result.Contradictory(e.getMessage())
-                    : new Result.Underdetermined(e.getMessage(), e.freeSolution()));
+            return new CheckResult.Unchecked(SolveJob.unfit(e));
         } catch (InputException e) {
-            return new CheckResult.Unchecked(new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(), e.position()));
+            return new CheckResult.Unchecked(SolveJob.refused(e));
         } catch (UnsupportedOperationException e) {
             return new CheckResult.Unchecked(new Result.Refused(e.getMessage(), request.claim(), -1));
         }

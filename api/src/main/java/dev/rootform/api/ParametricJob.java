@@ -55,7 +55,7 @@ final class ParametricJob {
             }
             return new ParametricResult.Solved(new ParametricReport(answer, checks, specialised));
         } catch (InputException e) {
-            return new ParametricResult.NotSolved(new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(), e.position()));
+            return new ParametricResult.NotSolved(SolveJob.refused(e));
         }
     }
 }

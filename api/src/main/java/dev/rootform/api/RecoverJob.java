@@ -27,7 +27,7 @@ final class RecoverJob {
             }
             return new Recovery.Recovered(recurrence, Rootform.solve(SolveRequest.of(recurrence.text()).with(request.options())));
         } catch (InputException e) {
-            return new Recovery.NotRecovered(new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(), e.position()));
+            return new Recovery.NotRecovered(SolveJob.refused(e));
         }
     }
 }

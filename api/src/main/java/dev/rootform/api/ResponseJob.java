@@ -83,7 +83,7 @@ final class ResponseJob {
             return new ResponseResult.CheckFailed(answer, Stream.concat(solution.checks().stream(), report.numericChecks().stream())
                     .filter(c -> !c.passed()).map(Check::name).toList());
         } catch (InputException e) {
-            return new ResponseResult.Unanswered(new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(), e.position()));
+            return new ResponseResult.Unanswered(SolveJob.refused(e));
         }
     }
 

@@ -58,11 +58,21 @@ final class SolveJob {
             return new Result.Numeric(NumericFallback.solve(problem, options.digits(), points, "the exact path did not finish within "
                     + share.toMillis() / 1000.0 + " s, its share of the " + options.timeLimit().toSeconds() + " s time limit"));
         } catch (ConditionsException e) {
-            return e.contradictory() ? new Result.Contradictory(e.getMessage())
-                    : new Result.Underdetermined(e.getMessage(), e.freeSolution());
+            return unfit(e);
         } catch (InputException e) {
-            return new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(), e.position());
+            return refused(e);
         }
+    }
+
+    /** The refusal of bad input: its message, the input it names ({@code ""} when none) and the place. */
+    static Result.Refused refused(InputException e) {
+        return new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(), e.position());
+    }
+
+    /** Conditions without one solution: contradictory, or leaving a solution free. */
+    static Result unfit(ConditionsException e) {
+        return e.contradictory() ? new Result.Contradictory(e.getMessage())
+                : new Result.Underdetermined(e.getMessage(), e.freeSolution());
     }
 
     /** The exact path: solve, verify, analyse; bad input and unfit conditions pass through as exceptions. */

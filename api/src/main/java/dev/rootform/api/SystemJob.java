@@ -61,8 +61,7 @@ final class SystemJob {
         try {
             return classify(report(request));
         } catch (InputException e) {
-            return new SystemResult.NoAnswer(new Result.Refused(e.getMessage(), e.source() == null ? "" : e.source(),
-                    e.position()));
+            return new SystemResult.NoAnswer(SolveJob.refused(e));
         } catch (Unsolved e) {
             return new SystemResult.NoAnswer(e.result);
         }

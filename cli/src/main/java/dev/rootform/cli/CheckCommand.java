@@ -10,7 +10,6 @@ import dev.rootform.export.document.ClaimReport;
 import dev.rootform.export.document.ClaimTextRenderer;
 import dev.rootform.symbolic.model.InputException;
 import java.io.PrintWriter;
-import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -64,19 +63,11 @@ final class CheckCommand implements Callable<Integer> {
             if (renderer == null) {
                 throw new InputException("--format " + format + " is not one of text, json", "", -1);
             }
-            if (digits < 1 || digits > Options.MAX_DIGITS) {
-                throw new InputException("--digits " + digits + " is out of range 1.." + Options.MAX_DIGITS, "", -1);
-            }
-            if (timeLimit < 1) {
-                throw new InputException("--time-limit " + timeLimit + " must be at least 1 second", "", -1);
-            }
-            Options options = Options.builder().digits(digits).timeLimit(Duration.ofSeconds(timeLimit)).variable(variable).build();
+            Options options = OutputOptions.limits(digits, timeLimit).variable(variable).build();
             CheckResult result = Rootform.check(new CheckRequest(input, given, claim, options));
             if (result instanceof CheckResult.Unchecked u) {
-                err.println(ErrorLine.describe(u.reason()));
-                err.flush();
-                return u.reason() instanceof Result.OutOfTime || u.reason() instanceof Result.CheckFailed
-                        ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+                return ErrorLine.print(err, ErrorLine.describe(u.reason()), u.reason() instanceof Result.OutOfTime
+                        || u.reason() instanceof Result.CheckFailed ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
             }
             String text = renderer.apply(result.report().orElseThrow());
             PrintWriter out = spec.commandLine().getOut();
@@ -84,9 +75,7 @@ final class CheckCommand implements Callable<Integer> {
             out.flush();
             return result instanceof CheckResult.Holds ? ExitCode.VERIFIED : ExitCode.CLAIM_FAILS;
         } catch (InputException e) {
-            err.println(ErrorLine.describe(e));
-            err.flush();
-            return ExitCode.BAD_INPUT;
+            return ErrorLine.print(err, ErrorLine.describe(e), ExitCode.BAD_INPUT);
         }
     }
 }

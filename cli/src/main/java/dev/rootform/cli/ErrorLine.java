@@ -3,6 +3,7 @@ package dev.rootform.cli;
 import dev.rootform.api.Result;
 import dev.rootform.api.ResultText;
 import dev.rootform.symbolic.model.InputException;
+import java.io.PrintWriter;
 
 /** Formats problems for stderr: one line naming the problem, then the input with a caret under the place. */
 final class ErrorLine {
@@ -10,6 +11,13 @@ final class ErrorLine {
     private static final int WINDOW = 60;
 
     private ErrorLine() {
+    }
+
+    /** Prints {@code line} to {@code err}, flushed, and returns {@code exitCode}. */
+    static int print(PrintWriter err, String line, int exitCode) {
+        err.println(line);
+        err.flush();
+        return exitCode;
     }
 
     /** The error line of a result that carries no answer. */

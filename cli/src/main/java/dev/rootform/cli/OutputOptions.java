@@ -116,10 +116,8 @@ final class OutputOptions {
         }
         Optional<Report> answer = result.answer();
         if (answer.isEmpty()) {
-            PrintWriter err = spec.commandLine().getErr();
-            err.println(ErrorLine.describe(result));
-            err.flush();
-            return result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+            return ErrorLine.print(spec.commandLine().getErr(), ErrorLine.describe(result),
+                    result instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
         }
         Exporter exporter = exporter();
         CodeNames names = codeNames();
@@ -132,14 +130,9 @@ final class OutputOptions {
      * Writes a rendering that the command made itself (an answer other than a solve report) to -o
      * or standard output, and a C header to --header; returns {@code exitCode}.
      */
-    int print(Rendering rendering, int exitCode, CommandSpec spec) throws IOException {
+    int print(Rendering rendering, int exitCode, CommandSpec spec) {
         write(rendering, spec.commandLine().getOut());
         return exitCode;
-    }
-
-    /** The checked names for generated code. @throws InputException for a bad name */
-    CodeNames names() {
-        return codeNames();
     }
 
     /** @throws InputException for an unknown format, or a layout option the format does not take */
@@ -164,15 +157,24 @@ final class OutputOptions {
      * @throws InputException for digits or a time limit out of range
      */
     Options options(String variable) {
+        return limits(digits, timeLimit).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
+                .numeric(numeric).variable(variable)
+                .code(format.equals("java") || format.equals("c") || withCode != null).plots(format.equals("html")).build();
+    }
+
+    /**
+     * Solve options with --digits and --time-limit, checked (also for commands without this mixin).
+     *
+     * @throws InputException for digits or a time limit out of range
+     */
+    static Options.Builder limits(int digits, int timeLimit) {
         if (digits < 1 || digits > Options.MAX_DIGITS) {
             throw new InputException("--digits " + digits + " is out of range 1.." + Options.MAX_DIGITS, "", -1);
         }
         if (timeLimit < 1) {
             throw new InputException("--time-limit " + timeLimit + " must be at least 1 second", "", -1);
         }
-        return Options.builder().digits(digits).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
-                .timeLimit(Duration.ofSeconds(timeLimit)).numeric(numeric).variable(variable)
-                .code(format.equals("java") || format.equals("c") || withCode != null).plots(format.equals("html")).build();
+        return Options.builder().digits(digits).timeLimit(Duration.ofSeconds(timeLimit));
     }
 
     /** --standalone and --with-code as the API takes them. */

@@ -12,9 +12,6 @@ import dev.rootform.export.document.ParametricLatexRenderer;
 import dev.rootform.export.document.ParametricMathMlRenderer;
 import dev.rootform.export.document.ParametricTextRenderer;
 import dev.rootform.symbolic.model.InputException;
-import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.UncheckedIOException;
 import java.util.Optional;
 
 /** {@code solve --params}: the answer with parameters in text or JSON, and its exit code. */
@@ -34,21 +31,17 @@ final class ParametricOutput {
             throw new InputException("--format " + format + " is not available with --params (text, json, latex, mathml, java, c)",
                     "", -1);
         }
-        CodeNames names = command.out.names();
+        CodeNames names = command.out.codeNames();
         ParametricRequest request = new ParametricRequest(command.input, command.params, command.where == null ? "" : command.where,
                 Optional.ofNullable(command.at), command.out.options(command.variable));
         ParametricResult result = Rootform.solveWithParameters(request);
         if (result instanceof ParametricResult.NotSolved n) {
-            PrintWriter err = command.spec.commandLine().getErr();
-            err.println(ErrorLine.describe(n.result()));
-            err.flush();
-            return n.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+            return ErrorLine.print(command.spec.commandLine().getErr(), ErrorLine.describe(n.result()),
+                    n.result() instanceof Result.OutOfTime ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
         }
         ParametricResult.Solved solved = (ParametricResult.Solved) result;
         if (format.equals("java") || format.equals("c")) {
-            ParametricCode.refusal(solved.report()).ifPresent(m -> {
-                throw new InputException(m, "", -1);
-            });
+            OutputOptions.refuse(ParametricCode.refusal(solved.report()));
         }
         String text = format.equals("java") ? ParametricCode.java(solved.report(), names.packageName(), names.className())
                 : format.equals("c") ? ParametricCode.c(solved.report(), names.function())
@@ -57,11 +50,7 @@ final class ParametricOutput {
                         : ParametricLatexRenderer.render(solved.report()))
                 : format.equals("mathml") ? ParametricMathMlRenderer.render(solved.report())
                 : ParametricTextRenderer.render(solved.report());
-        try {
-            return command.out.print(new Rendering(text, Optional.empty()), solved.report().verified() ? ExitCode.VERIFIED
-                    : ExitCode.CHECK_FAILED, command.spec);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        return command.out.print(new Rendering(text, Optional.empty()), solved.report().verified() ? ExitCode.VERIFIED
+                : ExitCode.CHECK_FAILED, command.spec);
     }
 }

@@ -50,7 +50,7 @@ final class RecoverCommand implements Callable<Integer> {
             out.check();
             Recovery recovery = Rootform.recover(new RecoverRequest(terms(), start, out.options(null)));
             if (recovery instanceof Recovery.TooFewTerms few) {
-                return fail(err, "rootform: " + few.message(), ExitCode.BAD_INPUT);
+                return ErrorLine.print(err, "rootform: " + few.message(), ExitCode.BAD_INPUT);
             }
             if (recovery instanceof Recovery.NotRecovered not) {
                 return out.print(not.result(), UnaryOperator.identity(), spec);
@@ -58,7 +58,7 @@ final class RecoverCommand implements Callable<Integer> {
             Recovery.Recovered recovered = (Recovery.Recovered) recovery;
             return out.print(recovered.result(), answer -> RecoveryDocument.render(out.format, recovered.recurrence(), answer), spec);
         } catch (InputException e) {
-            return fail(err, ErrorLine.describe(e), ExitCode.BAD_INPUT);
+            return ErrorLine.print(err, ErrorLine.describe(e), ExitCode.BAD_INPUT);
         }
     }
 
@@ -77,11 +77,5 @@ final class RecoverCommand implements Callable<Integer> {
             throw new InputException("--file " + file + " cannot be read", "", -1);
         }
         return Files.readString(file, StandardCharsets.UTF_8);
-    }
-
-    private static int fail(PrintWriter err, String line, int code) {
-        err.println(line);
-        err.flush();
-        return code;
     }
 }

@@ -6,7 +6,6 @@ import dev.rootform.api.ResponseResult;
 import dev.rootform.api.Rootform;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.symbolic.model.InputException;
-import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.function.UnaryOperator;
@@ -63,10 +62,7 @@ final class ResponseCommand implements Callable<Integer> {
             out.write(renderer.render(report, out.codeNames()), spec.commandLine().getOut());
             return result instanceof ResponseResult.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED;
         } catch (InputException e) {
-            PrintWriter err = spec.commandLine().getErr();
-            err.println(ErrorLine.describe(e));
-            err.flush();
-            return ExitCode.BAD_INPUT;
+            return ErrorLine.print(spec.commandLine().getErr(), ErrorLine.describe(e), ExitCode.BAD_INPUT);
         }
     }
 }

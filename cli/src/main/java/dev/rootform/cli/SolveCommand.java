@@ -3,7 +3,6 @@ package dev.rootform.cli;
 import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
 import dev.rootform.symbolic.model.InputException;
-import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -54,10 +53,7 @@ final class SolveCommand implements Callable<Integer> {
             }
             return out.print(Rootform.solve(SolveRequest.of(input, given).with(out.options(variable))), UnaryOperator.identity(), spec);
         } catch (InputException e) {
-            PrintWriter err = spec.commandLine().getErr();
-            err.println(ErrorLine.describe(e));
-            err.flush();
-            return ExitCode.BAD_INPUT;
+            return ErrorLine.print(spec.commandLine().getErr(), ErrorLine.describe(e), ExitCode.BAD_INPUT);
         }
     }
 }

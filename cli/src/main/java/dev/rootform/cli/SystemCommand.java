@@ -7,7 +7,6 @@ import dev.rootform.api.SystemRequest;
 import dev.rootform.api.SystemResult;
 import dev.rootform.export.document.SystemReport;
 import dev.rootform.symbolic.model.InputException;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -65,7 +64,7 @@ final class SystemCommand implements Callable<Integer> {
     }
 
     @Override
-    public Integer call() throws IOException {
+    public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
         try {
             out.check();
@@ -82,17 +81,14 @@ final class SystemCommand implements Callable<Integer> {
             Optional<SystemReport> answer = result.answer();
             if (answer.isEmpty()) {
                 Result reason = ((SystemResult.NoAnswer) result).reason();
-                err.println(ErrorLine.describe(reason));
-                err.flush();
                 // a scalar part answered only numerically (the exact path ran out of its time) ends like a time-out
-                return reason instanceof Result.OutOfTime || reason instanceof Result.Numeric ? ExitCode.INTERNAL : ExitCode.BAD_INPUT;
+                return ErrorLine.print(err, ErrorLine.describe(reason),
+                        reason instanceof Result.OutOfTime || reason instanceof Result.Numeric ? ExitCode.INTERNAL : ExitCode.BAD_INPUT);
             }
-            return out.print(SystemExporters.render(answer.get(), out.format, out.names()),
+            return out.print(SystemExporters.render(answer.get(), out.format, out.codeNames()),
                     result instanceof SystemResult.CheckFailed ? ExitCode.CHECK_FAILED : ExitCode.VERIFIED, spec);
         } catch (InputException e) {
-            err.println(ErrorLine.describe(e));
-            err.flush();
-            return ExitCode.BAD_INPUT;
+            return ErrorLine.print(err, ErrorLine.describe(e), ExitCode.BAD_INPUT);
         }
     }
 
