@@ -35,10 +35,14 @@ import java.util.Optional;
  *     sample of high-precision values)
  * @param plots also compute the plot data of the report page ({@code Report.plots()}): samples of
  *     the solution over its own time scales and of the frequency response
+ * @param allDigits give a sequence's values at {@code points} exactly with all their digits
+ *     ({@code PointValue.allDigits()}), at indices up to {@link Limits#MAX_EXACT_INDEX} and of up to
+ *     {@link Limits#MAX_EXACT_DIGITS} digits (F(10^7), 2,089,877 digits, takes about a second); the
+ *     sequence's values must be rational, else the result is {@link Result.Refused}
  * @since 0.2
  */
 public record Options(int digits, List<String> points, Duration timeLimit, boolean numeric, Optional<String> variable,
-        boolean code, boolean plots) {
+        boolean code, boolean plots, boolean allDigits) {
     /** Default significant digits. */
     public static final int DEFAULT_DIGITS = 30;
     /** Largest number of significant digits accepted ({@link Limits#MAX_DIGITS}). */
@@ -64,7 +68,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
 
     /**
      * The defaults: 30 digits, no points, 300 s, exact presentation, default variable, no code model,
-     * no plot data.
+     * no plot data, values rounded to the digits.
      *
      * @return the default options
      */
@@ -88,7 +92,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
      */
     public Builder toBuilder() {
         return new Builder().digits(digits).points(points).timeLimit(timeLimit).numeric(numeric)
-                .variable(variable.orElse(null)).code(code).plots(plots);
+                .variable(variable.orElse(null)).code(code).plots(plots).allDigits(allDigits);
     }
 
     /** Collects options; {@link #build()} validates them. Not thread-safe; the built options are. */
@@ -100,6 +104,7 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         private String variable;
         private boolean code;
         private boolean plots;
+        private boolean allDigits;
 
         private Builder() {
         }
@@ -183,12 +188,22 @@ public record Options(int digits, List<String> points, Duration timeLimit, boole
         }
 
         /**
+         * @param allDigits give a sequence's values exactly with all their digits
+         * @return this builder
+         * @since 0.3
+         */
+        public Builder allDigits(boolean allDigits) {
+            this.allDigits = allDigits;
+            return this;
+        }
+
+        /**
          * @return the options collected so far
          * @throws IllegalArgumentException if digits is out of range or the time limit is not
          *     positive
          */
         public Options build() {
-            return new Options(digits, points, timeLimit, numeric, Optional.ofNullable(variable), code, plots);
+            return new Options(digits, points, timeLimit, numeric, Optional.ofNullable(variable), code, plots, allDigits);
         }
     }
 }

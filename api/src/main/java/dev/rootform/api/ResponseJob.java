@@ -63,11 +63,11 @@ final class ResponseJob {
             TransferFacts facts = TransferFacts.of(h);
             ResponsePlan plan = ResponseBuilder.plan(h, input);
             Solution solution = withResponseParts(Solver.solve(plan.problem()), plan);
-            Optional<String> refusal = ValueRequests.refusal(solution, points);
+            Optional<String> refusal = ValueRequests.refusal(solution, points, o.allDigits());
             if (refusal.isPresent()) {
                 return new ResponseResult.Unanswered(new Result.Refused(refusal.get(), "", -1));
             }
-            Analysis analysis = new Analyzer(o.digits(), o.plots()).analyze(solution, points);
+            Analysis analysis = new Analyzer(o.digits(), o.plots(), o.allDigits()).analyze(solution, points);
             Report analysed = new Report(solution, analysis, o.digits(), o.numeric());
             Report report = o.code() && CodeRequests.fitted(analysed).isEmpty() ? analysed.withCode(CodeModels.of(analysed)) : analysed;
             Optional<StepFigures> figures = stepFigures(h, input, facts, solution, o.digits());

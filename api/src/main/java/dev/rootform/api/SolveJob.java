@@ -48,7 +48,7 @@ final class SolveJob {
         try {
             List<Rational> points = Points.parse(options.points());
             Problem problem = problem(request.input(), options);
-            if (NumericFallback.refusal(problem, points).isPresent()) {
+            if (options.allDigits() || NumericFallback.refusal(problem, points).isPresent()) {
                 return exact(problem, points, options);
             }
             Optional<Result> exact = TimeLimit.within(share, () -> Optional.of(exact(problem, points, options)), Optional.empty());
@@ -78,11 +78,11 @@ final class SolveJob {
     /** The exact path: solve, verify, analyse; bad input and unfit conditions pass through as exceptions. */
     private static Result exact(Problem problem, List<Rational> points, Options options) {
         Solution solution = Solver.solve(problem);
-        Optional<String> refusal = ValueRequests.refusal(solution, points);
+        Optional<String> refusal = ValueRequests.refusal(solution, points, options.allDigits());
         if (refusal.isPresent()) {
             return new Result.Refused(refusal.get(), "", -1);
         }
-        Analysis analysis = new Analyzer(options.digits(), options.plots()).analyze(solution, points);
+        Analysis analysis = new Analyzer(options.digits(), options.plots(), options.allDigits()).analyze(solution, points);
         Report report = new Report(solution, analysis, options.digits(), options.numeric());
         boolean code = options.code() && CodeRequests.fitted(report).isEmpty();
         return classify(code ? report.withCode(CodeModels.of(report)) : report);

@@ -13,6 +13,7 @@ import dev.rootform.export.Report;
 import dev.rootform.export.code.Identifiers;
 import dev.rootform.export.document.NumericDocument;
 import dev.rootform.symbolic.model.InputException;
+import dev.rootform.symbolic.model.Limits;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -37,6 +38,10 @@ final class OutputOptions {
 
     @Option(names = "--values-at", paramLabel = "LIST", description = "Comma-separated points at which to print the solution's value, e.g. 0,10,1e3.")
     String valuesAt;
+
+    @Option(names = "--all-digits", description = "Print a sequence's --values-at exactly with all their digits (integers and "
+            + "fractions of any length, up to " + Limits.MAX_EXACT_DIGITS + " digits) instead of rounded to --digits.")
+    boolean allDigits;
 
     @Option(names = "--numeric", description = "Show the constants and roots as decimals to --digits instead of exact forms.")
     boolean numeric;
@@ -158,7 +163,7 @@ final class OutputOptions {
      */
     Options options(String variable) {
         return limits(digits, timeLimit).points(valuesAt == null ? List.of() : List.of(valuesAt.split(",", -1)))
-                .numeric(numeric).variable(variable)
+                .numeric(numeric).allDigits(allDigits).variable(variable)
                 .code(format.equals("java") || format.equals("c") || withCode != null).plots(format.equals("html")).build();
     }
 

@@ -25,9 +25,12 @@ public final class ValueText {
     /**
      * {@code " = 55"} for an exact integer, {@code " = 80.15625"} for an exact value whose decimal ends
      * within {@code digits} significant digits, {@code " = 1/3"} for a short fraction or surd, else
-     * the decimal {@code " ≈ 0.2231"}.
+     * the decimal {@code " ≈ 0.2231"}; a value whose digits were all asked for, with all of them.
      */
     public static String of(PointValue v, int digits) {
+        if (v.allDigits().isPresent()) {
+            return " = " + v.allDigits().get();
+        }
         Optional<String> exact = v.exact().filter(q -> fitsShort(q, EXACT_LIMIT)).flatMap(q -> exactText(q, digits))
                 .or(() -> v.exactSurd().filter(q -> fitsShort(q.rational(), SHORT_FRACTION) && fitsShort(q.coefficient(), SHORT_FRACTION))
                         .map(Object::toString).filter(t -> t.length() <= 2 * SHORT_FRACTION));

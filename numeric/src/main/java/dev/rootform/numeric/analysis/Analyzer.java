@@ -56,6 +56,7 @@ public final class Analyzer {
 
     private final int digits;
     private final boolean plots;
+    private final boolean allDigits;
 
     /** @param digits significant digits of every numeric output, 1 or more */
     public Analyzer(int digits) {
@@ -67,21 +68,33 @@ public final class Analyzer {
      * @param plots also sample the solution and its frequency response for plots ({@link Analysis#plots()})
      */
     public Analyzer(int digits, boolean plots) {
+        this(digits, plots, false);
+    }
+
+    /**
+     * @param digits significant digits of every numeric output, 1 or more
+     * @param plots also sample the solution and its frequency response for plots ({@link Analysis#plots()})
+     * @param allDigits give sequence values exactly with all their digits ({@link PointValue#allDigits()}),
+     *     at indices that {@link ValueRequests#refusal(Solution, List, boolean)} accepts
+     * @since 0.3
+     */
+    public Analyzer(int digits, boolean plots, boolean allDigits) {
         if (digits < 1) {
             throw new IllegalArgumentException("digits (" + digits + ") must be >= 1");
         }
         this.digits = digits;
         this.plots = plots;
+        this.allDigits = allDigits;
     }
 
     /**
      * @param points where to evaluate the solution
-     * @throws IllegalArgumentException if {@link ValueRequests#refusal} refuses the points (a
-     *     general solution, or a sequence at a non-integer index or below its first index); callers
-     *     check first
+     * @throws IllegalArgumentException if {@link ValueRequests#refusal(Solution, List, boolean)} refuses the
+     *     points (a general solution, or a sequence at a non-integer index or below its first index, or
+     *     values with all their digits that cannot be given); callers check first
      */
     public Analysis analyze(Solution solution, List<Rational> points) {
-        ValueRequests.refusal(solution, points).ifPresent(message -> {
+        ValueRequests.refusal(solution, points, allDigits).ifPresent(message -> {
             throw new IllegalArgumentException(message);
         });
         RootCache cache = new RootCache();
@@ -146,7 +159,7 @@ public final class Analyzer {
      * @throws IllegalArgumentException if {@link ValueRequests#refusal} refuses the points
      */
     public List<PointValue> values(Solution solution, List<Rational> points) {
-        ValueRequests.refusal(solution, points).ifPresent(message -> {
+        ValueRequests.refusal(solution, points, allDigits).ifPresent(message -> {
             throw new IllegalArgumentException(message);
         });
         return valuesOfAnySize(solution, points);
@@ -185,7 +198,26 @@ public final class Analyzer {
     }
 
     private PointValue exactValue(ExactSolution s, Rational p, RootCache cache) {
-        return s.domain() == Domain.DIFFERENCE ? sequenceValue(s, p, digits, cache) : FittedFunction.of(s, cache).value(p, digits);
+        if (s.domain() == Domain.DIFFERENCE) {
+            return allDigits ? allDigitsValue(s, p, cache) : sequenceValue(s, p, digits, cache);
+        }
+        return FittedFunction.of(s, cache).value(p, digits);
+    }
+
+    /**
+     * x[n] with all its digits: the exact fraction while it is estimated at no more than
+     * {@link #EXACT_SIZE_LIMIT} digits, else by {@link IndexPowering} (then without the binary
+     * fraction, see {@link PointValue#allDigits()}).
+     */
+    private PointValue allDigitsValue(ExactSolution s, Rational at, RootCache cache) {
+        long n = at.toBigInteger().longValueExact();
+        MathContext rounding = new MathContext(digits);
+        if (n < s.validFrom() || SequenceSum.exactDigits(s, n, cache) <= EXACT_SIZE_LIMIT) {
+            Rational v = s.valueAt(n);
+            return new PointValue(at, v.toBigDecimal(rounding), Optional.of(v), Optional.empty(), Optional.of(ExactDigits.of(v)));
+        }
+        ExactDigits v = IndexPowering.value(s, n);
+        return new PointValue(at, v.toBigDecimal(rounding), Optional.empty(), Optional.empty(), Optional.of(v));
     }
 
     /**

@@ -7,6 +7,7 @@ import dev.rootform.symbolic.solve.ExactSolution;
 import dev.rootform.symbolic.solve.RadicalSolution;
 import dev.rootform.symbolic.solve.SinusoidSolution;
 import dev.rootform.symbolic.solve.Solution;
+import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.List;
 import java.util.Optional;
@@ -34,14 +35,58 @@ public final class ValueRequests {
             return Optional.of("values need conditions: the general solution has free constants");
         }
         boolean sequence = solution.problem().equation().domain() == Domain.DIFFERENCE;
-        long limit = sequence ? Limits.MAX_INDEX : Limits.MAX_POINT;
+        return beyond(points, sequence ? Limits.MAX_INDEX : Limits.MAX_POINT, sequence ? "indices" : "points")
+                .or(() -> refusalOfAnySize(solution, points));
+    }
+
+    /**
+     * {@link #refusal}, or when {@code allDigits}, why the values cannot be given exactly with all
+     * their digits: only a sequence with rational values has them (not a function, not values in
+     * Q(√r) or with cos ω of a frequency that is not a rational multiple of π, not constants known only
+     * numerically), at indices up to {@link Limits#MAX_EXACT_INDEX} and of at most
+     * {@link Limits#MAX_EXACT_DIGITS} digits (estimated from the largest root modulus).
+     *
+     * @since 0.3
+     */
+    public static Optional<String> refusal(Solution solution, List<Rational> points, boolean allDigits) {
+        if (!allDigits || points.isEmpty()) {
+            return refusal(solution, points);
+        }
+        if (solution.problem().equation().domain() != Domain.DIFFERENCE) {
+            return Optional.of("values with all their digits are for sequences: a function's values are irrational in general");
+        }
+        if (solution.hasNumericConstants() || solution.exact().isEmpty()) {
+            String why = solution.radical().isPresent() ? "they lie in Q(√" + solution.radical().get().radicand() + ")"
+                    : solution.sinusoid().isPresent() ? "the forcing's cos ω, sin ω are transcendental"
+                    : solution.hasNumericConstants() ? "the constants are known only numerically"
+                    : "the general solution has free constants";
+            return Optional.of("values with all their digits need exact rational values: " + why);
+        }
+        Optional<String> refused = beyond(points, Limits.MAX_EXACT_INDEX, "indices").or(() -> refusalOfAnySize(solution, points));
+        if (refused.isPresent()) {
+            return refused;
+        }
+        ExactSolution s = solution.exact().get();
+        RootCache cache = new RootCache();
         for (Rational at : points) {
-            if (at.abs().compareTo(Rational.of(limit)) > 0) {
-                return Optional.of("value at " + shown(at) + ": " + (sequence ? "indices" : "points") + " up to " + limit
-                        + " in size are accepted");
+            long n = at.toBigInteger().longValueExact();
+            double size = n < s.validFrom() ? 0 : SequenceSum.exactDigits(s, n, cache);
+            if (size > Limits.MAX_EXACT_DIGITS) {
+                return Optional.of("value at " + shown(at) + ": about " + new BigDecimal(size).round(new MathContext(2)).toString()
+                        + " digits, more than the " + Limits.MAX_EXACT_DIGITS + " that a value with all its digits may have");
             }
         }
-        return refusalOfAnySize(solution, points);
+        return Optional.empty();
+    }
+
+    /** The first point larger than {@code limit} in size, refused; empty when none is. */
+    private static Optional<String> beyond(List<Rational> points, long limit, String what) {
+        for (Rational at : points) {
+            if (at.abs().compareTo(Rational.of(limit)) > 0) {
+                return Optional.of("value at " + shown(at) + ": " + what + " up to " + limit + " in size are accepted");
+            }
+        }
+        return Optional.empty();
     }
 
     /**

@@ -36,12 +36,22 @@ public final class Limits {
     public static final long MAX_SINUSOID_INDEX = 100;
     /** Size of a point of a function in conditions and values ({@code y(1e6)}). */
     public static final long MAX_POINT = 1_000_000;
-    /** Significant digits of numeric output. */
     /** Parameters declared with --params. */
     public static final int MAX_PARAMETERS = 12;
     /** Order of an equation with parameters, including the forcing's annihilator. */
     public static final int MAX_PARAMETRIC_ORDER = 8;
+    /** Significant digits of numeric output. */
     public static final int MAX_DIGITS = 10_000;
+    /**
+     * Size of a sequence index whose value is asked for with all its digits ({@code --all-digits}); the
+     * value's own size, {@link #MAX_EXACT_DIGITS}, is the bound that usually decides.
+     */
+    public static final long MAX_EXACT_INDEX = 1_000_000_000;
+    /**
+     * Digits of one value given with all its digits, estimated before it is computed (F(10^7) has
+     * 2,089,877). Beyond about 10^7 digits apfloat would keep the numbers in temporary files.
+     */
+    public static final long MAX_EXACT_DIGITS = 5_000_000;
 
     private Limits() {
     }

@@ -7,6 +7,7 @@ import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Report;
+import dev.rootform.reference.FastDoubling;
 import java.lang.invoke.MethodHandle;
 import java.lang.management.ManagementFactory;
 import java.lang.management.ThreadMXBean;
@@ -25,6 +26,9 @@ import javax.tools.ToolProvider;
  * The value and generated-code rows of issue 17 (a plain main, not a test; started by the
  * {@code bench} profile with {@code -Dbench.class=dev.rootform.reference.bench.ValueBenchmark}):
  * <ul>
+ * <li>exact values with all their digits through {@link Rootform#solve}: F(10^7) (the first call in
+ * this JVM, then warm; its 2,089,877 digits compared with fast doubling), the Pell number P(10^7) and
+ * the rational root 241/240 at n = 10^6 (a 4.8-million-digit fraction);
  * <li>warm whole jobs through {@link Rootform#solve} with a value at n = 10^6 to 50 digits
  * (Fibonacci, the rational root 241/240, the surds 1 ± √2);
  * <li>the generated Java {@code term(n)} against plain fast doubling on {@code BigInteger} at
@@ -32,8 +36,7 @@ import javax.tools.ToolProvider;
  * <li>the generated double evaluator {@code value(n)} against naive double iteration at n = 10^6,
  * for Fibonacci and for a decaying oscillation whose value there is finite.
  * </ul>
- * {@code -Dbench.parts=values,term,evaluator} picks the parts. The fast-doubling formulas F(2k) = F(k)·(2F(k+1) − F(k)), F(2k+1) = F(k)² + F(k+1)² are a
- * handbook identity (Knuth, TAOCP vol. 1, §1.2.8, eq. 15 with m = k, n = k + 1).
+ * {@code -Dbench.parts=values,term,evaluator} picks the parts. Fast doubling is {@link FastDoubling}.
  */
 public final class ValueBenchmark {
     private static final int WARM_UP = 3;
@@ -47,7 +50,10 @@ public final class ValueBenchmark {
     public static void main(String[] args) throws Throwable {
         System.out.printf("value and generated-code benchmark — Java %s, %d CPUs%n", System.getProperty("java.version"),
                 Runtime.getRuntime().availableProcessors());
-        String parts = System.getProperty("bench.parts", "values,term,evaluator");
+        String parts = System.getProperty("bench.parts", "all,values,term,evaluator");
+        if (parts.contains("all")) {
+            allDigits();
+        }
         if (parts.contains("values")) {
             values();
         }
@@ -77,6 +83,24 @@ public final class ValueBenchmark {
             time(new Job(problem[0] + " without values", problem[1], none));
             System.out.println("    x[10^6] = " + shown);
         }
+    }
+
+    private static void allDigits() {
+        Options huge = Options.builder().points(Long.toString(HUGE)).allDigits(true).build();
+        String fibonacci = "x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1";
+        long start = System.nanoTime();
+        Result first = Rootform.solve(SolveRequest.of(fibonacci).with(huge));
+        String digits = first.answer().orElseThrow(() -> new IllegalStateException(first.toString())).values().get(0).exactText().orElseThrow();
+        long end = System.nanoTime();
+        System.out.printf("exact values with all their digits through Rootform.solve%n  F(10^7), first call in this JVM, "
+                + "with its text: %.0f ms wall (%d digits)%n", (end - start) / 1e6, digits.length());
+        if (!digits.equals(FastDoubling.fibonacci(HUGE).toString())) {
+            throw new IllegalStateException("F(10^7) differs from fast doubling");
+        }
+        time(new Job("F(10^7), all digits (warm)", fibonacci, huge));
+        time(new Job("Pell P(10^7), all digits (warm)", "x[n+2] = 2x[n+1] + x[n]; x[0] = 0; x[1] = 1", huge));
+        time(new Job("x[n+1] = 241/240 x[n] - 1 at n = 10^6, all digits (warm)", "x[n+1] = 241/240 x[n] - 1; x[0] = 100",
+                Options.builder().points(Long.toString(N)).allDigits(true).build()));
     }
 
     /** CPU time of the calling thread, in nanoseconds (steadier than the wall clock on a shared machine). */
@@ -111,7 +135,7 @@ public final class ValueBenchmark {
         Generated fib = Generated.of("x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1", "Fib");
         MethodHandle term = fib.handle("term", MethodType.methodType(BigInteger.class, long.class));
         BigInteger warm = (BigInteger) term.invokeExact(100_000L);
-        if (!warm.equals(fastDoubling(100_000L))) {
+        if (!warm.equals(FastDoubling.fibonacci(100_000L))) {
             throw new IllegalStateException("term(10^5) differs from fast doubling");
         }
         Timings generated = new Timings();
@@ -121,7 +145,7 @@ public final class ValueBenchmark {
             long t0 = cpuNanos();
             BigInteger a = (BigInteger) term.invokeExact(HUGE);
             long t1 = cpuNanos();
-            BigInteger b = fastDoubling(HUGE);
+            BigInteger b = FastDoubling.fibonacci(HUGE);
             long t2 = cpuNanos();
             if (!a.equals(b)) {
                 throw new IllegalStateException("term(10^7) differs from fast doubling");
@@ -196,24 +220,6 @@ public final class ValueBenchmark {
             a = b;
             b = d;
             d = next;
-        }
-        return a;
-    }
-
-    /** F(n) by fast doubling on BigInteger (the identities in the class comment). */
-    static BigInteger fastDoubling(long n) {
-        BigInteger a = BigInteger.ZERO;
-        BigInteger b = BigInteger.ONE;
-        for (int bit = 63 - Long.numberOfLeadingZeros(n); bit >= 0; bit--) {
-            BigInteger c = a.multiply(b.shiftLeft(1).subtract(a));
-            BigInteger d = a.multiply(a).add(b.multiply(b));
-            if ((n >>> bit & 1L) == 0) {
-                a = c;
-                b = d;
-            } else {
-                a = d;
-                b = c.add(d);
-            }
         }
         return a;
     }
