@@ -20,7 +20,7 @@ import java.util.function.UnaryOperator;
 
 /**
  * The fields of every command that gives a solve answer, named like the command-line options in
- * camelCase: {@code digits}, {@code valuesAt}, {@code numeric}, {@code timeLimit} (seconds),
+ * camelCase: {@code digits}, {@code valuesAt}, {@code allDigits}, {@code numeric}, {@code timeLimit} (seconds),
  * {@code format} (default {@code json}) and the names of generated code {@code class},
  * {@code package}, {@code function}, {@code header}; and the answer they shape.
  */
@@ -40,6 +40,7 @@ final class OutputFields {
                 .digits(f.integer("digits", Options.DEFAULT_DIGITS, 1, Options.MAX_DIGITS))
                 .points(f.texts("valuesAt", true))
                 .numeric(f.flag("numeric"))
+                .allDigits(f.flag("allDigits"))
                 .timeLimit(f.seconds("timeLimit").orElse(defaultTimeLimit))
                 .code(code);
     }

@@ -50,6 +50,17 @@ class BatchRequestTest {
         assertEquals("96", j.get("values").get(0).get("exact").asText());
     }
 
+    /** 3·2^70000 has 21,073 digits: the exact form is given beyond 20,000 digits only when all digits are asked for. */
+    @Test
+    void allDigitsGivesTheExactValueBeyondTheUsualSize() throws Exception {
+        String line = "{\"problem\": \"x[n+1] = 2x[n]; x[0] = 3\", \"valuesAt\": \"70000\"";
+        JsonNode rounded = json(answer(line + "}")).get("values").get(0);
+        assertTrue(rounded.get("exact").isNull(), rounded.toString());
+        JsonNode all = json(answer(line + ", \"allDigits\": true}")).get("values").get(0);
+        // 3·2^n (common practice)
+        assertEquals(java.math.BigInteger.valueOf(3).shiftLeft(70000).toString(), all.get("exact").asText());
+    }
+
     @ParameterizedTest(name = "[{index}] {0}")
     @CsvSource(delimiter = '|', textBlock = """
         {"id": "b", "problem": "x[n+1] = x[n]; x[0] = 1", "digts": 3}    | unknown field "digts" for solve

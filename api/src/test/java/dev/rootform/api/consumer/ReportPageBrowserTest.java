@@ -59,6 +59,16 @@ class ReportPageBrowserTest {
         BrowserProbe.load("html", "forced-underdamped-with-c", html);
     }
 
+    /** A value with all its digits (F(3000), 627 digits) wraps inside the values table instead of widening the page. */
+    @Test
+    void longValueWrapsWithinThePage() throws Exception {
+        Report report = Rootform.solve(SolveRequest.of("x[n+2] = x[n+1] + x[n]; x[0] = 0; x[1] = 1")
+                .with(Options.builder().points("3000").plots(true).allDigits(true).build())).answer().orElseThrow();
+        String html = Exporters.byName("html").orElseThrow().render(report, CodeNames.defaults()).text();
+        assertTrue(html.contains(report.values().get(0).allDigits().orElseThrow().toString()), "the digits are missing");
+        BrowserProbe.load("html", "all-digits", html);
+    }
+
     @Test
     void printsWholeOnA4AndLetter() throws Exception {
         String html = PageCorpus.render(PageCorpus.UNDERDAMPED, "html", DocumentOptions.defaults());
