@@ -214,18 +214,22 @@ final class IndexPowering {
     }
 
     /**
-     * n / base^k for the largest k ≤ the power's exponent with base^k dividing n: squares
-     * base^(2^i) up to the exponent, then takes them greedily from the largest.
+     * n / base^k for the largest k ≤ the power's exponent with base^k dividing n: divides by base,
+     * base², base⁴, … while they divide (so a small k, the usual case, costs only divisions by small
+     * numbers), then by the same squares from the largest down while they fit.
      */
     private static Divided divideOut(Apint n, Power p) {
         List<Apint> squares = new ArrayList<>();
         Apint square = new Apint(p.base());
-        for (long step = 1; step <= p.exponent() && square.scale() <= n.scale(); step <<= 1) {
+        long k = 0;
+        Apint rest = n;
+        for (long step = 1; k + step <= p.exponent() && rest.mod(square).signum() == 0; step <<= 1) {
+            Deadline.checkCurrent();
+            rest = rest.divide(square);
+            k += step;
             squares.add(square);
             square = square.multiply(square);
         }
-        long k = 0;
-        Apint rest = n;
         for (int i = squares.size() - 1; i >= 0; i--) {
             Deadline.checkCurrent();
             long step = 1L << i;
