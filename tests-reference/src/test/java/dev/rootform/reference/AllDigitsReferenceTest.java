@@ -7,6 +7,7 @@ import dev.rootform.api.Options;
 import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
+import dev.rootform.numeric.analysis.ExactDigits;
 import dev.rootform.numeric.analysis.PointValue;
 import java.math.BigInteger;
 import org.junit.jupiter.api.Test;
@@ -30,6 +31,7 @@ class AllDigitsReferenceTest {
         String expected = FastDoubling.fibonacci(1_000_000).toString();
         assertEquals(208_988, expected.length());
         assertEquals(expected, v.allDigits().orElseThrow().toString());
+        assertEquals(208_988, v.allDigits().orElseThrow().digitCount());
         assertTrue(v.exact().isEmpty(), "the binary fraction was computed");
     }
 
@@ -59,7 +61,9 @@ class AllDigitsReferenceTest {
         BigInteger b240 = BigInteger.valueOf(240);
         BigInteger numerator = BigInteger.valueOf(12).multiply(b240.pow(n)).subtract(BigInteger.valueOf(7).multiply(BigInteger.valueOf(241).pow(n)));
         BigInteger denominator = BigInteger.valueOf(12).multiply(b240.pow(n - 1));
-        assertEquals(numerator + "/" + denominator, value("x[n+1] = 241/240 x[n] - 1; x[0] = 100", n).allDigits().orElseThrow().toString());
+        ExactDigits v = value("x[n+1] = 241/240 x[n] - 1; x[0] = 100", n).allDigits().orElseThrow();
+        assertEquals(numerator + "/" + denominator, v.toString());
+        assertEquals(numerator.toString().length() - 1 + denominator.toString().length(), v.digitCount(), "digits without the sign");
     }
 
     /** Halving toward 2: x[n+1] = x[n]/2 + 1, x[0] = 0 is the geometric sum 2 − 2^(1−n) = (2^n − 1)/2^(n−1) (common practice). */
