@@ -43,6 +43,8 @@ final class IndexPowering {
     private record Divided(Apint rest, long k) {
     }
 
+    private static final Apint MINUS_ONE = new Apint(-1);
+
     private IndexPowering() {
     }
 
@@ -142,7 +144,6 @@ final class IndexPowering {
         int d = a.length;
         Apint[] c = new Apint[2 * d - 1];
         Arrays.fill(c, Apint.ZERO);
-        Apint two = new Apint(2);
         for (int i = 0; i < d; i++) {
             if (a[i].signum() == 0) {
                 continue;
@@ -150,7 +151,8 @@ final class IndexPowering {
             c[2 * i] = c[2 * i].add(a[i].multiply(a[i]));
             for (int j = i + 1; j < d; j++) {
                 if (a[j].signum() != 0) {
-                    c[i + j] = c[i + j].add(a[i].multiply(a[j]).multiply(two));
+                    Apint product = a[i].multiply(a[j]);
+                    c[i + j] = c[i + j].add(product).add(product);
                 }
             }
         }
@@ -167,8 +169,13 @@ final class IndexPowering {
                 continue;
             }
             for (int i = 0; i < d; i++) {
-                if (g[i].signum() != 0) {
-                    r[top - d + i] = r[top - d + i].subtract(g[i].equals(Apint.ONE) ? t : t.multiply(g[i]));
+                Apint lower = r[top - d + i];
+                if (g[i].equals(Apint.ONE)) {
+                    r[top - d + i] = lower.subtract(t);
+                } else if (g[i].equals(MINUS_ONE)) {
+                    r[top - d + i] = lower.add(t);
+                } else if (g[i].signum() != 0) {
+                    r[top - d + i] = lower.subtract(t.multiply(g[i]));
                 }
             }
         }
