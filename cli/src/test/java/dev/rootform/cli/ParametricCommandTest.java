@@ -52,7 +52,8 @@ class ParametricCommandTest {
         Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0", "--format", "latex");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("y\\left(t\\right) = \\begin{cases}") || r.out().contains("= \\begin{cases}"), r.out());
-        assertEquals(2, r.out().split("\\\\\\\\\n", -1).length - 1, r.out());
+        String cases = r.out().substring(r.out().indexOf("\\begin{cases}"), r.out().indexOf("\\end{cases}"));
+        assertEquals(3, cases.split("\\\\text\\{\\(\\d\\) ", -1).length - 1, r.out());
         assertTrue(r.out().contains("\\end{cases}") && r.out().contains("\\sqrt{") && r.out().contains("\\omega_{1}"), r.out());
     }
 
