@@ -8,6 +8,7 @@ import dev.rootform.export.document.ParametricLatexRenderer;
 import dev.rootform.export.document.ParametricMathMlRenderer;
 import dev.rootform.export.document.ParametricReport;
 import dev.rootform.export.document.ParametricTextRenderer;
+import dev.rootform.export.html.HtmlRenderer;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -19,8 +20,10 @@ import java.util.function.Function;
 /**
  * The renderers of an answer with parameters ({@link ParametricReport}) by format name: {@code text},
  * {@code json}, {@code latex} (a fragment, or a complete document with
- * {@link DocumentOptions#standalone()}), {@code mathml}, and {@code java}, {@code c}: one function of
- * the parameters and the variable, refused for a general solution or an answer without cases.
+ * {@link DocumentOptions#standalone()}), {@code mathml}, {@code html} (the report page: the case
+ * table, the case formulas, the stability conditions and the checks), and {@code java}, {@code c}:
+ * one function of the parameters and the variable, refused for a general solution or an answer
+ * without cases.
  *
  * <pre>{@code
  * ParametricResult r = Rootform.solveWithParameters(ParametricRequest.of("x[n+1] = a x[n] + 1; x[0] = 0", "a"));
@@ -73,9 +76,26 @@ public final class ParametricExporters {
         map.put("json", document(ParametricJsonRenderer::render));
         map.put("latex", document(o.standalone() ? ParametricLatexRenderer::document : ParametricLatexRenderer::render));
         map.put("mathml", document(ParametricMathMlRenderer::render));
+        map.put("html", page(o.withCode()));
         map.put("java", code((r, n) -> ParametricCode.java(r, n.packageName(), n.className())));
         map.put("c", code((r, n) -> ParametricCode.c(r, n.function())));
         return Collections.unmodifiableMap(map);
+    }
+
+    /** The report page; it carries no code, so a page with code ({@link DocumentOptions#withCode()}) is refused. */
+    private static Renderer page(Optional<String> code) {
+        return new Renderer() {
+            @Override
+            public Optional<String> refusal(ParametricReport report) {
+                return code.map(language -> "the page of an answer with parameters carries no code: write the " + language
+                        + " code with its own format");
+            }
+
+            @Override
+            public Rendering render(ParametricReport report, CodeNames names) {
+                return Rendering.of(HtmlRenderer.render(report));
+            }
+        };
     }
 
     private static Renderer document(Function<ParametricReport, String> writer) {

@@ -81,6 +81,24 @@ class ParametricCommandTest {
     }
 
     @Test
+    void htmlIsAReportPageWithTheCaseTableAndTheAnswerAtTheValues(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        java.nio.file.Path page = dir.resolve("mast.html");
+        Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0",
+                "--at", "m=2, c=0.4, k=8, x0=0.01, v0=0", "--values-at", "1", "--format", "html", "-o", page.toString());
+        assertEquals(0, r.code(), r.err());
+        String html = java.nio.file.Files.readString(page);
+        assertTrue(html.startsWith("<!DOCTYPE html>") && html.contains("</html>"), html);
+        for (String part : new String[] {"<h2>Cases</h2>", "<th>holds</th>", "<h2>Stability</h2>", "c &gt; 0", "Case 1 holds",
+                "<th>point</th>"}) {
+            assertTrue(html.contains(part), "the page lacks " + part);
+        }
+        Run code = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--format", "html", "--with-code", "java");
+        assertEquals(2, code.code(), code.err());
+        assertTrue(code.err().contains("carries no code"), code.err());
+    }
+
+    @Test
     void generatedJavaBranchesOnTheCaseAndMatchesTheOrdinarySolver(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
             throws Exception {
         Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0", "--format", "java",

@@ -60,7 +60,7 @@ class ParametricLineTest {
     }
 
     @ParameterizedTest(name = "{0}")
-    @ValueSource(strings = {"text", "latex", "mathml", "java", "c"})
+    @ValueSource(strings = {"text", "latex", "mathml", "html", "java", "c"})
     void otherFormatsCarryTheDirectCallsText(String format) throws Exception {
         // x[n+1] = a x[n] + 1, x[0] = 0: (a^n − 1)/(a − 1) for a ≠ 1 and n for a = 1 (geometric sum, common practice)
         JsonNode line = answer("{\"problem\": \"x[n+1] = a x[n] + 1; x[0] = 0\", \"params\": \"a\", \"at\": \"a=1\","
@@ -82,7 +82,7 @@ class ParametricLineTest {
         {"id": "b", "problem": "x[n+1] = a x[n]; x[0] = 1", "where": "a > 0"}                | "where" needs "params"
         {"id": "b", "problem": "x[n+1] = a x[n]; x[0] = 1", "at": "a=2"}                     | "at" needs "params"
         {"id": "b", "problem": "x[n+1] = a x[n]", "params": "a", "given": "x[0] = 1"}        | "given" is not taken with "params"
-        {"id": "b", "problem": "x[n+1] = a x[n]; x[0] = 1", "params": "a", "format": "html"} | "format" html is not available with "params" (text, json, latex, mathml, java, c)
+        {"id": "b", "problem": "x[n+1] = a x[n]; x[0] = 1", "params": "a", "format": "pdf"}  | "format" pdf is not available with "params" (text, json, latex, mathml, html, java, c)
         {"id": "b", "problem": "x[n+1] = a x[n]; x[0] = 1", "params": "a", "format": "c", "header": "a.h"} | "header" is not taken with "params"
         {"id": "b", "problem": "x[n+1] = a x[n]; x[0] = 1", "params": "a", "wher": "a > 0"}  | unknown field "wher" for solve
         {"id": "b", "problem": "x[n+1] = a x[n]; x[0] = 1", "params": 7}                     | "params" must be a string

@@ -49,14 +49,15 @@ public final class ParametricLatexRenderer {
                 List<String> when = conditions(c);
                 List<String> condition = new ArrayList<>(List.of("\\text{" + condition(c, number) + "}"));
                 if (!when.isEmpty()) {
-                    List<String> lines = PlainMath.latexLines(when, ",\\; ", breaker);
+                    List<String> lines = PlainMath.lines(when, ",\\; ", breaker, PlainMath::latex);
                     condition.set(0, condition.get(0) + " " + lines.get(0));
                     condition.addAll(lines.subList(1, lines.size()));
                 }
                 rows.addAll(continued("", condition));
-                rows.addAll(continued("\\quad ", PlainMath.latexLines(t.formula().substring(t.formula().indexOf(" = ") + 3), breaker)));
+                String body = t.formula().substring(t.formula().indexOf(" = ") + 3);
+                rows.addAll(continued("\\quad ", PlainMath.lines(body, breaker, PlainMath::latex)));
                 for (String d : t.definitions()) {
-                    definitions.add(display("\\text{case " + number + ": } ", PlainMath.latexLines(d, breaker)));
+                    definitions.add(display("\\text{case " + number + ": } ", PlainMath.lines(d, breaker, PlainMath::latex)));
                 }
                 number++;
             }
@@ -69,8 +70,8 @@ public final class ParametricLatexRenderer {
         }
         s.append("% ").append(ParametricTextRenderer.stability(a.stability())).append('\n');
         if (!a.stability().conditions().isEmpty()) {
-            s.append(display("", PlainMath.latexLines(a.stability().conditions().stream().map(Constraint::toString).toList(),
-                    ",\\quad ", breaker)));
+            s.append(display("", PlainMath.lines(a.stability().conditions().stream().map(Constraint::toString).toList(),
+                    ",\\quad ", breaker, PlainMath::latex)));
         }
         r.at().ifPresent(at -> s.append("% at ").append(ParametricTextRenderer.values(at.values())).append(": case ")
                 .append(at.caseNumber()).append('\n'));

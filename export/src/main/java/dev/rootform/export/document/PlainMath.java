@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
 import java.util.Set;
+import java.util.function.UnaryOperator;
 
 /**
  * Converts the plain formulas of answers with parameters (as {@link ParametricFormula} and the
@@ -41,22 +42,24 @@ final class PlainMath {
     }
 
     /**
-     * The plain formula in LaTeX lines no wider than the breaker's width: breaks fall before the
-     * binary + and − signs (those written with a space on each side), also inside parentheses but
-     * never inside a power or a root.
+     * The plain formula in lines no wider than the breaker's width, written by {@code writer}
+     * ({@link #latex(String)} or {@link #mathMl(String)}, the notation of the breaker): breaks fall
+     * before the binary + and − signs (those written with a space on each side), also inside
+     * parentheses but never inside a power or a root.
      */
-    static List<String> latexLines(String plain, LineBreaker breaker) {
+    static List<String> lines(String plain, LineBreaker breaker, UnaryOperator<String> writer) {
         String marked = marked(plain);
-        return breaker.lines(marked, latex(marked));
+        return breaker.lines(marked, writer.apply(marked));
     }
 
     /**
-     * Plain formulas joined by {@code separator} into LaTeX lines: lines break between formulas, and
-     * inside one (as in {@link #latexLines}) only when it is wider than a line by itself.
+     * Plain formulas joined by {@code separator} into lines: lines break between formulas, and
+     * inside one (as in {@link #lines(String, LineBreaker, UnaryOperator)}) only when it is wider
+     * than a line by itself.
      */
-    static List<String> latexLines(List<String> plain, String separator, LineBreaker breaker) {
+    static List<String> lines(List<String> plain, String separator, LineBreaker breaker, UnaryOperator<String> writer) {
         List<String> marked = plain.stream().map(p -> p.length() > breaker.width() ? marked(p) : p).toList();
-        return breaker.list(marked, marked.stream().map(PlainMath::latex).toList(), separator);
+        return breaker.list(marked, marked.stream().map(writer).toList(), separator);
     }
 
     /**
@@ -217,6 +220,9 @@ final class PlainMath {
 
     private static String mathMl(Piece p) {
         if (p instanceof Atom a) {
+            if (a.text().equals(LineBreaker.MARK)) {
+                return LineBreaker.MARK;
+            }
             if (a.kind() == 'n') {
                 String letters = a.text().replaceAll("\\d+$", "");
                 String digits = a.text().substring(letters.length());
