@@ -1,6 +1,6 @@
 // Measures a loaded page and writes the findings into the DOM, for a test to read from --dump-dom:
 // errors reported to the page, every <math> element's laid-out size, elements reaching beyond the
-// viewport, each SVG's size and longest path, resources fetched.
+// viewport, each SVG's size, longest path, texts (legend, axes) and figure caption, resources fetched.
 (function () {
   const width = document.documentElement.clientWidth;
   const findings = {
@@ -24,8 +24,12 @@
       segments = Math.max(segments, (p.getAttribute('d') || '').split(/[LM]/).length - 1);
     });
     const r = s.getBoundingClientRect();
+    const figure = s.closest('figure');
+    const caption = figure ? figure.querySelector('figcaption') : null;
     findings.svgs.push({ id: s.id, segments: segments, lines: s.querySelectorAll('line').length,
-      shapes: s.querySelectorAll('rect,circle,ellipse').length, paths: s.querySelectorAll('path').length, width: r.width, height: r.height });
+      shapes: s.querySelectorAll('rect,circle,ellipse').length, paths: s.querySelectorAll('path').length, width: r.width, height: r.height,
+      texts: Array.prototype.map.call(s.querySelectorAll('text'), function (t) { return t.textContent; }),
+      caption: caption ? caption.textContent : '' });
   });
   findings.resources = performance.getEntriesByType('resource').length;
   const out = document.createElement('script');

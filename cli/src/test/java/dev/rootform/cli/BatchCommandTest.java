@@ -91,6 +91,29 @@ class BatchCommandTest {
     }
 
     @Test
+    void parametricLinesAreAnsweredAsSolveWithParamsAndABadOneUnderItsLineNumber() throws Exception {
+        // a savings plan x[n+1] = (1 + r) x[n] + d (scenario of our own); with r = 0 the balance is d·n (common practice)
+        String plan = "{\"id\": \"plan\", \"problem\": \"x[n+1] = (1 + r) x[n] + d; x[0] = 0\", \"params\": \"r, d\","
+                + " \"where\": \"r >= 0\", \"at\": \"r=0, d=50\", \"valuesAt\": [\"12\"]}";
+        String tex = "{\"id\": \"tex\", \"problem\": \"x[n+1] = (1 + r) x[n] + d; x[0] = 0\", \"params\": \"r, d\", \"format\": \"latex\"}";
+        String bad = "{\"problem\": \"x[n+1] = (1 + r) x[n] + q; x[0] = 0\", \"params\": \"r, d\"}";
+        Path out = dir.resolve("out.jsonl");
+        MainTest.Run r = MainTest.run("batch", input(plan, tex, bad).toString(), "-o", out.toString(), "--jobs", "2");
+        assertEquals(0, r.code(), r.err());
+        Map<String, JsonNode> answers = answers(out);
+        assertEquals(List.of("3", "plan", "tex"), new ArrayList<>(answers.keySet()));
+        JsonNode p = answers.get("plan");
+        assertEquals(0, p.get("exit").asInt(), p.toString());
+        assertTrue(p.get("verified").asBoolean(), p.toString());
+        assertEquals(List.of("r", "d"), List.of(p.get("parameters").get(0).asText(), p.get("parameters").get(1).asText()));
+        assertEquals("600", p.get("values").get(0).get("exact").asText(), p.toString());
+        assertTrue(answers.get("tex").get("text").asText().contains("\\begin{cases}"), answers.get("tex").toString());
+        assertEquals(2, answers.get("3").get("exit").asInt());
+        assertTrue(answers.get("3").get("error").asText().contains("undeclared parameter 'q'"), answers.get("3").toString());
+        assertTrue(r.err().contains("2 solved, 1 refused, 0 failed"), r.err());
+    }
+
+    @Test
     void withoutResumeOutIsWrittenAfresh() throws Exception {
         Path out = dir.resolve("out.jsonl");
         Files.writeString(out, "{\"id\":\"old\",\"exit\":0}\n");

@@ -52,7 +52,8 @@ class ParametricCommandTest {
         Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0", "--format", "latex");
         assertEquals(0, r.code(), r.err());
         assertTrue(r.out().contains("y\\left(t\\right) = \\begin{cases}") || r.out().contains("= \\begin{cases}"), r.out());
-        assertEquals(2, r.out().split("\\\\\\\\\n", -1).length - 1, r.out());
+        String cases = r.out().substring(r.out().indexOf("\\begin{cases}"), r.out().indexOf("\\end{cases}"));
+        assertEquals(3, cases.split("\\\\text\\{\\(\\d\\) ", -1).length - 1, r.out());
         assertTrue(r.out().contains("\\end{cases}") && r.out().contains("\\sqrt{") && r.out().contains("\\omega_{1}"), r.out());
     }
 
@@ -77,6 +78,24 @@ class ParametricCommandTest {
         org.w3c.dom.Document doc = factory.newDocumentBuilder().parse(new org.xml.sax.InputSource(
                 new java.io.StringReader("<root>" + r.out() + "</root>")));
         assertEquals(3, doc.getElementsByTagNameNS("http://www.w3.org/1998/Math/MathML", "mtr").getLength());
+    }
+
+    @Test
+    void htmlIsAReportPageWithTheCaseTableAndTheAnswerAtTheValues(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        java.nio.file.Path page = dir.resolve("mast.html");
+        Run r = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--where", "m > 0, c >= 0, k > 0",
+                "--at", "m=2, c=0.4, k=8, x0=0.01, v0=0", "--values-at", "1", "--format", "html", "-o", page.toString());
+        assertEquals(0, r.code(), r.err());
+        String html = java.nio.file.Files.readString(page);
+        assertTrue(html.startsWith("<!DOCTYPE html>") && html.contains("</html>"), html);
+        for (String part : new String[] {"<h2>Cases</h2>", "<th>holds</th>", "<h2>Stability</h2>", "c &gt; 0", "Case 1 holds",
+                "<th>point</th>"}) {
+            assertTrue(html.contains(part), "the page lacks " + part);
+        }
+        Run code = MainTest.run("solve", OSCILLATOR, "--params", "m,c,k,x0,v0", "--format", "html", "--with-code", "java");
+        assertEquals(2, code.code(), code.err());
+        assertTrue(code.err().contains("carries no code"), code.err());
     }
 
     @Test

@@ -8,13 +8,17 @@ import java.util.function.UnaryOperator;
 
 /**
  * The {@code solve} command of a batch: {@code problem} (required), {@code given}, {@code var} and
- * the {@link OutputFields}. The answer is solve's, as {@code rootform solve} gives it.
+ * the {@link OutputFields}. The answer is solve's, as {@code rootform solve} gives it; a line with
+ * {@code params}, {@code where} or {@code at} is a {@link ParametricLine}.
  */
 final class SolveLine {
     private SolveLine() {
     }
 
     static Supplier<Reply> prepare(Fields f, Duration defaultTimeLimit) {
+        if (ParametricLine.asked(f)) {
+            return ParametricLine.prepare(f, defaultTimeLimit);
+        }
         OutputFields.Output output = OutputFields.output(f);
         SolveRequest request = request(f, defaultTimeLimit, output.code());
         return () -> output.reply(Rootform.solve(request), UnaryOperator.identity());

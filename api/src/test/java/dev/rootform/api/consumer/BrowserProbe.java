@@ -80,6 +80,22 @@ final class BrowserProbe {
         }
     }
 
+    /**
+     * Asserts what the marks of a time plot ({@code drawn}, the probe's finding) tell the reader: the
+     * legend entry "--values-at points" and the caption's squares exactly when values were asked for
+     * ({@code requested}), the entry "cross-check points" and the caption's rings exactly when the
+     * plot marks where the answer was checked ({@code checked}).
+     */
+    static void assertMarks(JsonNode drawn, boolean requested, boolean checked, String name) {
+        java.util.List<String> texts = new java.util.ArrayList<>();
+        drawn.get("texts").forEach(t -> texts.add(t.asText().strip()));
+        String caption = drawn.get("caption").asText();
+        assertEquals(requested, texts.contains("--values-at points"), name + ": legend " + texts);
+        assertEquals(requested, caption.contains("squares mark the values asked for with --values-at"), name + ": caption " + caption);
+        assertEquals(checked, texts.contains("cross-check points"), name + ": legend " + texts);
+        assertEquals(checked, caption.contains("rings mark the points where the answer was compared with"), name + ": caption " + caption);
+    }
+
     /** The page with the error catcher first in its head and the probe last in its body. */
     private static String withProbe(String html, String probe) {
         String head = html.contains("<head>") ? html.replaceFirst("<head>", "<head>" + Matcher.quoteReplacement(CATCHER))

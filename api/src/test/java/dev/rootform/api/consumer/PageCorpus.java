@@ -5,11 +5,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.rootform.api.DocumentOptions;
 import dev.rootform.api.Exporters;
 import dev.rootform.api.Options;
+import dev.rootform.api.ParametricRequest;
+import dev.rootform.api.ParametricResult;
 import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.api.SolveRequest;
 import dev.rootform.export.CodeNames;
 import dev.rootform.export.Report;
+import dev.rootform.export.document.ParametricReport;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
@@ -45,7 +48,36 @@ final class PageCorpus {
     /** An unstable equation: a log axis. */
     static final Case GROWTH = new Case("growth", "y'' - y' - 2y = 0; y(0) = 1; y'(0) = 0", List.of());
 
+    /** A problem with parameters, with a file-safe name (scenarios of our own). */
+    record Parametric(String name, String problem, String parameters, String where) {
+        @Override
+        public String toString() {
+            return name;
+        }
+    }
+
     private static final Map<String, Report> SOLVED = new ConcurrentHashMap<>();
+
+    /**
+     * The answers with parameters that stress a layout: a damped oscillator driven at a frequency w
+     * (long coefficients over Q(m, c, k, F, w), three damping cases), a recurrence with one parameter
+     * split into three cases, and an order-5 equation whose roots have no closed form (only its long
+     * Routh–Hurwitz conditions are written).
+     */
+    static Stream<Parametric> parametricDocuments() {
+        return Stream.of(
+                new Parametric("params-forced-oscillator", "m y'' + c y' + k y = F cos(w t); y(0) = 0; y'(0) = 0", "m, c, k, F, w",
+                        "m > 0, c >= 0, k > 0, w > 0"),
+                new Parametric("params-recurrence-cases", "x[n+2] = a x[n+1] - x[n] + 1; x[0] = 0; x[1] = 1", "a", ""),
+                new Parametric("params-order-5-stability", "y^(5) + a y'''' + b y''' + c y'' + d y' + f y = 0", "a, b, c, d, f", ""));
+    }
+
+    /** The answer of a problem with parameters, verified. */
+    static ParametricReport report(Parametric p) {
+        ParametricResult r = Rootform.solveWithParameters(ParametricRequest.of(p.problem(), p.parameters()).where(p.where()));
+        assertTrue(r instanceof ParametricResult.Solved s && s.report().verified(), p.name() + ": " + r);
+        return ((ParametricResult.Solved) r).report();
+    }
 
     private PageCorpus() {
     }

@@ -40,6 +40,9 @@ class ReportPageBrowserTest {
         assertTrue(roots.get("shapes").asInt() + roots.get("paths").asInt() >= report.roots().size(), c + ": a root is not drawn: " + roots);
         TimePlot time = report.plots().orElseThrow().time().orElseThrow();
         BrowserProbe.assertDrawn(time, svgs.get("time-plot"), c + " (the solution, among " + svgs.keySet() + ")");
+        // a solve answer marks only the points asked for, and only those in the plotted range
+        assertTrue(!c.points().isEmpty() || time.marks().isEmpty(), c + ": marks without --values-at");
+        BrowserProbe.assertMarks(svgs.get("time-plot"), !time.marks().isEmpty(), false, c.name());
         Optional<?> frequency = report.plots().orElseThrow().frequency();
         assertEquals(frequency.isPresent(), svgs.containsKey("frequency-plot"), c + ": frequency plot present only with a steady state");
         if (frequency.isPresent()) {

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.rootform.api.DocumentOptions;
+import dev.rootform.export.document.ParametricLatexRenderer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -27,16 +28,26 @@ class StandaloneLatexTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("dev.rootform.api.consumer.PageCorpus#documents")
     void compilesWithoutOverfullBoxes(PageCorpus.Case c) throws Exception {
-        String tex = PageCorpus.render(c, "latex", new DocumentOptions(true, Optional.empty()));
-        assertTrue(tex.contains("\\documentclass[10pt,a4paper]{article}"), c + ": not a complete document");
-        assertTrue(!tex.matches("(?s).*\\\\usepackage\\{(?!amsmath|amssymb).*"), c + ": a package beyond amsmath and amssymb");
+        assertFits(c.name(), PageCorpus.render(c, "latex", new DocumentOptions(true, Optional.empty())));
+    }
+
+    /** Answers with parameters: long case formulas, conditions and stability conditions must break to fit. */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("dev.rootform.api.consumer.PageCorpus#parametricDocuments")
+    void parametricDocumentsCompileWithoutOverfullBoxes(PageCorpus.Parametric p) throws Exception {
+        assertFits(p.name(), ParametricLatexRenderer.document(PageCorpus.report(p)));
+    }
+
+    private static void assertFits(String name, String tex) throws Exception {
+        assertTrue(tex.contains("\\documentclass[10pt,a4paper]{article}"), name + ": not a complete document");
+        assertTrue(!tex.matches("(?s).*\\\\usepackage\\{(?!amsmath|amssymb).*"), name + ": a package beyond amsmath and amssymb");
         Path dir = Tools.OUT.resolve("latex").toAbsolutePath();
-        Tools.writeString(dir.resolve(c.name() + ".tex"), tex);
-        Tools.Run run = Tools.run(List.of(Tools.pdflatex(), "-interaction=nonstopmode", "-halt-on-error", c.name() + ".tex"), dir);
-        String log = Files.readString(dir.resolve(c.name() + ".log"), StandardCharsets.ISO_8859_1);
+        Tools.writeString(dir.resolve(name + ".tex"), tex);
+        Tools.Run run = Tools.run(List.of(Tools.pdflatex(), "-interaction=nonstopmode", "-halt-on-error", name + ".tex"), dir);
+        String log = Files.readString(dir.resolve(name + ".log"), StandardCharsets.ISO_8859_1);
         List<String> errors = log.lines().filter(l -> l.startsWith("!")).toList();
-        assertEquals(List.of(), errors, c + ": pdflatex errors");
-        assertEquals(0, run.exit(), c + ": pdflatex failed: " + run.out());
+        assertEquals(List.of(), errors, name + ": pdflatex errors");
+        assertEquals(0, run.exit(), name + ": pdflatex failed: " + run.out());
         List<String> overfull = new ArrayList<>();
         Matcher m = OVERFULL.matcher(log);
         while (m.find()) {
@@ -44,9 +55,9 @@ class StandaloneLatexTest {
                 overfull.add(m.group());
             }
         }
-        assertEquals(List.of(), overfull, c + ": lines wider than the page");
+        assertEquals(List.of(), overfull, name + ": lines wider than the page");
         Tools.Run png = Tools.run(List.of(Tools.poppler("pdftoppm"), "-png", "-r", "90", "-f", "1", "-l", "1", "-singlefile",
-                c.name() + ".pdf", c.name()), dir);
-        assertEquals(0, png.exit(), c + ": pdftoppm failed: " + png.err());
+                name + ".pdf", name), dir);
+        assertEquals(0, png.exit(), name + ": pdftoppm failed: " + png.err());
     }
 }

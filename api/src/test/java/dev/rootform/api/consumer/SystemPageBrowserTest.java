@@ -29,6 +29,19 @@ class SystemPageBrowserTest {
         assertTrue(svgs.containsKey("roots-plot"), "no eigenvalue plane: " + svgs.keySet());
         BrowserProbe.assertDrawn(r.outputs().get(0).report().plots().orElseThrow().time().orElseThrow(), svgs.get("y1-plot"),
                 "system-cart y1");
+        // no --values-at: the marks are the cross-check points only, named as such
+        BrowserProbe.assertMarks(svgs.get("y1-plot"), false, true, "system-cart y1");
+        assertTrue(svgs.get("y1-plot").get("caption").asText().contains("a numerical integration of the state equation"),
+                svgs.get("y1-plot").toString());
+    }
+
+    @Test
+    void valuesAskedForAndCrossCheckPointsAreMarkedApart() throws Exception {
+        // the same cart, values asked at t = 3/2 and 3 (neither is a cross-check point)
+        SystemReport r = report(SystemRequest.continuous("[[0,1],[-4,-1]]").withB("[[0],[1]]").withC("[[1,0]]").withX0("[1,0]")
+                .withInput("step"), "3/2", "3");
+        Map<String, JsonNode> svgs = load("system-cart-values", r);
+        BrowserProbe.assertMarks(svgs.get("y1-plot"), true, true, "system-cart-values y1");
     }
 
     @Test
@@ -40,11 +53,14 @@ class SystemPageBrowserTest {
         for (int i = 0; i < 2; i++) {
             BrowserProbe.assertDrawn(r.states().get(i).report().plots().orElseThrow().time().orElseThrow(),
                     svgs.get("x" + (i + 1) + "-plot"), "system-stock x" + (i + 1));
+            BrowserProbe.assertMarks(svgs.get("x" + (i + 1) + "-plot"), false, true, "system-stock x" + (i + 1));
+            assertTrue(svgs.get("x" + (i + 1) + "-plot").get("caption").asText().contains("the exact iteration of the state equation"),
+                    svgs.get("x" + (i + 1) + "-plot").toString());
         }
     }
 
-    private static SystemReport report(SystemRequest request) {
-        SystemResult result = Rootform.system(request.with(Options.builder().plots(true).build()));
+    private static SystemReport report(SystemRequest request, String... points) {
+        SystemResult result = Rootform.system(request.with(Options.builder().plots(true).points(points).build()));
         assertTrue(result instanceof SystemResult.Analysed, result.toString());
         return result.answer().orElseThrow();
     }

@@ -1,20 +1,30 @@
 package dev.rootform.export.document;
 
+import dev.rootform.export.notation.LatexNotation;
+import dev.rootform.export.notation.LineBreaker;
 import dev.rootform.symbolic.params.Constraint;
 import dev.rootform.symbolic.params.ParametricAnswer;
 import dev.rootform.symbolic.params.ParametricCase;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.stream.Collectors;
 
 /**
  * An answer with parameters as a LaTeX fragment (amsmath): the solution as one {@code cases}
- * environment (formula and condition per row), the definitions of the root symbols, and the
- * stability conditions. With {@code --at}, a comment names the case that holds.
+ * environment (per case a row with its number and conditions, then the formula on indented rows),
+ * the definitions of the root symbols, and the stability conditions. Long formulas and conditions
+ * are broken at + and − (by a {@link LineBreaker}, measured on the plain form) so that every line
+ * fits the text width of an A4 page at 10 pt. With {@code --at}, a comment names the case that holds.
  *
  * @since 0.4
  */
 public final class ParametricLatexRenderer {
+    /**
+     * The widest line, in characters of the plain form: the head {@code y(t) = \{} and the indents
+     * take about 75 pt of the 345 pt text width, and the products of many parameters, each \cdot
+     * with its spaces, set wider than the ordinary answer's lines ({@link LatexRenderer#WIDTH}).
+     */
+    static final int WIDTH = 44;
+
     private ParametricLatexRenderer() {
     }
 
@@ -27,35 +37,41 @@ public final class ParametricLatexRenderer {
         }
         s.append("\n% ").append(ParametricTextRenderer.verification(r).replace("\n", "\n% ")).append('\n');
         ParametricFormula formula = new ParametricFormula(a.problem().domain(), a.problem().variable());
+        LineBreaker breaker = new LineBreaker(LatexNotation.INSTANCE, WIDTH);
         List<String> definitions = new ArrayList<>();
         if (!a.cases().isEmpty()) {
             String head = formula.of(a.problem().function(), a.cases().get(0)).formula();
             head = head.substring(0, head.indexOf(" = "));
-            s.append("\\[\n").append(PlainMath.latex(head)).append(" = \\begin{cases}\n");
+            List<String> rows = new ArrayList<>();
             int number = 1;
             for (ParametricCase c : a.cases()) {
                 ParametricFormula.Text t = formula.of(a.problem().function(), c);
+                List<String> when = conditions(c);
+                List<String> condition = new ArrayList<>(List.of("\\text{" + condition(c, number) + "}"));
+                if (!when.isEmpty()) {
+                    List<String> lines = PlainMath.lines(when, ",\\; ", breaker, PlainMath::latex);
+                    condition.set(0, condition.get(0) + " " + lines.get(0));
+                    condition.addAll(lines.subList(1, lines.size()));
+                }
+                rows.addAll(continued("", condition));
                 String body = t.formula().substring(t.formula().indexOf(" = ") + 3);
-                s.append("  ").append(PlainMath.latex(body)).append(" & \\text{").append(condition(c, number)).append("}")
-                        .append(condition(c).isEmpty() ? "" : " " + PlainMath.latex(condition(c)))
-                        .append(number < a.cases().size() ? " \\\\" : "").append('\n');
+                rows.addAll(continued("\\quad ", PlainMath.lines(body, breaker, PlainMath::latex)));
                 for (String d : t.definitions()) {
-                    definitions.add("\\text{case " + number + ": } " + PlainMath.latex(d));
+                    definitions.add(display("\\text{case " + number + ": } ", PlainMath.lines(d, breaker, PlainMath::latex)));
                 }
                 number++;
             }
-            s.append("\\end{cases}\n\\]\n");
+            s.append("\\[\n").append(PlainMath.latex(head)).append(" = \\begin{cases}\n  ").append(String.join(" \\\\\n  ", rows))
+                    .append("\n\\end{cases}\n\\]\n");
         }
-        for (String d : definitions) {
-            s.append("\\[ ").append(d).append(" \\]\n");
-        }
+        definitions.forEach(s::append);
         for (String note : a.notes()) {
             s.append("% note: ").append(note).append('\n');
         }
         s.append("% ").append(ParametricTextRenderer.stability(a.stability())).append('\n');
         if (!a.stability().conditions().isEmpty()) {
-            s.append("\\[ ").append(a.stability().conditions().stream().map(c -> PlainMath.latex(c.toString()))
-                    .collect(Collectors.joining(",\\quad "))).append(" \\]\n");
+            s.append(display("", PlainMath.lines(a.stability().conditions().stream().map(Constraint::toString).toList(),
+                    ",\\quad ", breaker, PlainMath::latex)));
         }
         r.at().ifPresent(at -> s.append("% at ").append(ParametricTextRenderer.values(at.values())).append(": case ")
                 .append(at.caseNumber()).append('\n'));
@@ -70,14 +86,36 @@ public final class ParametricLatexRenderer {
         return LatexRenderer.document(render(r).lines().toList());
     }
 
+    /** The lines of one formula after {@code indent}, the continuation lines indented by a further \qquad. */
+    private static List<String> continued(String indent, List<String> lines) {
+        List<String> out = new ArrayList<>();
+        for (int i = 0; i < lines.size(); i++) {
+            out.add(indent + (i == 0 ? "" : "\\qquad ") + lines.get(i));
+        }
+        return out;
+    }
+
+    /** The lines as one display formula after {@code label}: one line as it is, more in an {@code aligned} environment. */
+    private static String display(String label, List<String> lines) {
+        if (lines.size() == 1) {
+            return "\\[ " + label + lines.get(0) + " \\]\n";
+        }
+        return "\\[\n\\begin{aligned}\n  &" + label + String.join(" \\\\\n  &", continued("", lines)) + "\n\\end{aligned}\n\\]\n";
+    }
+
     private static String condition(ParametricCase c, int number) {
-        return "(" + number + ") " + (condition(c).isEmpty() ? "for all parameter values allowed" : "if ");
+        return "(" + number + ") " + (conditions(c).isEmpty() ? "for all parameter values allowed" : "if ");
+    }
+
+    /** The case's conditions as plain formulas. */
+    private static List<String> conditions(ParametricCase c) {
+        List<Constraint> all = new ArrayList<>(c.when());
+        all.addAll(c.excluded());
+        return all.stream().map(Constraint::toString).toList();
     }
 
     /** The case's conditions as one plain formula, joined by commas. */
     static String condition(ParametricCase c) {
-        List<Constraint> all = new ArrayList<>(c.when());
-        all.addAll(c.excluded());
-        return all.stream().map(Constraint::toString).collect(Collectors.joining(", "));
+        return String.join(", ", conditions(c));
     }
 }

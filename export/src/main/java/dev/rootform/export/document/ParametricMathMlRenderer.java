@@ -1,13 +1,20 @@
 package dev.rootform.export.document;
 
+import dev.rootform.export.notation.LineBreaker;
+import dev.rootform.export.notation.MathMlNotation;
+import dev.rootform.symbolic.params.Constraint;
 import dev.rootform.symbolic.params.ParametricAnswer;
 import dev.rootform.symbolic.params.ParametricCase;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
 import java.util.stream.Collectors;
 
 /**
  * An answer with parameters as presentation MathML: the solution as a brace and a table (one row
  * per case: formula, condition), the root symbols' definitions and the stability conditions, each
- * as its own {@code <math>} element, with an XML comment for the verification.
+ * as its own {@code <math>} element, with an XML comment for the verification; and the same
+ * formulas as labelled rows for the report page.
  *
  * @since 0.4
  */
@@ -15,6 +22,41 @@ public final class ParametricMathMlRenderer {
     private static final String MATH = "<math xmlns=\"http://www.w3.org/1998/Math/MathML\" display=\"block\">";
 
     private ParametricMathMlRenderer() {
+    }
+
+    /**
+     * The cases as labelled rows of MathML for a page ({@link MathMlRenderer#math} lays them out): per
+     * case the formula ({@code case k}), broken at + and − into lines of at most {@code width} plain
+     * characters, then the definitions of its root symbols ({@code where}).
+     */
+    public static List<FormulaRows.Row> caseRows(ParametricReport r, int width) {
+        ParametricAnswer a = r.answer();
+        ParametricFormula formula = new ParametricFormula(a.problem().domain(), a.problem().variable());
+        LineBreaker breaker = new LineBreaker(MathMlNotation.INSTANCE, width);
+        List<FormulaRows.Row> rows = new ArrayList<>();
+        int number = 1;
+        for (ParametricCase c : a.cases()) {
+            ParametricFormula.Text t = formula.of(a.problem().function(), c);
+            rows.add(new FormulaRows.Row("case " + number++, PlainMath.lines(t.formula(), breaker, PlainMath::mathMl)));
+            for (String d : t.definitions()) {
+                rows.add(new FormulaRows.Row("where", PlainMath.lines(d, breaker, PlainMath::mathMl)));
+            }
+        }
+        return rows;
+    }
+
+    /**
+     * The stability conditions as one labelled row ({@code stable when}) of MathML lines of at most
+     * {@code width} plain characters; empty when there are none (always or never stable).
+     */
+    public static Optional<FormulaRows.Row> stabilityRow(ParametricReport r, int width) {
+        List<String> conditions = r.answer().stability().conditions().stream().map(Constraint::toString).toList();
+        if (conditions.isEmpty()) {
+            return Optional.empty();
+        }
+        LineBreaker breaker = new LineBreaker(MathMlNotation.INSTANCE, width);
+        return Optional.of(new FormulaRows.Row("stable when", PlainMath.lines(conditions, MathMlRenderer.SEPARATOR, breaker,
+                PlainMath::mathMl)));
     }
 
     public static String render(ParametricReport r) {

@@ -64,7 +64,7 @@ public final class ParametricTextRenderer {
     }
 
     /** The case's conditions joined with "and", or "for all parameter values". */
-    static String when(ParametricCase c) {
+    public static String when(ParametricCase c) {
         List<String> parts = c.when().stream().map(Constraint::toString).collect(Collectors.toList());
         if (!c.excluded().isEmpty()) {
             parts.add(c.excluded().stream().map(Constraint::toString).collect(Collectors.joining(", ")));
@@ -74,7 +74,7 @@ public final class ParametricTextRenderer {
     }
 
     /** The form of each root of the equation in the case: "complex pair", "double root", …. */
-    static String forms(ParametricCase c) {
+    public static String forms(ParametricCase c) {
         return java.util.stream.IntStream.range(0, c.modes().size()).filter(i -> c.modes().get(i).inEquation() > 0)
                 .mapToObj(i -> name(c.regimes().get(i)) + (c.modes().get(i).multiplicity() > c.modes().get(i).inEquation()
                         ? " met by the forcing" : ""))
@@ -94,7 +94,8 @@ public final class ParametricTextRenderer {
         }
     }
 
-    static String verification(ParametricReport r) {
+    /** The verification: the exact check of the cases, then the specialisation checks (a second line). */
+    public static String verification(ParametricReport r) {
         ParametricAnswer a = r.answer();
         if (a.cases().isEmpty()) {
             return "Verified: nothing to verify (no case derived).";
@@ -112,7 +113,8 @@ public final class ParametricTextRenderer {
                 + largest + ").";
     }
 
-    static String stability(StabilityConditions s) {
+    /** The stability verdict in one sentence, naming the criterion and the conditions. */
+    public static String stability(StabilityConditions s) {
         switch (s.verdict()) {
             case ALWAYS:
                 return "Stability (" + s.criterion() + "): asymptotically stable for all parameter values allowed.";
@@ -124,7 +126,8 @@ public final class ParametricTextRenderer {
         }
     }
 
-    static String values(Map<String, Rational> values) {
+    /** Parameter values as {@code m = 2, c = 1/5}. */
+    public static String values(Map<String, Rational> values) {
         return values.entrySet().stream().map(e -> e.getKey() + " = " + e.getValue()).collect(Collectors.joining(", "));
     }
 }

@@ -1,8 +1,12 @@
 package dev.rootform.export.document;
 
+import dev.rootform.export.notation.LineBreaker;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
 import java.util.List;
 import java.util.Set;
+import java.util.function.UnaryOperator;
 
 /**
  * Converts the plain formulas of answers with parameters (as {@link ParametricFormula} and the
@@ -35,6 +39,57 @@ final class PlainMath {
 
     static String latex(String plain) {
         return latex(new PlainMath(plain).sequence());
+    }
+
+    /**
+     * The plain formula in lines no wider than the breaker's width, written by {@code writer}
+     * ({@link #latex(String)} or {@link #mathMl(String)}, the notation of the breaker): breaks fall
+     * before the binary + and − signs (those written with a space on each side), also inside
+     * parentheses but never inside a power or a root.
+     */
+    static List<String> lines(String plain, LineBreaker breaker, UnaryOperator<String> writer) {
+        String marked = marked(plain);
+        return breaker.lines(marked, writer.apply(marked));
+    }
+
+    /**
+     * Plain formulas joined by {@code separator} into lines: lines break between formulas, and
+     * inside one (as in {@link #lines(String, LineBreaker, UnaryOperator)}) only when it is wider
+     * than a line by itself.
+     */
+    static List<String> lines(List<String> plain, String separator, LineBreaker breaker, UnaryOperator<String> writer) {
+        List<String> marked = plain.stream().map(p -> p.length() > breaker.width() ? marked(p) : p).toList();
+        return breaker.list(marked, marked.stream().map(writer).toList(), separator);
+    }
+
+    /**
+     * The plain formula with {@link LineBreaker#MARK} before each binary + and − outside powers
+     * and roots (a parenthesised exponent, the base of a power, the argument of √), where LaTeX
+     * sets braces and no line may break.
+     */
+    private static String marked(String plain) {
+        StringBuilder out = new StringBuilder();
+        Deque<Integer> opened = new ArrayDeque<>();
+        int closed = 0;
+        for (int i = 0; i < plain.length(); i++) {
+            char c = plain.charAt(i);
+            if (c == '(') {
+                boolean braced = i > 0 && (plain.charAt(i - 1) == '^' || plain.charAt(i - 1) == '√');
+                opened.push(braced || closed > 0 ? -1 : out.length());
+                closed += braced || closed > 0 ? 1 : 0;
+            } else if (c == ')' && !opened.isEmpty()) {
+                int start = opened.pop();
+                closed -= start < 0 ? 1 : 0;
+                if (start >= 0 && i + 1 < plain.length() && plain.charAt(i + 1) == '^') {
+                    out.replace(start, out.length(), out.substring(start).replace(LineBreaker.MARK, ""));
+                }
+            } else if ((c == '+' || c == '-') && closed == 0 && i > 0 && plain.charAt(i - 1) == ' ' && i + 1 < plain.length()
+                    && plain.charAt(i + 1) == ' ') {
+                out.append(LineBreaker.MARK);
+            }
+            out.append(c);
+        }
+        return out.toString();
     }
 
     static String mathMl(String plain) {
@@ -117,6 +172,8 @@ final class PlainMath {
                 return a.text();
             }
             switch (a.text()) {
+                case LineBreaker.MARK:
+                    return LineBreaker.MARK;
                 case "·":
                     return " \\cdot ";
                 case "≠":
@@ -163,6 +220,9 @@ final class PlainMath {
 
     private static String mathMl(Piece p) {
         if (p instanceof Atom a) {
+            if (a.text().equals(LineBreaker.MARK)) {
+                return LineBreaker.MARK;
+            }
             if (a.kind() == 'n') {
                 String letters = a.text().replaceAll("\\d+$", "");
                 String digits = a.text().substring(letters.length());

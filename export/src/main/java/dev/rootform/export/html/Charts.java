@@ -54,13 +54,26 @@ final class Charts {
     record Series(String name, List<Sample> samples) {
     }
 
-    /** The solution against t or n, with its parts and the marked points; the SVG is {@code time-plot}. */
+    /** The legend entry of the points the user asked values at (squares). */
+    static final String REQUESTED = "--values-at points";
+    /** The legend entry of the points where the answer was compared with an independent computation (rings). */
+    static final String CHECKED = "cross-check points";
+
+    /**
+     * The solution against t or n, with its parts; every marked point is one the user asked values
+     * at. The SVG is {@code time-plot}.
+     */
     static String time(TimePlot p, String variable, String function, List<Series> parts) {
-        return time(p, variable, function, parts, "time");
+        return time(p, variable, function, parts, p.marks(), List.of(), "time");
     }
 
-    /** The same with the SVG element {@code id-plot}, for a page with several such plots. */
-    static String time(TimePlot p, String variable, String function, List<Series> parts, String id) {
+    /**
+     * The same with the marked points given apart: {@code requested} (squares, {@link #REQUESTED}) and
+     * {@code checked} (rings, {@link #CHECKED}), each in the legend only when there are some; the SVG
+     * element is {@code id-plot}, for a page with several such plots.
+     */
+    static String time(TimePlot p, String variable, String function, List<Series> parts, List<Sample> requested,
+            List<Sample> checked, String id) {
         XYPlot plot = new XYPlot();
         NumberAxis x = new NumberAxis(variable);
         x.setAutoRangeIncludesZero(false);
@@ -71,9 +84,18 @@ final class Charts {
         plot.setDomainAxis(x);
         plot.setRangeAxis(y);
         int index = 0;
-        XYSeriesCollection marks = collection(List.of(new Series("--values-at points", p.marks())));
-        plot.setDataset(index, marks);
-        plot.setRenderer(index++, points(MARK, new Rectangle2D.Double(-4.5, -4.5, 9, 9)));
+        if (!requested.isEmpty()) {
+            plot.setDataset(index, collection(List.of(new Series(REQUESTED, requested))));
+            plot.setRenderer(index++, points(MARK, new Rectangle2D.Double(-4.5, -4.5, 9, 9)));
+        }
+        if (!checked.isEmpty()) {
+            plot.setDataset(index, collection(List.of(new Series(CHECKED, checked))));
+            XYLineAndShapeRenderer rings = points(BOUNDARY, new Ellipse2D.Double(-5, -5, 10, 10));
+            rings.setSeriesShapesFilled(0, false);
+            rings.setSeriesOutlineStroke(0, new BasicStroke(1.4f));
+            rings.setUseOutlinePaint(false);
+            plot.setRenderer(index++, rings);
+        }
         for (Series s : parts) {
             Color color = s.name().startsWith("transient") ? TRANSIENT : s.name().startsWith("steady") ? STEADY : SOLUTION;
             XYSeriesCollection data = collection(List.of(s));

@@ -7,14 +7,16 @@ import dev.rootform.export.code.CRenderer;
 import dev.rootform.export.code.CodeRequests;
 import dev.rootform.export.code.JavaRenderer;
 import dev.rootform.export.code.ResponseCode;
+import dev.rootform.export.document.ParametricReport;
 import dev.rootform.export.document.ResponseReport;
 import dev.rootform.export.document.SystemReport;
 import java.util.Optional;
 
 /**
- * A solve answer ({@link ReportPage}) or a response answer ({@link ResponsePage}) as one
- * self-contained HTML report page ({@link PageRenderer}), optionally with the generated Java or C
- * code in a block.
+ * A solve answer ({@link ReportPage}), a response answer ({@link ResponsePage}), a state-space
+ * answer ({@link SystemPage}) or an answer with parameters ({@link ParametricPage}) as one
+ * self-contained HTML report page ({@link PageRenderer}), the first two optionally with the generated
+ * Java or C code in a block.
  *
  * @since 0.3
  */
@@ -42,6 +44,11 @@ public final class HtmlRenderer {
     public static String render(ResponseReport r, Optional<String> code, CodeNames names) {
         return PageRenderer.render(ResponsePage.of(r, code.map(language -> new Block.Code(language,
                 ResponseCode.decorate(r, Rendering.of(code(r.response(), language, names))).text()))));
+    }
+
+    /** The page of an answer with parameters ({@link ParametricPage}; no code on it). */
+    public static String render(ParametricReport r) {
+        return PageRenderer.render(ParametricPage.of(r));
     }
 
     /** The page of a state-space answer (no code on it). */

@@ -110,11 +110,21 @@ public final class ReportPage {
         return series;
     }
 
+    /** The caption of a time plot whose marked points are all values the user asked for. */
     static String timeCaption(TimePlot t, String unknown) {
+        return timeCaption(t, unknown, !t.marks().isEmpty(), Optional.empty());
+    }
+
+    /**
+     * The caption of a time plot, naming each kind of mark drawn: squares at the --values-at points
+     * ({@code requested}), rings at the cross-check points ({@code checked}, {@code checkedBy} says against what).
+     */
+    static String timeCaption(TimePlot t, String unknown, boolean requested, Optional<String> checkedBy) {
         return "The solution " + unknown + (t.stems() ? " at each index" : "")
                 + (t.logScale() ? " in magnitude on a log axis (it grows)" : "") + " over " + t.range()
                 + (t.split() ? "; the transient and steady parts drawn separately" : "")
-                + (t.marks().isEmpty() ? "" : "; squares mark the --values-at points") + ".";
+                + (requested ? "; squares mark the values asked for with --values-at" : "")
+                + checkedBy.map(by -> "; rings mark the points where the answer was compared with " + by).orElse("") + ".";
     }
 
     private static String rootCaption(Solution s) {

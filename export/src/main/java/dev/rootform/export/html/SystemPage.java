@@ -9,10 +9,13 @@ import dev.rootform.export.notation.CommentText;
 import dev.rootform.export.notation.EquationFormula;
 import dev.rootform.export.notation.LineBreaker;
 import dev.rootform.export.notation.MathMlNotation;
+import dev.rootform.numeric.plot.Sample;
 import dev.rootform.numeric.plot.TimePlot;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
 import java.util.function.Predicate;
 import java.util.stream.Collectors;
 
@@ -90,10 +93,21 @@ public final class SystemPage {
         return Charts.roots(points, labels, -1, !r.model().continuous());
     }
 
+    /**
+     * A signal's plot. Its marked points are the values asked for (squares) followed by the points
+     * where the response was checked against the state equation (rings), told apart by position.
+     */
     private static Block figure(SystemReport r, SignalReport s, TimePlot t) {
         String variable = r.model().continuous() ? "t" : "n";
         String name = s.signal().name() + (r.model().continuous() ? "(t)" : "[n]");
-        return new Block.Figure(Charts.time(t, variable, name, ReportPage.series(t, name), s.signal().name()),
-                ReportPage.timeCaption(t, name) + (s.signal().delta().isZero() ? "" : " The impulse at t = 0 is not drawn."));
+        Set<Double> asked = r.values().stream().map(v -> v.at().doubleValue()).collect(Collectors.toSet());
+        List<Sample> requested = t.marks().stream().filter(m -> asked.contains(m.x())).toList();
+        List<Sample> checked = t.marks().stream().filter(m -> !asked.contains(m.x())).toList();
+        Optional<String> by = checked.isEmpty() ? Optional.empty() : Optional.of(r.model().continuous()
+                ? "a numerical integration of the state equation (see Verification)"
+                : "the exact iteration of the state equation (see Verification)");
+        return new Block.Figure(Charts.time(t, variable, name, ReportPage.series(t, name), requested, checked, s.signal().name()),
+                ReportPage.timeCaption(t, name, !requested.isEmpty(), by)
+                        + (s.signal().delta().isZero() ? "" : " The impulse at t = 0 is not drawn."));
     }
 }

@@ -19,7 +19,7 @@ import java.util.Optional;
  */
 public final class LineBreaker {
     /** Marks a place where a line may break; never part of the output. */
-    static final String MARK = "\uE000";
+    public static final String MARK = "\uE000";
 
     private final Notation n;
     private final int width;
@@ -31,6 +31,11 @@ public final class LineBreaker {
     public LineBreaker(Notation notation, int width) {
         this.n = notation;
         this.width = width;
+    }
+
+    /** The widest line, in characters of plain text. */
+    public int width() {
+        return width;
     }
 
     /** The right-hand side of a closed form in lines. */
@@ -57,10 +62,13 @@ public final class LineBreaker {
     }
 
     /**
-     * @param plain the plain form with marks
+     * A formula that the caller marked, in lines: the plain form measures each part, the written
+     * form (in this breaker's notation) gives the lines.
+     *
+     * @param plain the plain form with {@link #MARK} where a line may break
      * @param written the same in the notation, with marks in the same places
      */
-    private List<String> lines(String plain, String written) {
+    public List<String> lines(String plain, String written) {
         String[] widths = plain.split(MARK, -1);
         String[] parts = written.split(MARK, -1);
         if (widths.length != parts.length) {
