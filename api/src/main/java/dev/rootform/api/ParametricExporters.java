@@ -31,7 +31,7 @@ import java.util.function.Function;
  * System.out.println(ParametricExporters.byName("text").orElseThrow().render(report, CodeNames.defaults()).text());
  * }</pre>
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricExporters {
     /** Renders one answer with parameters; stateless and thread-safe. */

@@ -21,7 +21,7 @@ import java.util.Optional;
  * @param where sign conditions on single parameters ({@code "m > 0, c >= 0"}), or empty
  * @param at values for every parameter ({@code "m=2, c=0.4"}), when the specialised answer is wanted
  * @param options digits, points (used at {@code at}), time limit, variable
- * @since 0.4
+ * @since 0.3
  */
 public record ParametricRequest(String problem, String parameters, String where, Optional<String> at, Options options) {
     public ParametricRequest {

@@ -7,7 +7,7 @@ import java.util.Objects;
  * The outcome of {@link Rootform#solveWithParameters}: the cases, or why there are none. Expected
  * failures are values, never exceptions.
  *
- * @since 0.4
+ * @since 0.3
  */
 public sealed interface ParametricResult permits ParametricResult.Solved, ParametricResult.NotSolved {
 

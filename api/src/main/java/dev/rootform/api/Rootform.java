@@ -97,7 +97,7 @@ public final class Rootform {
      *
      * @param request the problem, the parameter names, assumptions, values and options
      * @return the cases, or why there are none
-     * @since 0.4
+     * @since 0.3
      */
     public static ParametricResult solveWithParameters(ParametricRequest request) {
         return ParametricJob.run(request);

@@ -28,7 +28,7 @@ import java.util.Set;
  * difference of nearly equal products and loses digits (a relative error of about 1e-16·Σ|terms|/|p|),
  * which the header states.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricCode {
     /** The relative band around an equality. */

@@ -16,7 +16,7 @@ import java.io.UncheckedIOException;
  * verdict ("always" | "never" | "when"), conditions}, and with --at: at {values, case, problem,
  * answer (solve's JSON)} and values (the answer's values, as in solve).
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricJsonRenderer {
     private static final ObjectMapper MAPPER = new ObjectMapper();

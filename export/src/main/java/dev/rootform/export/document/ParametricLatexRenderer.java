@@ -15,7 +15,7 @@ import java.util.List;
  * are broken at + and − (by a {@link LineBreaker}, measured on the plain form) so that every line
  * fits the text width of an A4 page at 10 pt. With {@code --at}, a comment names the case that holds.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricLatexRenderer {
     /**

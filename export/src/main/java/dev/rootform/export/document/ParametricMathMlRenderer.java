@@ -16,7 +16,7 @@ import java.util.stream.Collectors;
  * as its own {@code <math>} element, with an XML comment for the verification; and the same
  * formulas as labelled rows for the report page.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricMathMlRenderer {
     private static final String MATH = "<math xmlns=\"http://www.w3.org/1998/Math/MathML\" display=\"block\">";

@@ -15,7 +15,7 @@ import java.util.Optional;
  * @param answer the cases, stability conditions and notes
  * @param checks the specialisation checks (random rational points, and the {@code --at} point)
  * @param at the specialised answer, when values were given
- * @since 0.4
+ * @since 0.3
  */
 public record ParametricReport(ParametricAnswer answer, List<Agreement> checks, Optional<Specialisation> at) {
     public ParametricReport {

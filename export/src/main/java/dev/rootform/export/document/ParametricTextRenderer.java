@@ -15,7 +15,7 @@ import java.util.stream.Collectors;
  * An answer with parameters as plain text: the problem, each case with its condition, formula and
  * definitions, the verification, the stability conditions, notes, and the answer at {@code --at}.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricTextRenderer {
     private ParametricTextRenderer() {

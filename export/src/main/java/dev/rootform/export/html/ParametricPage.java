@@ -18,7 +18,7 @@ import java.util.List;
  * conditions, the verification with each specialisation check, and the answer at the given values.
  * It formats the report and computes nothing.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricPage {
     /**

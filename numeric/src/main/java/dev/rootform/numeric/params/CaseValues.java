@@ -12,7 +12,7 @@ import java.util.Map;
  * (X_E = e^(σt)·cosh(√W t) or cos(√(−W) t), X_O = e^(σt)·sinh(√W t)/√W or sin(√(−W) t)/√(−W), W = 0:
  * e^(σt) and t·e^(σt), with W exact at the point).
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class CaseValues {
     private CaseValues() {

@@ -7,7 +7,7 @@ import java.util.Objects;
  *
  * @param polynomial the factor (monic in {@link ParamPolynomial}'s order, or a rational constant)
  * @param multiplicity how often it divides, at least 1
- * @since 0.4
+ * @since 0.3
  */
 public record ParamFactor(ParamPolynomial polynomial, int multiplicity) {
     public ParamFactor {

@@ -12,7 +12,7 @@ import java.util.TreeMap;
  * characteristic polynomial also the root variable as the last one). Immutable and canonical: no
  * zero coefficients are stored, so {@link #equals} is equality of polynomials over the same names.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParamPolynomial {
     private final List<String> names;

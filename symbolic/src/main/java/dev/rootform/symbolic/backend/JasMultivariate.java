@@ -29,7 +29,7 @@ import java.util.function.Function;
  * {@link JasFactorizer}, one JAS computation runs at a time and an interrupt becomes
  * {@link Cancelled}.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class JasMultivariate {
     private JasMultivariate() {

@@ -12,7 +12,7 @@ import java.util.regex.Pattern;
  * {@code "m > 0, c >= 0, k > 0"} (also {@code <}, {@code <=}, {@code !=} or {@code ≠}, and
  * {@code 0 < m}). Immutable.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class Assumptions {
     private static final Pattern ITEM = Pattern.compile(

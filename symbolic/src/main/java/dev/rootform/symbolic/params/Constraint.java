@@ -11,7 +11,7 @@ import java.util.Objects;
  * A condition p rel 0 on the parameters, p a polynomial over Q. Written with the positive terms on
  * the left and the negative ones on the right: {@code c^2 > 4·k·m}, {@code k = m·w^2}.
  *
- * @since 0.4
+ * @since 0.3
  */
 public record Constraint(ParamPolynomial polynomial, Relation relation) {
     public Constraint {

@@ -7,7 +7,7 @@ import java.util.Objects;
  * A condition y^(order)(point) = value (differential) or x[point] = value (difference, order 0),
  * the value in Q(params).
  *
- * @since 0.4
+ * @since 0.3
  */
 public record ParamCondition(int order, Rational point, ParamFunction value) {
     public ParamCondition {

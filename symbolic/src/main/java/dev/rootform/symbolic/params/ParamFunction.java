@@ -12,7 +12,7 @@ import java.util.Objects;
  * denominator whose leading coefficient (in {@link ParamPolynomial}'s order) is 1. Immutable and
  * canonical, so {@link #equals} is equality of rational functions. Exact throughout.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParamFunction {
     private final ParamPolynomial numerator;

@@ -17,7 +17,7 @@ import java.util.Objects;
  * @param discriminant the factor's discriminant b² − 4ac over Q[params] (a pair of χ), or null
  * @param inEquation the multiplicity in χ (0 for a mode of the forcing alone)
  * @param multiplicity the multiplicity in μ, at least 1
- * @since 0.4
+ * @since 0.3
  */
 public record ParamMode(boolean pair, ParamFunction centre, ParamFunction square, ParamPolynomial discriminant,
         int inEquation, int multiplicity) {

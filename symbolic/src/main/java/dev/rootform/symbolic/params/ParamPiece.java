@@ -11,7 +11,7 @@ import java.util.Objects;
  * @param even the coefficient of v^power·X_E
  * @param odd the coefficient of v^power·X_O
  * @param steady true when the power is at least the mode's multiplicity in χ (the particular part)
- * @since 0.4
+ * @since 0.3
  */
 public record ParamPiece(int mode, int power, ParamFunction even, ParamFunction odd, boolean steady) {
     public ParamPiece {

@@ -12,7 +12,7 @@ import java.util.Objects;
  * @param rate e^(rate·t)'s rate (differential) or the base of rate^n (difference; 1 for none)
  * @param frequency the angular frequency (zero with {@link Wave#NONE})
  * @param wave which wave multiplies the term
- * @since 0.4
+ * @since 0.3
  */
 public record ParamTerm(ParamFunction amplitude, int power, ParamFunction rate, ParamFunction frequency, Wave wave) {
     /** The wave factor of a term. */

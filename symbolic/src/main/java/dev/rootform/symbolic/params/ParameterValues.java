@@ -11,7 +11,7 @@ import java.util.Map;
  * {@code "m=2, c=0.4, k=8"} (integers, decimals, fractions; at most 40 characters and exponents up to
  * ±30 each).
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParameterValues {
     private static final int MAX_LENGTH = 40;

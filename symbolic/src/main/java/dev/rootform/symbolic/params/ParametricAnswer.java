@@ -11,7 +11,7 @@ import java.util.Objects;
  * @param cases the cases that can hold under the assumptions, generic case first
  * @param stability asymptotic stability as conditions on the parameters
  * @param notes special parameter values where the solution takes a form not derived here
- * @since 0.4
+ * @since 0.3
  */
 public record ParametricAnswer(ParametricProblem problem, Assumptions assumptions, List<ParametricCase> cases,
         StabilityConditions stability, List<String> notes) {

@@ -17,7 +17,7 @@ import java.util.Objects;
  * @param pieces the solution's pieces
  * @param freeConstants the names of the free constants of a general solution (no conditions), else empty
  * @param verified true when the exact check over Q(params) passed
- * @since 0.4
+ * @since 0.3
  */
 public record ParametricCase(List<Constraint> when, List<Constraint> excluded, String substitution, List<ParamMode> modes,
         List<Regime> regimes, List<java.util.Optional<SquareRoot>> scales, List<ParamPiece> pieces, List<String> freeConstants, boolean verified) {

@@ -19,7 +19,7 @@ import java.util.Objects;
  * @param conditions the conditions in the order written
  * @param source the text read
  * @param occurrences where each parameter was written in {@code source}
- * @since 0.4
+ * @since 0.3
  */
 public record ParametricProblem(Domain domain, String function, String variable, List<String> parameters,
         List<ParamFunction> coefficients, int shift, List<ParamTerm> forcing, List<ParamCondition> conditions,

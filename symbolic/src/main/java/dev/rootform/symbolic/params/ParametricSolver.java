@@ -27,7 +27,7 @@ import java.util.Set;
  * the formula is the same in all three (see {@link ParamMode}). Cases that cannot hold under the
  * assumptions are dropped. Every case is checked exactly by {@link ParamVerifier}.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricSolver {
     private static final int MAX_DEPTH = 2;

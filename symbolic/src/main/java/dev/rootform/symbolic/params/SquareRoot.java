@@ -14,7 +14,7 @@ import java.util.Objects;
  *
  * @param outside the part taken out of the root
  * @param inside the square-free part left under it (1 when the whole is a square)
- * @since 0.4
+ * @since 0.3
  */
 public record SquareRoot(ParamFunction outside, ParamFunction inside) {
     public SquareRoot {

@@ -11,7 +11,7 @@ import java.util.Objects;
  * @param criterion the test used: Routh–Hurwitz or Schur–Cohn / Jury
  * @param verdict whether the equation is stable always, never, or under {@code conditions}
  * @param conditions all must hold (empty unless the verdict is {@link Verdict#WHEN})
- * @since 0.4
+ * @since 0.3
  */
 public record StabilityConditions(String criterion, Verdict verdict, List<Constraint> conditions) {
     /** Stable for all parameters allowed, for none, or when the conditions hold. */

@@ -21,7 +21,7 @@ import java.util.regex.Pattern;
  * {@code m y'' + c y' + k y = F cos(w t); y(0) = x0; y'(0) = 0} with parameters
  * {@code m, c, k, F, w, x0}. Conditions of a differential equation are taken at t = 0.
  *
- * @since 0.4
+ * @since 0.3
  */
 public final class ParametricParser {
     private static final Pattern IDENTIFIER = Pattern.compile("[A-Za-z][A-Za-z0-9]*");
