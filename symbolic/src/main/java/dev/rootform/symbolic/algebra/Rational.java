@@ -124,12 +124,13 @@ public final class Rational implements Comparable<Rational> {
             return new Rational(numerator.multiply(other.denominator).add(other.numerator.multiply(denominator)),
                     denominator.multiply(other.denominator));
         }
-        BigInteger t = numerator.multiply(other.denominator.divide(d1)).add(other.numerator.multiply(denominator.divide(d1)));
+        BigInteger b = quotient(denominator, d1);
+        BigInteger t = numerator.multiply(quotient(other.denominator, d1)).add(other.numerator.multiply(b));
         if (t.signum() == 0) {
             return ZERO;
         }
         BigInteger d2 = gcd(t, d1);
-        return new Rational(quotient(t, d2), denominator.divide(d1).multiply(quotient(other.denominator, d2)));
+        return new Rational(quotient(t, d2), b.multiply(quotient(other.denominator, d2)));
     }
 
     public Rational subtract(Rational other) {
@@ -182,9 +183,12 @@ public final class Rational implements Comparable<Rational> {
         return BigInteger.valueOf(x << shift);
     }
 
-    /** x/g for a divisor g of x; x itself when g is 1. */
+    /** x/g for a divisor g of x: x itself when g is 1, in {@code long}s when x fits in one. */
     private static BigInteger quotient(BigInteger x, BigInteger g) {
-        return g.equals(BigInteger.ONE) ? x : x.divide(g);
+        if (g.equals(BigInteger.ONE)) {
+            return x;
+        }
+        return x.bitLength() < 63 ? BigInteger.valueOf(x.longValue() / g.longValue()) : x.divide(g);
     }
 
     public Rational multiply(long factor) {
