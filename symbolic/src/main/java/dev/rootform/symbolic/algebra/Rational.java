@@ -261,9 +261,15 @@ public final class Rational implements Comparable<Rational> {
 
     /**
      * The nearest double, through 40 significant digits (so a rational that is a double, such as the
-     * exact value of an input, converts back to exactly that double).
+     * exact value of an input, converts back to exactly that double). When numerator and denominator
+     * both have at most 53 bits they are exact doubles and their quotient is one correctly rounded
+     * division: the same double (a quotient with such a denominator lies at least about 2^-106
+     * relative from the midpoint of two doubles, or on a double, so the 40 digits never round across).
      */
     public double doubleValue() {
+        if (numerator.bitLength() <= 53 && denominator.bitLength() <= 53) {
+            return numerator.doubleValue() / denominator.doubleValue();
+        }
         return toBigDecimal(DOUBLE_ROUNDING).doubleValue();
     }
 

@@ -57,6 +57,21 @@ class RationalArithmeticTest {
     }
 
     @Test
+    void doubleOfSmallTermsIsTheDecimalRoundingsDouble() {
+        // one double division against rounding through BigDecimal at 40 digits (common practice), numerators and
+        // denominators up to 53 bits, dyadic denominators among them
+        Random random = new Random(29);
+        for (int i = 0; i < CASES; i++) {
+            long p = random.nextLong() >> (11 + random.nextInt(52));
+            long q = i % 4 == 0 ? 1L << random.nextInt(53) : Math.max(1, (random.nextLong() >>> (11 + random.nextInt(52))));
+            Rational r = Rational.of(p, q);
+            double expected = new java.math.BigDecimal(r.numerator()).divide(new java.math.BigDecimal(r.denominator()),
+                    new java.math.MathContext(40)).doubleValue();
+            assertEquals(expected, r.doubleValue(), r.toString());
+        }
+    }
+
+    @Test
     void divisionByZeroIsRefused() {
         assertThrows(ArithmeticException.class, () -> Rational.ONE.divide(Rational.ZERO));
     }
