@@ -31,6 +31,13 @@ public final class ModeSum {
     record Mode(Apcomplex weight, int power, Apcomplex rate) {
     }
 
+    /**
+     * Digits of the largest mode's magnitude in {@link #valueAndLargest}: it sizes the agreement floor
+     * and the next working precision, never the value.
+     */
+    static final int SIZE_DIGITS = 12;
+    private static final Apfloat SHRINK = new Apfloat("0.999999999", SIZE_DIGITS);
+
     private final Rational origin;
     private final List<Mode> modes;
     private final long precision;
@@ -165,16 +172,29 @@ public final class ModeSum {
         return new DoubleModes(origin, modes);
     }
 
-    /** The value at t and the largest magnitude of one mode there (to size cancellation). */
+    /**
+     * The value at t and the largest magnitude of one mode there, to {@link #SIZE_DIGITS} digits and
+     * never above it (to size cancellation).
+     */
     Apfloat[] valueAndLargest(Rational t) {
         Apcomplex sum = Apcomplex.ZERO;
         Apfloat largest = Apfloat.ZERO;
         for (Apcomplex term : terms(0, Decimals.toApfloat(t, precision))) {
             sum = sum.add(term);
-            Apfloat size = org.apfloat.ApcomplexMath.abs(term);
+            Apfloat size = magnitude(term);
             largest = size.compareTo(largest) > 0 ? size : largest;
         }
         return new Apfloat[] {sum.real(), largest};
+    }
+
+    /**
+     * |z| to {@link #SIZE_DIGITS} digits and rounded down: the parts cut to that many digits, their
+     * modulus taken there and shrunk by 10^-9 relative, so it never exceeds |z| (the agreement floor
+     * of {@link WorkingPrecision#agree} that it sets is never looser than with the full modulus).
+     */
+    private static Apfloat magnitude(Apcomplex z) {
+        Apcomplex cut = new Apcomplex(z.real().precision(SIZE_DIGITS), z.imag().precision(SIZE_DIGITS));
+        return org.apfloat.ApcomplexMath.abs(cut).multiply(SHRINK);
     }
 
     /** w·D^d(u^p e^{zu}) for every mode. */

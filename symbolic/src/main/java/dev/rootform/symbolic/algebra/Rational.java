@@ -41,11 +41,11 @@ public final class Rational implements Comparable<Rational> {
         if (numerator.signum() == 0) {
             return ZERO;
         }
-        BigInteger g = numerator.gcd(denominator);
+        BigInteger g = gcd(numerator, denominator);
         if (denominator.signum() < 0) {
             g = g.negate();
         }
-        return new Rational(numerator.divide(g), denominator.divide(g));
+        return new Rational(quotient(numerator, g), quotient(denominator, g));
     }
 
     public static Rational of(BigInteger integer) {
@@ -119,17 +119,18 @@ public final class Rational implements Comparable<Rational> {
         if (other.isZero()) {
             return this;
         }
-        BigInteger d1 = denominator.gcd(other.denominator);
+        BigInteger d1 = gcd(denominator, other.denominator);
         if (d1.equals(BigInteger.ONE)) {
             return new Rational(numerator.multiply(other.denominator).add(other.numerator.multiply(denominator)),
                     denominator.multiply(other.denominator));
         }
-        BigInteger t = numerator.multiply(other.denominator.divide(d1)).add(other.numerator.multiply(denominator.divide(d1)));
+        BigInteger b = quotient(denominator, d1);
+        BigInteger t = numerator.multiply(quotient(other.denominator, d1)).add(other.numerator.multiply(b));
         if (t.signum() == 0) {
             return ZERO;
         }
-        BigInteger d2 = t.gcd(d1);
-        return new Rational(t.divide(d2), denominator.divide(d1).multiply(other.denominator.divide(d2)));
+        BigInteger d2 = gcd(t, d1);
+        return new Rational(quotient(t, d2), b.multiply(quotient(other.denominator, d2)));
     }
 
     public Rational subtract(Rational other) {
@@ -148,10 +149,46 @@ public final class Rational implements Comparable<Rational> {
         if (denominator.equals(BigInteger.ONE) && other.denominator.equals(BigInteger.ONE)) {
             return new Rational(numerator.multiply(other.numerator), BigInteger.ONE);
         }
-        BigInteger g1 = numerator.gcd(other.denominator);
-        BigInteger g2 = other.numerator.gcd(denominator);
-        return new Rational(numerator.divide(g1).multiply(other.numerator.divide(g2)),
-                denominator.divide(g2).multiply(other.denominator.divide(g1)));
+        BigInteger g1 = gcd(numerator, other.denominator);
+        BigInteger g2 = gcd(other.numerator, denominator);
+        return new Rational(quotient(numerator, g1).multiply(quotient(other.numerator, g2)),
+                quotient(denominator, g2).multiply(quotient(other.denominator, g1)));
+    }
+
+    /**
+     * gcd(|a|, |b|), by Stein's binary algorithm on {@code long}s when both fit in 62 bits (Knuth,
+     * TAOCP vol. 2, §4.5.2, Algorithm B): {@link BigInteger#gcd} builds mutable copies of both
+     * operands even for one-word numbers, and most gcds here are of such numbers.
+     */
+    static BigInteger gcd(BigInteger a, BigInteger b) {
+        if (a.bitLength() >= 63 || b.bitLength() >= 63) {
+            return a.gcd(b);
+        }
+        long x = Math.abs(a.longValue());
+        long y = Math.abs(b.longValue());
+        if (x == 0 || y == 0) {
+            return BigInteger.valueOf(x | y);
+        }
+        int shift = Long.numberOfTrailingZeros(x | y);
+        x >>= Long.numberOfTrailingZeros(x);
+        while (y != 0) {
+            y >>= Long.numberOfTrailingZeros(y);
+            if (x > y) {
+                long t = x;
+                x = y;
+                y = t;
+            }
+            y -= x;
+        }
+        return BigInteger.valueOf(x << shift);
+    }
+
+    /** x/g for a divisor g of x: x itself when g is 1, in {@code long}s when x fits in one. */
+    private static BigInteger quotient(BigInteger x, BigInteger g) {
+        if (g.equals(BigInteger.ONE)) {
+            return x;
+        }
+        return x.bitLength() < 63 ? BigInteger.valueOf(x.longValue() / g.longValue()) : x.divide(g);
     }
 
     public Rational multiply(long factor) {
@@ -224,9 +261,15 @@ public final class Rational implements Comparable<Rational> {
 
     /**
      * The nearest double, through 40 significant digits (so a rational that is a double, such as the
-     * exact value of an input, converts back to exactly that double).
+     * exact value of an input, converts back to exactly that double). When numerator and denominator
+     * both have at most 53 bits they are exact doubles and their quotient is one correctly rounded
+     * division: the same double (a quotient with such a denominator lies at least about 2^-106
+     * relative from the midpoint of two doubles, or on a double, so the 40 digits never round across).
      */
     public double doubleValue() {
+        if (numerator.bitLength() <= 53 && denominator.bitLength() <= 53) {
+            return numerator.doubleValue() / denominator.doubleValue();
+        }
         return toBigDecimal(DOUBLE_ROUNDING).doubleValue();
     }
 

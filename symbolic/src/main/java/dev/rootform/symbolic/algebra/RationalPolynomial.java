@@ -160,7 +160,7 @@ public final class RationalPolynomial {
         Rational[] q = new Rational[qLength];
         Arrays.fill(q, Rational.ZERO);
         for (int i = coefficients.length - 1; i >= dd; i--) {
-            Rational c = rem[i].divide(lead);
+            Rational c = lead.isOne() ? rem[i] : rem[i].divide(lead);
             q[i - dd] = c;
             if (c.isZero()) {
                 continue;

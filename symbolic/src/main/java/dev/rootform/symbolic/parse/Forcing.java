@@ -16,9 +16,24 @@ import java.util.Optional;
  * The factor π^q only lives inside the argument of sin and cos while it is being read.
  */
 final class Forcing {
-    /** The shape of one term; the coefficient is kept apart so that like terms add up. */
+    /**
+     * The shape of one term; the coefficient is kept apart so that like terms add up. Equality and
+     * hash are written out: the generic ones of a record were a tenth of reading a typical problem.
+     */
     record Key(int power, Rational exponential, Oscillation oscillation, Rational frequency, boolean timesPi,
-            int piPower) { }
+            int piPower) {
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Key k && power == k.power && piPower == k.piPower && timesPi == k.timesPi
+                    && oscillation == k.oscillation && exponential.equals(k.exponential) && frequency.equals(k.frequency);
+        }
+
+        @Override
+        public int hashCode() {
+            return ((((power * 31 + piPower) * 31 + (timesPi ? 1 : 0)) * 31 + oscillation.ordinal()) * 31
+                    + exponential.hashCode()) * 31 + frequency.hashCode();
+        }
+    }
 
     /** A term that is linear in the variable: slope·v + intercept, all times π when {@code timesPi}. */
     record Linear(Rational slope, Rational intercept, boolean timesPi) { }

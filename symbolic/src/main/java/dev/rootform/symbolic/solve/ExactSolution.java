@@ -3,9 +3,12 @@ package dev.rootform.symbolic.solve;
 import dev.rootform.symbolic.algebra.NumberField;
 import dev.rootform.symbolic.algebra.Rational;
 import dev.rootform.symbolic.algebra.RationalPolynomial;
+import dev.rootform.symbolic.algebra.TraceForm;
 import dev.rootform.symbolic.model.Domain;
 import dev.rootform.symbolic.model.LinearEquation;
 import dev.rootform.symbolic.work.Deadline;
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 
@@ -88,8 +91,47 @@ public record ExactSolution(LinearEquation equation, ForcingPart forcingPart, Ra
     }
 
     /**
+     * x[origin], x[origin + 1], …, x[origin + count − 1] exactly, as {@link #valueAt} gives them one
+     * by one: per component α^n is carried from one index to the next by one multiplication by α,
+     * and each Tr(c_j·α^n) comes from the {@link TraceForm} of c_j.
+     *
+     * @throws IllegalArgumentException if this is a differential equation or count &lt; 0
+     */
+    public List<Rational> valuesFromOrigin(int count) {
+        if (domain() != Domain.DIFFERENCE || count < 0) {
+            throw new IllegalArgumentException("valuesFromOrigin needs a difference equation and count >= 0");
+        }
+        long first = origin.toBigInteger().longValueExact();
+        Rational[] sums = new Rational[count];
+        int listed = (int) Math.max(0, Math.min(count, validFrom - first));
+        for (int i = 0; i < count; i++) {
+            sums[i] = i < listed ? leadingValues.get(i) : Rational.ZERO;
+        }
+        if (listed == count) {
+            return List.of(sums);
+        }
+        for (Component c : components) {
+            NumberField k = new NumberField(c.factor().polynomial());
+            List<TraceForm> forms = forms(k, c);
+            RationalPolynomial power = k.pow(k.generator(), first + listed);
+            for (int i = listed; i < count; i++) {
+                Deadline.checkCurrent();
+                Rational n = Rational.of(first + i);
+                Rational v = Rational.ZERO;
+                for (int j = forms.size() - 1; j >= 0; j--) {
+                    v = v.multiply(n).add(forms.get(j).at(power));
+                }
+                sums[i] = sums[i].add(v);
+                power = k.timesGenerator(power);
+            }
+        }
+        return List.of(sums);
+    }
+
+    /**
      * y(origin), y'(origin), …, y^(count−1)(origin) exactly, as {@link #derivativeAtOrigin} gives
-     * them one by one, with the powers of each factor's root built up once.
+     * them one by one: the powers of each factor's root are built up once, by multiplications by
+     * α, and each Tr(c_i·α^j) comes from the {@link TraceForm} of c_i.
      *
      * @throws IllegalArgumentException if this is a difference equation or count &lt; 0
      */
@@ -98,19 +140,34 @@ public record ExactSolution(LinearEquation equation, ForcingPart forcingPart, Ra
             throw new IllegalArgumentException("derivativesAtOrigin needs a differential equation and count >= 0");
         }
         Rational[] sums = new Rational[count];
-        java.util.Arrays.fill(sums, Rational.ZERO);
+        Arrays.fill(sums, Rational.ZERO);
         for (Component c : components) {
             NumberField k = new NumberField(c.factor().polynomial());
-            List<RationalPolynomial> powers = new java.util.ArrayList<>(count);
+            List<TraceForm> forms = forms(k, c);
+            List<RationalPolynomial> powers = new ArrayList<>(count);
             for (int j = 0; j < count; j++) {
                 Deadline.checkCurrent();
-                powers.add(j == 0 ? RationalPolynomial.ONE : k.multiply(powers.get(j - 1), k.generator()));
+                powers.add(j == 0 ? RationalPolynomial.ONE : k.timesGenerator(powers.get(j - 1)));
             }
             for (int d = 0; d < count; d++) {
-                sums[d] = sums[d].add(k.trace(derivative(k, c, d, powers::get)));
+                Deadline.checkCurrent();
+                Rational falling = Rational.ONE;
+                for (int i = 0; i < forms.size() && i <= d; i++) {
+                    sums[d] = sums[d].add(forms.get(i).at(powers.get(d - i)).multiply(falling));
+                    falling = falling.multiply(d - i);
+                }
             }
         }
         return List.of(sums);
+    }
+
+    /** The trace forms of the component's coefficients c_0, c_1, … in k. */
+    private static List<TraceForm> forms(NumberField k, Component c) {
+        List<TraceForm> forms = new ArrayList<>(c.coefficients().size());
+        for (RationalPolynomial p : c.coefficients()) {
+            forms.add(TraceForm.of(k, p));
+        }
+        return forms;
     }
 
     /** Σ_{i≤d} c_i·d!/(d−i)!·α^{d−i} in Q(α) for one component, α^j from {@code power}. */

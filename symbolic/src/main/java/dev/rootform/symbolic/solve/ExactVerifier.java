@@ -39,6 +39,8 @@ final class ExactVerifier {
     static final int MAX_ITERATION = 400;
     /** Extra points at which L y - g is checked beyond the deg A that prove it. */
     static final int EXTRA_RESIDUAL_POINTS = 10;
+    /** Indices past the first whose sequence values are computed in one walk rather than one by one. */
+    static final int WALK = 2 * MAX_ITERATION;
 
     private ExactVerifier() {
     }
@@ -114,7 +116,29 @@ final class ExactVerifier {
 
     /** x[n] (difference) or y^(n)(t0) (differential), exactly. */
     private static LongFunction<Rational> value(ExactSolution s) {
-        return s.domain() == Domain.DIFFERENCE ? s::valueAt : derivatives(s);
+        return s.domain() == Domain.DIFFERENCE ? sequence(s) : derivatives(s);
+    }
+
+    /**
+     * x[n] from {@link ExactSolution#valuesFromOrigin} for the indices the checks walk through (within
+     * {@link #WALK} of the first), first the k + {@link #REFERENCE_TERMS} that the iteration compares,
+     * then runs twice as long as the last when more are asked for; {@link ExactSolution#valueAt} for
+     * an index beyond (a condition far out).
+     */
+    private static LongFunction<Rational> sequence(ExactSolution s) {
+        AtomicReference<List<Rational>> known = new AtomicReference<>(List.of());
+        long first = first(s);
+        long least = s.equation().order() + REFERENCE_TERMS;
+        return n -> {
+            long i = n - first;
+            if (i < 0 || i >= WALK) {
+                return s.valueAt(n);
+            }
+            if (i >= known.get().size()) {
+                known.set(s.valuesFromOrigin(Math.toIntExact(Math.min(WALK, Math.max(i + 1, Math.max(least, 2L * known.get().size()))))));
+            }
+            return known.get().get(Math.toIntExact(i));
+        };
     }
 
     /**
@@ -149,29 +173,28 @@ final class ExactVerifier {
     /** Applies Σ a_j L^j to Σ_i c_i v^i·(e^{αv} or α^v) in K[v] and tests for zero. */
     static boolean annihilates(Domain domain, List<Rational> operator, Component component) {
         NumberField k = new NumberField(component.factor().polynomial());
-        RationalPolynomial alpha = k.generator();
         List<RationalPolynomial> current = component.coefficients();
         List<RationalPolynomial> total = scale(current, operator.get(0));
         for (int j = 1; j < operator.size(); j++) {
             Deadline.checkCurrent();
-            current = domain == Domain.DIFFERENTIAL ? differentiate(k, alpha, current) : shift(k, alpha, current);
+            current = domain == Domain.DIFFERENTIAL ? differentiate(k, current) : shift(k, current);
             total = add(total, scale(current, operator.get(j)));
         }
         return total.stream().allMatch(RationalPolynomial::isZero);
     }
 
     /** D(C(v)e^{αv}) = (C'(v) + αC(v))e^{αv}. */
-    private static List<RationalPolynomial> differentiate(NumberField k, RationalPolynomial alpha, List<RationalPolynomial> c) {
+    private static List<RationalPolynomial> differentiate(NumberField k, List<RationalPolynomial> c) {
         List<RationalPolynomial> r = new ArrayList<>(c.size());
         for (int i = 0; i < c.size(); i++) {
             RationalPolynomial d = i + 1 < c.size() ? c.get(i + 1).multiply(Rational.of(i + 1)) : RationalPolynomial.ZERO;
-            r.add(d.add(k.multiply(alpha, c.get(i))));
+            r.add(d.add(k.timesGenerator(c.get(i))));
         }
         return r;
     }
 
     /** E(C(n)α^n) = α·C(n+1)·α^n. */
-    private static List<RationalPolynomial> shift(NumberField k, RationalPolynomial alpha, List<RationalPolynomial> c) {
+    private static List<RationalPolynomial> shift(NumberField k, List<RationalPolynomial> c) {
         List<RationalPolynomial> r = new ArrayList<>(c.size());
         for (int l = 0; l < c.size(); l++) {
             RationalPolynomial s = RationalPolynomial.ZERO;
@@ -180,7 +203,7 @@ final class ExactVerifier {
                 s = s.add(c.get(i).multiply(binomial));
                 binomial = binomial.multiply(Rational.of(i + 1, i + 1 - l));
             }
-            r.add(k.multiply(alpha, s));
+            r.add(k.timesGenerator(s));
         }
         return r;
     }

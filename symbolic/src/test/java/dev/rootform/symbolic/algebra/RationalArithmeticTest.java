@@ -40,6 +40,38 @@ class RationalArithmeticTest {
     }
 
     @Test
+    void gcdInWordsAgreesWithBigIntegers() {
+        // the one-word fast path against BigInteger.gcd (common practice), at and around the 62-bit boundary
+        Random random = new Random(23);
+        long[] edges = {0, 1, 2, 3, (1L << 62) - 1, 1L << 61, (1L << 61) * 3 / 2, 1L << 62, Long.MAX_VALUE};
+        for (int i = 0; i < CASES; i++) {
+            BigInteger a = BigInteger.valueOf(i < 81 ? edges[i % 9] : random.nextLong() >> random.nextInt(63)).negate();
+            BigInteger b = BigInteger.valueOf(i < 81 ? edges[i / 9] : random.nextLong() >> random.nextInt(63));
+            if (i % 5 == 0) {
+                BigInteger common = BigInteger.valueOf(1 + random.nextInt(1 << 20));
+                a = a.multiply(common);
+                b = b.multiply(common);
+            }
+            assertEquals(a.gcd(b), Rational.gcd(a, b), "gcd(" + a + ", " + b + ")");
+        }
+    }
+
+    @Test
+    void doubleOfSmallTermsIsTheDecimalRoundingsDouble() {
+        // one double division against rounding through BigDecimal at 40 digits (common practice), numerators and
+        // denominators up to 53 bits, dyadic denominators among them
+        Random random = new Random(29);
+        for (int i = 0; i < CASES; i++) {
+            long p = random.nextLong() >> (11 + random.nextInt(52));
+            long q = i % 4 == 0 ? 1L << random.nextInt(53) : Math.max(1, (random.nextLong() >>> (11 + random.nextInt(52))));
+            Rational r = Rational.of(p, q);
+            double expected = new java.math.BigDecimal(r.numerator()).divide(new java.math.BigDecimal(r.denominator()),
+                    new java.math.MathContext(40)).doubleValue();
+            assertEquals(expected, r.doubleValue(), r.toString());
+        }
+    }
+
+    @Test
     void divisionByZeroIsRefused() {
         assertThrows(ArithmeticException.class, () -> Rational.ONE.divide(Rational.ZERO));
     }

@@ -62,6 +62,46 @@ class ExactSolverTest {
     }
 
     @Test
+    void consecutiveValuesAgreeWithOneByOne() {
+        // F(0..31), OEIS A000045, from the walk (the origin is 0); the walk against valueAt on repeated, irreducible and zero roots (common practice)
+        LinearEquation fib = new LinearEquation(Domain.DIFFERENCE, "x", "n", ints(-1, -1, 1), 0, List.of());
+        List<Rational> f = solve(fib, List.of(at(1, 1), at(2, 1))).valuesFromOrigin(32);
+        assertEquals(List.of(Rational.of(0), Rational.of(1), Rational.of(1), Rational.of(2), Rational.of(3)), f.subList(0, 5));
+        assertEquals(Rational.of(832040), f.get(30));
+        assertEquals(Rational.of(1346269), f.get(31));
+        // χ = λ(λ-2)^3 (λ^3 - λ - 1)(λ^2 + 1), origin -2
+        RationalPolynomial chi = RationalPolynomial.ofIntegers(0, -8, 12, -6, 1)
+                .multiply(RationalPolynomial.ofIntegers(-1, -1, 0, 1)).multiply(RationalPolynomial.ofIntegers(1, 0, 1));
+        LinearEquation eq = new LinearEquation(Domain.DIFFERENCE, "x", "n", chi.coefficients(), 0, List.of());
+        List<Condition> cs = new ArrayList<>();
+        for (int i = 0; i < chi.degree(); i++) {
+            cs.add(at(i - 2, (i * 7 % 5) - 2));
+        }
+        ExactSolution s = solve(eq, cs);
+        List<Rational> walked = s.valuesFromOrigin(60);
+        for (int i = 0; i < walked.size(); i++) {
+            assertEquals(s.valueAt(i - 2), walked.get(i), "x[" + (i - 2) + "]");
+        }
+    }
+
+    @Test
+    void derivativesAtOnceAgreeWithOneByOne() {
+        // (D - 1/2)^2 (D^3 - D - 1) D: every derivative of the batch against the single one (common practice)
+        RationalPolynomial chi = RationalPolynomial.of(Rational.of(-1, 2), Rational.ONE).pow(2)
+                .multiply(RationalPolynomial.ofIntegers(-1, -1, 0, 1)).multiply(RationalPolynomial.X);
+        LinearEquation eq = new LinearEquation(Domain.DIFFERENTIAL, "y", "t", chi.coefficients(), 0, List.of());
+        List<Condition> cs = new ArrayList<>();
+        for (int d = 0; d < chi.degree(); d++) {
+            cs.add(new Condition(d, Rational.ZERO, Rational.of(d % 3 - 1, d + 1)));
+        }
+        ExactSolution s = solve(eq, cs);
+        List<Rational> all = s.derivativesAtOrigin(30);
+        for (int d = 0; d < all.size(); d++) {
+            assertEquals(s.derivativeAtOrigin(d), all.get(d), "derivative " + d);
+        }
+    }
+
+    @Test
     void criticallyDampedOscillator() {
         // y'' + 2y' + y = 0, y(0) = 1, y'(0) = 0 → y = (1 + t)e^{-t} (common practice)
         LinearEquation eq = new LinearEquation(Domain.DIFFERENTIAL, "y", "t", ints(1, 2, 1), 0, List.of());
