@@ -9,13 +9,11 @@ import dev.rootform.export.document.ParametricMathMlRenderer;
 import dev.rootform.export.document.ParametricReport;
 import dev.rootform.export.document.ParametricTextRenderer;
 import dev.rootform.export.html.HtmlRenderer;
-import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.BiFunction;
-import java.util.function.Function;
 
 /**
  * The renderers of an answer with parameters ({@link ParametricReport}) by format name: {@code text},
@@ -34,57 +32,41 @@ import java.util.function.Function;
  * @since 0.3
  */
 public final class ParametricExporters {
-    /** Renders one answer with parameters; stateless and thread-safe. */
-    public interface Renderer {
-        /** Why {@code report} cannot be written in this format, or empty when it can. */
-        default Optional<String> refusal(ParametricReport report) {
-            return Optional.empty();
-        }
-
-        /**
-         * The answer in this format.
-         *
-         * @param names names for generated code; ignored by the document formats
-         * @throws IllegalArgumentException if {@link #refusal} is not empty
-         */
-        Rendering render(ParametricReport report, CodeNames names);
-    }
-
-    private static final Map<String, Renderer> BY_NAME = index(DocumentOptions.defaults());
+    private static final FormatTable<ParametricReport> FORMATS = new FormatTable<>(ParametricExporters::index);
 
     private ParametricExporters() {
     }
 
     /** The renderer of {@code format}, or empty for a name not available with parameters. */
-    public static Optional<Renderer> byName(String format) {
-        return Optional.ofNullable(BY_NAME.get(format));
+    public static Optional<ReportRenderer<ParametricReport>> byName(String format) {
+        return FORMATS.byName(format);
     }
 
     /** The renderer of {@code format}, laid out as {@code options} say (a standalone LaTeX document); empty for a name not available. */
-    public static Optional<Renderer> byName(String format, DocumentOptions options) {
-        return Optional.ofNullable(index(options).get(format));
+    public static Optional<ReportRenderer<ParametricReport>> byName(String format, DocumentOptions options) {
+        return FORMATS.byName(format, options);
     }
 
     /** Every format name available with parameters, in a fixed order, {@code text} first. */
     public static List<String> names() {
-        return List.copyOf(BY_NAME.keySet());
+        return FORMATS.names();
     }
 
-    private static Map<String, Renderer> index(DocumentOptions o) {
-        Map<String, Renderer> map = new LinkedHashMap<>();
-        map.put("text", document(ParametricTextRenderer::render));
-        map.put("json", document(ParametricJsonRenderer::render));
-        map.put("latex", document(o.standalone() ? ParametricLatexRenderer::document : ParametricLatexRenderer::render));
-        map.put("mathml", document(ParametricMathMlRenderer::render));
+    private static Map<String, ReportRenderer<ParametricReport>> index(DocumentOptions o) {
+        Map<String, ReportRenderer<ParametricReport>> map = new LinkedHashMap<>();
+        map.put("text", ReportRenderer.document(ParametricTextRenderer::render));
+        map.put("json", ReportRenderer.document(ParametricJsonRenderer::render));
+        map.put("latex", ReportRenderer.document(o.standalone() ? ParametricLatexRenderer::document : ParametricLatexRenderer::render));
+        map.put("mathml", ReportRenderer.document(ParametricMathMlRenderer::render));
         map.put("html", page(o.withCode()));
         map.put("java", code((r, n) -> ParametricCode.java(r, n.packageName(), n.className())));
         map.put("c", code((r, n) -> ParametricCode.c(r, n.function())));
-        return Collections.unmodifiableMap(map);
+        return map;
     }
 
     /** The report page; it carries no code, so a page with code ({@link DocumentOptions#withCode()}) is refused. */
-    private static Renderer page(Optional<String> code) {
-        return new Renderer() {
+    private static ReportRenderer<ParametricReport> page(Optional<String> code) {
+        return new ReportRenderer<>() {
             @Override
             public Optional<String> refusal(ParametricReport report) {
                 return code.map(language -> "the page of an answer with parameters carries no code: write the " + language
@@ -98,12 +80,8 @@ public final class ParametricExporters {
         };
     }
 
-    private static Renderer document(Function<ParametricReport, String> writer) {
-        return (r, n) -> Rendering.of(writer.apply(r));
-    }
-
-    private static Renderer code(BiFunction<ParametricReport, CodeNames, String> writer) {
-        return new Renderer() {
+    private static ReportRenderer<ParametricReport> code(BiFunction<ParametricReport, CodeNames, String> writer) {
+        return new ReportRenderer<>() {
             @Override
             public Optional<String> refusal(ParametricReport report) {
                 return ParametricCode.refusal(report);

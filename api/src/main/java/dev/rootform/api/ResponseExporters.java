@@ -14,7 +14,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.function.Function;
 
 /**
  * The renderers of a {@link ResponseReport} by format name: {@code text}, {@code json},
@@ -33,60 +32,44 @@ import java.util.function.Function;
  * @since 0.3
  */
 public final class ResponseExporters {
-    /** Renders one response report; stateless and thread-safe. */
-    public interface Renderer {
-        /** Why {@code report} cannot be written in this format, or empty when it can. */
-        default Optional<String> refusal(ResponseReport report) {
-            return Optional.empty();
-        }
-
-        /**
-         * The answer in this format.
-         *
-         * @param names names for generated code; ignored by the document formats
-         * @throws IllegalArgumentException if {@link #refusal} is not empty
-         */
-        Rendering render(ResponseReport report, CodeNames names);
-    }
-
-    private static final Map<String, Renderer> BY_NAME = index(DocumentOptions.defaults());
+    private static final FormatTable<ResponseReport> FORMATS = new FormatTable<>(ResponseExporters::index);
 
     private ResponseExporters() {
     }
 
     /** The renderer of {@code format}, or empty for an unknown name. */
-    public static Optional<Renderer> byName(String format) {
-        return Optional.ofNullable(BY_NAME.get(format));
+    public static Optional<ReportRenderer<ResponseReport>> byName(String format) {
+        return FORMATS.byName(format);
     }
 
     /**
      * The renderer of {@code format}, laid out as {@code options} say (the code on the report page);
      * empty for an unknown name.
      */
-    public static Optional<Renderer> byName(String format, DocumentOptions options) {
-        return Optional.ofNullable(index(options).get(format));
+    public static Optional<ReportRenderer<ResponseReport>> byName(String format, DocumentOptions options) {
+        return FORMATS.byName(format, options);
     }
 
     /** Every format name, in a fixed order. */
     public static List<String> names() {
-        return List.copyOf(BY_NAME.keySet());
+        return FORMATS.names();
     }
 
-    private static Map<String, Renderer> index(DocumentOptions o) {
-        Map<String, Renderer> map = new LinkedHashMap<>();
-        map.put("text", document(ResponseText::render));
-        map.put("json", document(ResponseJson::render));
-        map.put("latex", document(ResponseLatex::render));
-        map.put("mathml", document(ResponseMathMl::render));
+    private static Map<String, ReportRenderer<ResponseReport>> index(DocumentOptions o) {
+        Map<String, ReportRenderer<ResponseReport>> map = new LinkedHashMap<>();
+        map.put("text", ReportRenderer.document(ResponseText::render));
+        map.put("json", ReportRenderer.document(ResponseJson::render));
+        map.put("latex", ReportRenderer.document(ResponseLatex::render));
+        map.put("mathml", ReportRenderer.document(ResponseMathMl::render));
         map.put("html", page(o.withCode()));
         map.put("java", code(Exporters.byName("java").orElseThrow()));
         map.put("c", code(Exporters.byName("c").orElseThrow()));
-        return java.util.Collections.unmodifiableMap(map);
+        return map;
     }
 
     /** The report page, with the code of {@code language} when given (refused as that code format refuses it). */
-    private static Renderer page(Optional<String> language) {
-        return new Renderer() {
+    private static ReportRenderer<ResponseReport> page(Optional<String> language) {
+        return new ReportRenderer<>() {
             @Override
             public Optional<String> refusal(ResponseReport report) {
                 return language.flatMap(l -> Exporters.byName(l).orElseThrow().refusal(report.response()));
@@ -99,13 +82,9 @@ public final class ResponseExporters {
         };
     }
 
-    private static Renderer document(Function<ResponseReport, String> writer) {
-        return (r, n) -> Rendering.of(writer.apply(r));
-    }
-
     /** The solve exporter on the solved problem, its header naming the transfer function. */
-    private static Renderer code(Exporter exporter) {
-        return new Renderer() {
+    private static ReportRenderer<ResponseReport> code(Exporter exporter) {
+        return new ReportRenderer<>() {
             @Override
             public Optional<String> refusal(ResponseReport report) {
                 return exporter.refusal(report.response());

@@ -3,6 +3,7 @@ package dev.rootform.cli;
 import dev.rootform.api.ParametricExporters;
 import dev.rootform.api.ParametricRequest;
 import dev.rootform.api.ParametricResult;
+import dev.rootform.api.ReportRenderer;
 import dev.rootform.api.Result;
 import dev.rootform.api.Rootform;
 import dev.rootform.export.CodeNames;
@@ -23,7 +24,7 @@ final class ParametricOutput {
             throw new InputException("--given is not taken with --params: write the conditions after the equation", "", -1);
         }
         String format = command.out.format;
-        ParametricExporters.Renderer renderer = ParametricExporters.byName(format, command.out.documentOptions())
+        ReportRenderer<ParametricReport> renderer = ParametricExporters.byName(format, command.out.documentOptions())
                 .orElseThrow(() -> new InputException("--format " + format + " is not available with --params ("
                         + String.join(", ", ParametricExporters.names()) + ")", "", -1));
         CodeNames names = command.out.codeNames();

@@ -1,5 +1,6 @@
 package dev.rootform.cli;
 
+import dev.rootform.api.ReportRenderer;
 import dev.rootform.api.ResponseExporters;
 import dev.rootform.api.ResponseRequest;
 import dev.rootform.api.ResponseResult;
@@ -49,7 +50,7 @@ final class ResponseCommand implements Callable<Integer> {
             if (out.documentOptions().standalone()) {
                 throw new InputException("--standalone is not available for a response: its LaTeX is a fragment", "", -1);
             }
-            ResponseExporters.Renderer renderer = ResponseExporters.byName(out.format, out.documentOptions()).orElseThrow(() -> new InputException(
+            ReportRenderer<ResponseReport> renderer = ResponseExporters.byName(out.format, out.documentOptions()).orElseThrow(() -> new InputException(
                     "--format " + out.format + " is not available for a response; use one of "
                             + String.join(", ", ResponseExporters.names()), "", -1));
             List<String> list = frequencies == null ? List.of() : List.of(frequencies.split(",", -1));

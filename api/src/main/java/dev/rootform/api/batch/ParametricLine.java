@@ -3,6 +3,7 @@ package dev.rootform.api.batch;
 import dev.rootform.api.ParametricExporters;
 import dev.rootform.api.ParametricRequest;
 import dev.rootform.api.ParametricResult;
+import dev.rootform.api.ReportRenderer;
 import dev.rootform.api.Result;
 import dev.rootform.api.ResultText;
 import dev.rootform.api.Rootform;
@@ -38,7 +39,7 @@ final class ParametricLine {
             throw new InputException("\"given\" is not taken with \"params\": write the conditions after the equation", "", -1);
         }
         String format = f.text("format").orElse("json");
-        ParametricExporters.Renderer renderer = ParametricExporters.byName(format).orElseThrow(() -> new InputException(
+        ReportRenderer<ParametricReport> renderer = ParametricExporters.byName(format).orElseThrow(() -> new InputException(
                 "\"format\" " + format + " is not available with \"params\" (" + String.join(", ", ParametricExporters.names()) + ")",
                 "", -1));
         if (f.text("header").isPresent()) {
@@ -50,7 +51,7 @@ final class ParametricLine {
         return () -> reply(Rootform.solveWithParameters(request), output, renderer);
     }
 
-    private static Reply reply(ParametricResult result, OutputFields.Output output, ParametricExporters.Renderer renderer) {
+    private static Reply reply(ParametricResult result, OutputFields.Output output, ReportRenderer<ParametricReport> renderer) {
         if (result instanceof ParametricResult.NotSolved n) {
             return new Reply.Failed(ResultText.explain(n.result()), n.result() instanceof Result.OutOfTime ? 1 : 2);
         }

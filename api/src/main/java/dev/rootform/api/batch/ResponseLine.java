@@ -1,5 +1,6 @@
 package dev.rootform.api.batch;
 
+import dev.rootform.api.ReportRenderer;
 import dev.rootform.api.ResponseExporters;
 import dev.rootform.api.ResponseRequest;
 import dev.rootform.api.ResponseResult;
@@ -25,14 +26,14 @@ final class ResponseLine {
         String transfer = f.requiredText("transfer");
         String input = f.text("to").orElse(ResponseRequest.DEFAULT_INPUT);
         OutputFields.Output output = OutputFields.output(f);
-        ResponseExporters.Renderer renderer = ResponseExporters.byName(output.exporter().format()).orElseThrow();
+        ReportRenderer<ResponseReport> renderer = ResponseExporters.byName(output.exporter().format()).orElseThrow();
         ResponseRequest request = ResponseRequest.of(transfer).to(input).frequencies(f.texts("frequencies", true))
                 .with(OutputFields.options(f, defaultTimeLimit, output.code()).plots(output.exporter().format().equals("html"))
                         .build());
         return () -> reply(Rootform.response(request), output, renderer);
     }
 
-    private static Reply reply(ResponseResult result, OutputFields.Output output, ResponseExporters.Renderer renderer) {
+    private static Reply reply(ResponseResult result, OutputFields.Output output, ReportRenderer<ResponseReport> renderer) {
         if (result instanceof ResponseResult.Unanswered u) {
             return output.reply(u.result(), UnaryOperator.identity());
         }
