@@ -94,10 +94,10 @@ public final class Analyzer {
      *     values with all their digits that cannot be given); callers check first
      */
     public Analysis analyze(Solution solution, List<Rational> points) {
-        ValueRequests.refusal(solution, points, allDigits).ifPresent(message -> {
+        RootCache cache = new RootCache();
+        ValueRequests.refusal(solution, points, allDigits, cache).ifPresent(message -> {
             throw new IllegalArgumentException(message);
         });
-        RootCache cache = new RootCache();
         List<RootApproximation> roots = new ArrayList<>();
         for (ExactRoot r : solution.roots()) {
             Deadline.checkCurrent();
@@ -159,10 +159,11 @@ public final class Analyzer {
      * @throws IllegalArgumentException if {@link ValueRequests#refusal} refuses the points
      */
     public List<PointValue> values(Solution solution, List<Rational> points) {
-        ValueRequests.refusal(solution, points, allDigits).ifPresent(message -> {
+        RootCache cache = new RootCache();
+        ValueRequests.refusal(solution, points, allDigits, cache).ifPresent(message -> {
             throw new IllegalArgumentException(message);
         });
-        return valuesOfAnySize(solution, points);
+        return valuesOfAnySize(solution, points, cache);
     }
 
     /**
@@ -177,11 +178,10 @@ public final class Analyzer {
         ValueRequests.refusalOfAnySize(solution, points).ifPresent(message -> {
             throw new IllegalArgumentException(message);
         });
-        return valuesOfAnySize(solution, points);
+        return valuesOfAnySize(solution, points, new RootCache());
     }
 
-    private List<PointValue> valuesOfAnySize(Solution solution, List<Rational> points) {
-        RootCache cache = new RootCache();
+    private List<PointValue> valuesOfAnySize(Solution solution, List<Rational> points, RootCache cache) {
         List<PointValue> values = new ArrayList<>();
         if (solution.hasNumericConstants()) {
             BoundaryValues bvp = BoundaryValues.solve(solution, digits, cache);

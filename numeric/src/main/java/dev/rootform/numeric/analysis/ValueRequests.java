@@ -49,6 +49,11 @@ public final class ValueRequests {
      * @since 0.3
      */
     public static Optional<String> refusal(Solution solution, List<Rational> points, boolean allDigits) {
+        return refusal(solution, points, allDigits, new RootCache());
+    }
+
+    /** {@link #refusal(Solution, List, boolean)}, sizing values with the roots of {@code cache} (an analysis's). */
+    static Optional<String> refusal(Solution solution, List<Rational> points, boolean allDigits, RootCache cache) {
         if (!allDigits || points.isEmpty()) {
             return refusal(solution, points);
         }
@@ -67,7 +72,6 @@ public final class ValueRequests {
             return refused;
         }
         ExactSolution s = solution.exact().get();
-        RootCache cache = new RootCache();
         for (Rational at : points) {
             long n = at.toBigInteger().longValueExact();
             double size = n < s.validFrom() ? 0 : SequenceSum.exactDigits(s, n, cache);
